@@ -1,0 +1,50 @@
+package org.axistack.model;
+
+import java.util.OptionalDouble;
+
+/**
+ * The beam a stack is planned for.
+ *
+ * @param particle   the species
+ * @param energy_eV  kinetic energy where the potential is 0 V, eV, &gt; 0
+ * @param startZ_m   where rays start, m (empty: the stack's left end, chosen by the optics)
+ * @param objectZ_m  axial object point, m (empty: object at infinity, a parallel beam)
+ */
+public record Beam(Particle particle, double energy_eV, OptionalDouble startZ_m, OptionalDouble objectZ_m) {
+
+    public Beam {
+        if (particle == null) {
+            throw new IllegalArgumentException("beam particle is required");
+        }
+        if (!(energy_eV > 0) || !Double.isFinite(energy_eV)) {
+            throw new IllegalArgumentException("beam energy must be positive and finite: " + energy_eV);
+        }
+        startZ_m = startZ_m == null ? OptionalDouble.empty() : startZ_m;
+        objectZ_m = objectZ_m == null ? OptionalDouble.empty() : objectZ_m;
+    }
+
+    public Beam(Particle particle, double energy_eV) {
+        this(particle, energy_eV, OptionalDouble.empty(), OptionalDouble.empty());
+    }
+
+    /** Kinetic energy at 0 V divided by |q|, V: the acceleration potential where phi = 0. */
+    public double energyPerCharge_V() {
+        return energy_eV * Codata2018.ELEMENTARY_CHARGE_C / particle.absCharge_C();
+    }
+
+    public Beam withEnergy_eV(double newEnergy_eV) {
+        return new Beam(particle, newEnergy_eV, startZ_m, objectZ_m);
+    }
+
+    public Beam withParticle(Particle newParticle) {
+        return new Beam(newParticle, energy_eV, startZ_m, objectZ_m);
+    }
+
+    public Beam withObjectZ_m(OptionalDouble newObjectZ_m) {
+        return new Beam(particle, energy_eV, startZ_m, newObjectZ_m);
+    }
+
+    public Beam withStartZ_m(OptionalDouble newStartZ_m) {
+        return new Beam(particle, energy_eV, newStartZ_m, objectZ_m);
+    }
+}

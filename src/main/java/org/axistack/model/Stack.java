@@ -1,0 +1,130 @@
+package org.axistack.model;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+/**
+ * A validated electrode stack and the beam planned through it. SI units throughout.
+ *
+ * @param title      free text
+ * @param beam       the beam
+ * @param electrodes at least one electrode, unique names
+ * @param screenZ_m  optional observation plane
+ * @param mesh       boundary-element mesh settings
+ * @param limits     surface-field limits for breakdown warnings
+ */
+public record Stack(String title, Beam beam, List<Electrode> electrodes, OptionalDouble screenZ_m,
+        MeshSettings mesh, SurfaceFieldLimits limits) {
+
+    public Stack {
+        title = title == null ? "" : title;
+        if (beam == null) {
+            throw new IllegalArgumentException("a stack needs a beam");
+        }
+        electrodes = List.copyOf(electrodes);
+        if (electrodes.isEmpty()) {
+            throw new IllegalArgumentException("a stack needs at least one electrode");
+        }
+        Set<String> names = new HashSet<>();
+        for (Electrode e : electrodes) {
+            if (!names.add(e.name())) {
+                throw new IllegalArgumentException("duplicate electrode name '" + e.name() + "'");
+            }
+        }
+        screenZ_m = screenZ_m == null ? OptionalDouble.empty() : screenZ_m;
+        mesh = mesh == null ? MeshSettings.defaults() : mesh;
+        limits = limits == null ? SurfaceFieldLimits.defaults() : limits;
+    }
+
+    public Stack(String title, Beam beam, List<Electrode> electrodes) {
+        this(title, beam, electrodes, OptionalDouble.empty(), MeshSettings.defaults(), SurfaceFieldLimits.defaults());
+    }
+
+    public int indexOf(String electrodeName) {
+        for (int i = 0; i < electrodes.size(); i++) {
+            if (electrodes.get(i).name().equals(electrodeName)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    public Electrode electrode(String electrodeName) {
+        int i = indexOf(electrodeName);
+        if (i < 0) {
+            throw new IllegalArgumentException("no electrode named '" + electrodeName + "'");
+        }
+        return electrodes.get(i);
+    }
+
+    /** Biases in electrode order, volts. */
+    public double[] biases_V() {
+        return electrodes.stream().mapToDouble(Electrode::bias_V).toArray();
+    }
+
+    public List<String> names() {
+        return electrodes.stream().map(Electrode::name).toList();
+    }
+
+    public Stack withBias(String electrodeName, double bias_V) {
+        return withBiases(Map.of(electrodeName, bias_V));
+    }
+
+    public Stack withBiases(Map<String, Double> biases_V) {
+        List<Electrode> list = new ArrayList<>();
+        for (Electrode e : electrodes) {
+            Double b = biases_V.get(e.name());
+            list.add(b == null ? e : e.withBias_V(b));
+        }
+        for (String n : biases_V.keySet()) {
+            electrode(n);
+        }
+        return new Stack(title, beam, list, screenZ_m, mesh, limits);
+    }
+
+    public Stack withBiases(double[] biases_V) {
+        if (biases_V.length != electrodes.size()) {
+            throw new IllegalArgumentException("need " + electrodes.size() + " biases, got " + biases_V.length);
+        }
+        List<Electrode> list = new ArrayList<>();
+        for (int i = 0; i < biases_V.length; i++) {
+            list.add(electrodes.get(i).withBias_V(biases_V[i]));
+        }
+        return new Stack(title, beam, list, screenZ_m, mesh, limits);
+    }
+
+    public Stack withBeam(Beam newBeam) {
+        return new Stack(title, newBeam, electrodes, screenZ_m, mesh, limits);
+    }
+
+    public Stack withMesh(MeshSettings newMesh) {
+        return new Stack(title, beam, electrodes, screenZ_m, newMesh, limits);
+    }
+
+    public Stack withLimits(SurfaceFieldLimits newLimits) {
+        return new Stack(title, beam, electrodes, screenZ_m, mesh, newLimits);
+    }
+
+    public Stack withScreenZ_m(OptionalDouble z) {
+        return new Stack(title, beam, electrodes, z, mesh, limits);
+    }
+
+    /** Leftmost z of any electrode, m. */
+    public double minZ_m() {
+        return electrodes.stream().mapToDouble(e -> e.contour().minZ_m()).min().orElseThrow();
+    }
+
+    /** Rightmost z of any electrode, m. */
+    public double maxZ_m() {
+        return electrodes.stream().mapToDouble(e -> e.contour().maxZ_m()).max().orElseThrow();
+    }
+
+    /** Smallest radius any electrode reaches (the narrowest bore), m; 0 if an electrode crosses the axis. */
+    public double minBore_m() {
+        return electrodes.stream().mapToDouble(e -> e.contour().minR_m()).min().orElseThrow();
+    }
+}

@@ -1,0 +1,24 @@
+package org.axistack.model;
+
+/**
+ * Electrode surface-field limits for vacuum breakdown warnings, V/m. Common practice, no single source:
+ * polished electrodes in good vacuum are usually kept below about 5 kV/mm for comfort, and 10 kV/mm is
+ * aggressive. User settings, not constants of nature.
+ *
+ * @param comfort_V_per_m    above this a warning is given
+ * @param aggressive_V_per_m above this the design is flagged as likely to break down
+ */
+public record SurfaceFieldLimits(double comfort_V_per_m, double aggressive_V_per_m) {
+    public static final double DEFAULT_COMFORT_V_PER_M = 5e6;
+    public static final double DEFAULT_AGGRESSIVE_V_PER_M = 10e6;
+
+    public SurfaceFieldLimits {
+        if (!(comfort_V_per_m > 0) || !(aggressive_V_per_m >= comfort_V_per_m) || !Double.isFinite(aggressive_V_per_m)) {
+            throw new IllegalArgumentException("surface field limits need 0 < comfort <= aggressive");
+        }
+    }
+
+    public static SurfaceFieldLimits defaults() {
+        return new SurfaceFieldLimits(DEFAULT_COMFORT_V_PER_M, DEFAULT_AGGRESSIVE_V_PER_M);
+    }
+}
