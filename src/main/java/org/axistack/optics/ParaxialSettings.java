@@ -1,0 +1,46 @@
+package org.axistack.optics;
+
+/**
+ * Numerical settings of the paraxial optics. Immutable; vary with the {@code withX} methods.
+ *
+ * @param relativeTolerance  relative local error of the Dormand-Prince 8(5,3) integration (default 1e-12)
+ * @param fieldFreeFraction  a plane counts as field-free when, from there outward, (|U'| + L|U''|)/U stays
+ *                           below this fraction of its peak (L the scan step) (default 1e-10)
+ * @param scanPoints         samples of the axis used to find the lens and the field-free planes (default 600)
+ * @param planeCheckFraction the planes are moved inward by this fraction of their distance to the lens
+ *                           centre to measure how much the result depends on them (default 0.1)
+ */
+public record ParaxialSettings(double relativeTolerance, double fieldFreeFraction, int scanPoints,
+        double planeCheckFraction) {
+
+    public ParaxialSettings {
+        if (!(relativeTolerance > 0 && relativeTolerance < 1e-3)) {
+            throw new IllegalArgumentException("relative tolerance must be in (0, 1e-3): " + relativeTolerance);
+        }
+        if (!(fieldFreeFraction > 0 && fieldFreeFraction < 1)) {
+            throw new IllegalArgumentException("field-free fraction must be in (0, 1): " + fieldFreeFraction);
+        }
+        if (scanPoints < 20) {
+            throw new IllegalArgumentException("at least 20 scan points are needed: " + scanPoints);
+        }
+        if (!(planeCheckFraction > 0 && planeCheckFraction < 0.5)) {
+            throw new IllegalArgumentException("plane check fraction must be in (0, 0.5): " + planeCheckFraction);
+        }
+    }
+
+    public static ParaxialSettings defaults() {
+        return new ParaxialSettings(1e-12, 1e-10, 600, 0.1);
+    }
+
+    public ParaxialSettings withRelativeTolerance(double tol) {
+        return new ParaxialSettings(tol, fieldFreeFraction, scanPoints, planeCheckFraction);
+    }
+
+    public ParaxialSettings withFieldFreeFraction(double fraction) {
+        return new ParaxialSettings(relativeTolerance, fraction, scanPoints, planeCheckFraction);
+    }
+
+    public ParaxialSettings withScanPoints(int n) {
+        return new ParaxialSettings(relativeTolerance, fieldFreeFraction, n, planeCheckFraction);
+    }
+}
