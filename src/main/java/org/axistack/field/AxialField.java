@@ -7,7 +7,7 @@ package org.axistack.field;
 public interface AxialField {
 
     /** Highest derivative order every implementation supports. */
-    int MAX_ORDER = 8;
+    int MAX_ORDER = 16;
 
     /**
      * Axial potential and derivatives at z.

@@ -1,0 +1,144 @@
+package org.axistack.field;
+
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.stream.IntStream;
+
+import org.axistack.mesh.BoundaryMesh;
+import org.axistack.mesh.Mesher;
+import org.axistack.mesh.Panel;
+import org.axistack.model.Electrode;
+import org.axistack.model.MeshSettings;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.CommonOps_DDRM;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.linsol.LinearSolverDense;
+
+/**
+ * Boundary-element (surface-charge) solver for axially symmetric conductors held at fixed potentials:
+ * the first-kind integral equation phi(x) = (1/pi) Int sigma'(s) r(s) K(m)/rho_plus ds = V_electrode on
+ * every conductor surface, sigma' = sigma/eps0, discretised by Nystrom collocation at the Gauss nodes of
+ * polynomial panels (e.g. Atkinson, The Numerical Solution of Integral Equations of the Second Kind,
+ * ch. 4; for the axisymmetric ring kernel, the surface-charge method of electron optics as described in
+ * P. W. Hawkes and E. Kasper, Principles of Electron Optics, vol. 1, ch. 13). The dense matrix is
+ * assembled in parallel, LU-factored once with EJML, and solved for one unit-bias right-hand side per
+ * electrode.
+ */
+public final class BemSolver {
+
+    private BemSolver() {
+    }
+
+    /** Bytes of heap needed per unknown squared (matrix, its copy for the residual, solver workspace). */
+    static final double BYTES_PER_N2 = 8 * 2.2;
+
+    /** Largest number of unknowns the current heap can take. */
+    public static int maxUnknownsForHeap() {
+        long max = Runtime.getRuntime().maxMemory();
+        int byHeap = (int) Math.sqrt(0.6 * max / BYTES_PER_N2);
+        return Math.min(byHeap, MeshSettings.MAX_ELEMENTS);
+    }
+
+    /** Meshes and solves. */
+    public static FieldSolution solve(List<Electrode> electrodes, MeshSettings settings, SolveProgress progress) {
+        long t0 = System.nanoTime();
+        BoundaryMesh mesh = Mesher.mesh(electrodes, settings);
+        int n = mesh.size();
+        int limit = maxUnknownsForHeap();
+        if (n > limit) {
+            throw new IllegalArgumentException("the mesh has " + n + " unknowns but this heap supports at most "
+                    + limit + "; lower [mesh] target_elements or start Java with a larger -Xmx");
+        }
+        int ne = electrodes.size();
+        PanelQuadrature quad = new PanelQuadrature(mesh);
+        List<Panel> panels = mesh.panels();
+        PanelQuadrature.Bounds[] bounds = new PanelQuadrature.Bounds[panels.size()];
+        for (int p = 0; p < panels.size(); p++) {
+            bounds[p] = PanelQuadrature.Bounds.of(panels.get(p));
+        }
+        DMatrixRMaj a = new DMatrixRMaj(n, n);
+        double[] data = a.data;
+        int order = mesh.order();
+        double[] w = mesh.nodeWeights();
+        double[] tau = mesh.nodeTau();
+        AtomicInteger done = new AtomicInteger();
+        AtomicBoolean cancelled = new AtomicBoolean();
+        ThreadLocal<PanelQuadrature.Rule> rules = ThreadLocal.withInitial(PanelQuadrature.Rule::new);
+        IntStream.range(0, n).parallel().forEach(i -> {
+            if (cancelled.get()) {
+                return;
+            }
+            double zi = mesh.nodeZ(i);
+            double ri = mesh.nodeR(i);
+            int pi = i / order;
+            PanelQuadrature.Rule rule = rules.get();
+            double[] basis = new double[order];
+            int row = i * n;
+            for (int p = 0; p < panels.size(); p++) {
+                int base = p * order;
+                if (bounds[p].near(zi, ri)) {
+                    Panel pan = panels.get(p);
+                    quad.build(pan, zi, ri, p == pi ? tau[i % order] : Double.NaN, rule);
+                    double[] c = new double[order];
+                    for (int q = 0; q < rule.size; q++) {
+                        quad.basis(rule.t[q], basis);
+                        double k = 0.5 * rule.r[q] * RingKernel.potential(zi, ri, rule.z[q], rule.r[q]) * rule.w[q];
+                        for (int j = 0; j < order; j++) {
+                            c[j] += basis[j] * k;
+                        }
+                    }
+                    for (int j = 0; j < order; j++) {
+                        data[row + base + j] = c[j] * mesh.nodeJacobian(base + j);
+                    }
+                } else {
+                    for (int j = 0; j < order; j++) {
+                        int col = base + j;
+                        double rj = mesh.nodeR(col);
+                        data[row + col] = 0.5 * w[j] * rj * mesh.nodeJacobian(col)
+                                * RingKernel.potential(zi, ri, mesh.nodeZ(col), rj);
+                    }
+                }
+            }
+            int d = done.incrementAndGet();
+            if (d % 64 == 0 && !progress.update("assembling " + n + " unknowns", 0.7 * d / n)) {
+                cancelled.set(true);
+            }
+        });
+        if (cancelled.get()) {
+            throw new CancellationException("field solve cancelled");
+        }
+        double assembleSeconds = (System.nanoTime() - t0) * 1e-9;
+        DMatrixRMaj rhs = new DMatrixRMaj(n, ne);
+        for (int i = 0; i < n; i++) {
+            rhs.set(i, mesh.electrodeOf(i), 1.0);
+        }
+        DMatrixRMaj copy = a.copy();
+        if (!progress.update("factoring", 0.7)) {
+            throw new CancellationException("field solve cancelled");
+        }
+        LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.lu(n);
+        if (!solver.setA(a)) {
+            throw new IllegalStateException("the collocation matrix is singular: check for electrodes that coincide");
+        }
+        DMatrixRMaj x = new DMatrixRMaj(n, ne);
+        solver.solve(rhs, x);
+        progress.update("checking residual", 0.95);
+        DMatrixRMaj check = new DMatrixRMaj(n, ne);
+        CommonOps_DDRM.mult(copy, x, check);
+        double residual = 0;
+        for (int i = 0; i < check.data.length; i++) {
+            residual = Math.max(residual, Math.abs(check.data[i] - rhs.data[i]));
+        }
+        double[][] unit = new double[ne][n];
+        for (int e = 0; e < ne; e++) {
+            for (int i = 0; i < n; i++) {
+                unit[e][i] = x.get(i, e);
+            }
+        }
+        double seconds = (System.nanoTime() - t0) * 1e-9;
+        progress.update("done", 1.0);
+        return new FieldSolution(electrodes, mesh, quad, bounds, unit, residual, seconds, assembleSeconds);
+    }
+}

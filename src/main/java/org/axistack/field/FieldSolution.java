@@ -1,0 +1,138 @@
+package org.axistack.field;
+
+import java.util.List;
+
+import org.axistack.mesh.BoundaryMesh;
+import org.axistack.model.Codata2018;
+import org.axistack.model.Electrode;
+
+/**
+ * The solved stack: one unit-bias surface-charge solution per electrode on a fixed mesh. By linearity any
+ * bias set is a weighted sum of these, so re-biasing ({@link #withBiases}) never solves again. Immutable
+ * and thread-safe.
+ */
+public final class FieldSolution {
+
+    private final List<Electrode> electrodes;
+    private final BoundaryMesh mesh;
+    private final PanelQuadrature quad;
+    private final PanelQuadrature.Bounds[] bounds;
+    /** sigma/eps0 (V/m) at every node, one row per unit-biased electrode. */
+    private final double[][] unitDensity;
+    /** Node ring strengths lambda_j = Q_j/(4 pi eps0) (V m), one row per unit-biased electrode. */
+    private final double[][] unitStrength;
+    private final double residual;
+    private final double solveSeconds;
+    private final double assembleSeconds;
+    private final double[][] capacitance;
+
+    FieldSolution(List<Electrode> electrodes, BoundaryMesh mesh, PanelQuadrature quad, PanelQuadrature.Bounds[] bounds,
+            double[][] unitDensity, double residual, double solveSeconds, double assembleSeconds) {
+        this.electrodes = List.copyOf(electrodes);
+        this.mesh = mesh;
+        this.quad = quad;
+        this.bounds = bounds;
+        this.unitDensity = unitDensity;
+        this.residual = residual;
+        this.solveSeconds = solveSeconds;
+        this.assembleSeconds = assembleSeconds;
+        int ne = electrodes.size();
+        int n = mesh.size();
+        unitStrength = new double[ne][n];
+        for (int e = 0; e < ne; e++) {
+            for (int j = 0; j < n; j++) {
+                unitStrength[e][j] = 0.5 * mesh.nodeWeight(j) * mesh.nodeJacobian(j) * mesh.nodeR(j) * unitDensity[e][j];
+            }
+        }
+        capacitance = new double[ne][ne];
+        double fourPiEps0 = 4 * Math.PI * Codata2018.EPSILON0_F_PER_M;
+        for (int k = 0; k < ne; k++) {
+            for (int j = 0; j < n; j++) {
+                capacitance[mesh.electrodeOf(j)][k] += fourPiEps0 * unitStrength[k][j];
+            }
+        }
+    }
+
+    /** The field for the electrodes' own biases. */
+    public BiasedField biased() {
+        return withBiases(electrodes.stream().mapToDouble(Electrode::bias_V).toArray());
+    }
+
+    /** The field for the given biases (volts, electrode order), by superposition of the unit solutions. */
+    public BiasedField withBiases(double[] biases_V) {
+        if (biases_V.length != electrodes.size()) {
+            throw new IllegalArgumentException("need " + electrodes.size() + " biases, got " + biases_V.length);
+        }
+        int n = mesh.size();
+        double[] strength = new double[n];
+        double[] density = new double[n];
+        for (int e = 0; e < biases_V.length; e++) {
+            double b = biases_V[e];
+            if (b == 0) {
+                continue;
+            }
+            double[] us = unitStrength[e];
+            double[] ud = unitDensity[e];
+            for (int j = 0; j < n; j++) {
+                strength[j] += b * us[j];
+                density[j] += b * ud[j];
+            }
+        }
+        return new BiasedField(this, biases_V.clone(), strength, density);
+    }
+
+    public List<Electrode> electrodes() {
+        return electrodes;
+    }
+
+    public BoundaryMesh mesh() {
+        return mesh;
+    }
+
+    PanelQuadrature quadrature() {
+        return quad;
+    }
+
+    PanelQuadrature.Bounds bounds(int panel) {
+        return bounds[panel];
+    }
+
+    /** Number of unknowns (boundary-element nodes). */
+    public int unknowns() {
+        return mesh.size();
+    }
+
+    /**
+     * Largest deviation of the collocation equations from their right-hand side over all unit solves,
+     * volts per volt of bias (a measure of the linear solve, not of the discretisation).
+     */
+    public double residual() {
+        return residual;
+    }
+
+    /** Wall-clock seconds for mesh, assembly, factorisation and unit solves. */
+    public double solveSeconds() {
+        return solveSeconds;
+    }
+
+    public double assembleSeconds() {
+        return assembleSeconds;
+    }
+
+    /**
+     * Capacitance matrix, F: entry [i][j] is the charge on electrode i per volt on electrode j, all others at
+     * 0 V (potential 0 at infinity).
+     */
+    public double[][] capacitanceMatrix_F() {
+        double[][] c = new double[capacitance.length][];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = capacitance[i].clone();
+        }
+        return c;
+    }
+
+    /** sigma/eps0 at node j for unit bias on electrode e, V/m. */
+    double unitDensity(int e, int j) {
+        return unitDensity[e][j];
+    }
+}

@@ -1,0 +1,222 @@
+package org.axistack.mesh;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.axistack.model.Contour;
+import org.axistack.model.Electrode;
+import org.axistack.model.MeshSettings;
+import org.axistack.model.Segment;
+import org.axistack.model.ZR;
+import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
+import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
+
+/**
+ * Cuts electrode outlines into panels. Panel size is uniform away from singular points and halves
+ * geometrically toward every free sheet edge and every corner (charge density grows there like
+ * d^beta, beta = pi/theta - 1 for an exterior angle theta: -1/2 at a thin edge, -1/3 at a right-angle
+ * corner; J. D. Jackson, Classical Electrodynamics, 3rd ed., sec. 2.11). The panel touching a singular
+ * point gets the power map of {@link Panel}; the uniform size is chosen so that the total number of
+ * nodes meets the settings' target.
+ */
+public final class Mesher {
+
+    /** Collocation nodes per panel (Gauss-Legendre order). */
+    public static final int ORDER = 8;
+    /** Tangent turn (radians) above which a vertex counts as a corner. */
+    private static final double CORNER_TURN = 0.02;
+
+    private Mesher() {
+    }
+
+    /** Meshes the outlines of the given electrodes. */
+    public static BoundaryMesh mesh(List<Electrode> electrodes, MeshSettings settings) {
+        List<SegPlan> plans = new ArrayList<>();
+        double totalLength = 0;
+        for (int e = 0; e < electrodes.size(); e++) {
+            Contour c = electrodes.get(e).contour();
+            totalLength += c.length_m();
+            plans.addAll(plan(c, e, electrodes.get(e).name()));
+        }
+        for (SegPlan p : plans) {
+            if (p.segment.length_m() < 1e-9 * totalLength) {
+                throw new IllegalArgumentException("electrode '" + p.name + "' has a segment of length "
+                        + p.segment.length_m() + " m, too short to mesh (degenerate element); remove or merge it");
+            }
+        }
+        int levels = settings.edgeLevels();
+        int targetPanels = Math.max(1, settings.targetElements() / ORDER);
+        // Bisection on the uniform panel size h (panel count decreases with h).
+        double lo = totalLength * 1e-7, hi = totalLength;
+        for (int it = 0; it < 80; it++) {
+            double mid = Math.sqrt(lo * hi);
+            if (countPanels(plans, mid, levels) > targetPanels) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        double h = hi;
+        List<Panel> panels = new ArrayList<>();
+        for (SegPlan p : plans) {
+            cut(p, h, levels, panels);
+        }
+        GaussIntegrator gauss = new GaussIntegratorFactory().legendre(ORDER, 0, 1);
+        double[] tau = new double[ORDER];
+        double[] w = new double[ORDER];
+        for (int j = 0; j < ORDER; j++) {
+            tau[j] = gauss.getPoint(j);
+            w[j] = gauss.getWeight(j);
+        }
+        return new BoundaryMesh(panels, ORDER, electrodes.size(), tau, w);
+    }
+
+    /** Per-segment plan: where the singular ends are and their exponents. */
+    private record SegPlan(Segment segment, int electrode, int contour, String name, boolean sheet, boolean gradeStart,
+            boolean gradeEnd, double betaStart, double betaEnd) {
+    }
+
+    private static List<SegPlan> plan(Contour c, int electrode, String name) {
+        List<Segment> segs = c.segments();
+        int n = segs.size();
+        boolean sheet = c.isSheet();
+        double orientation = Math.signum(signedArea(c));
+        boolean[] gradeS = new boolean[n], gradeE = new boolean[n];
+        double[] betaS = new double[n], betaE = new double[n];
+        // Interior vertices (and the closing vertex of closed contours).
+        int vertices = c.closed() ? n : n - 1;
+        for (int v = 0; v < vertices; v++) {
+            Segment in = segs.get(v);
+            Segment out = segs.get((v + 1) % n);
+            double turn = turn(in, out);
+            if (Math.abs(turn) < CORNER_TURN) {
+                continue;
+            }
+            double theta = sheet ? Math.PI + Math.abs(turn) : Math.PI + orientation * turn;
+            double beta = Math.PI / theta - 1;
+            gradeE[v] = true;
+            betaE[v] = beta;
+            gradeS[(v + 1) % n] = true;
+            betaS[(v + 1) % n] = beta;
+        }
+        if (!c.closed()) {
+            ZR first = segs.get(0).start();
+            ZR last = segs.get(n - 1).end();
+            if (!c.onAxis(first)) {
+                gradeS[0] = true;
+                betaS[0] = -0.5;
+            }
+            if (!c.onAxis(last)) {
+                gradeE[n - 1] = true;
+                betaE[n - 1] = -0.5;
+            }
+        }
+        int contourId = electrode;
+        List<SegPlan> out = new ArrayList<>();
+        for (int k = 0; k < n; k++) {
+            out.add(new SegPlan(segs.get(k), electrode, contourId, name, sheet, gradeS[k], gradeE[k], betaS[k], betaE[k]));
+        }
+        return out;
+    }
+
+    /** Signed turn angle (radians) from the end tangent of one segment to the start tangent of the next. */
+    private static double turn(Segment in, Segment out) {
+        double[] a = in.derivative(1);
+        double[] b = out.derivative(0);
+        double cross = a[0] * b[1] - a[1] * b[0];
+        double dot = a[0] * b[0] + a[1] * b[1];
+        return Math.atan2(cross, dot);
+    }
+
+    /** Signed area in the (z, r) plane of the contour closed along the axis if open (positive: counter-clockwise). */
+    private static double signedArea(Contour c) {
+        List<ZR> pts = new ArrayList<>();
+        for (Segment s : c.segments()) {
+            for (int k = 0; k < 64; k++) {
+                pts.add(s.at(k / 64.0));
+            }
+        }
+        pts.add(c.segments().get(c.segments().size() - 1).end());
+        double a = 0;
+        for (int i = 0; i < pts.size(); i++) {
+            ZR p = pts.get(i);
+            ZR q = pts.get((i + 1) % pts.size());
+            a += p.z_m() * q.r_m() - q.z_m() * p.r_m();
+        }
+        return a / 2;
+    }
+
+    private static int countPanels(List<SegPlan> plans, double h, int levels) {
+        List<Panel> sink = new ArrayList<>();
+        int count = 0;
+        for (SegPlan p : plans) {
+            sink.clear();
+            cut(p, h, levels, sink);
+            count += sink.size();
+        }
+        return count;
+    }
+
+    /** Cuts one segment into panels (appends to out). */
+    private static void cut(SegPlan p, double h, int levels, List<Panel> out) {
+        double len = p.segment.length_m();
+        int ends = (p.gradeStart ? 1 : 0) + (p.gradeEnd ? 1 : 0);
+        double g = ends == 0 ? 0 : Math.min(h, len / (ends == 2 ? 3 : 2));
+        List<double[]> pieces = new ArrayList<>(); // [s0, s1, singularEnd, power]
+        double s = 0;
+        if (p.gradeStart) {
+            s = graded(pieces, 0, g, levels, true, p.betaStart);
+        }
+        double midEnd = p.gradeEnd ? len - g : len;
+        double mid = midEnd - s;
+        if (mid > 1e-14 * len) {
+            int k = Math.max(1, (int) Math.ceil(mid / h - 1e-9));
+            for (int i = 0; i < k; i++) {
+                pieces.add(new double[] {s + mid * i / k, s + mid * (i + 1) / k, 0, 1});
+            }
+        }
+        if (p.gradeEnd) {
+            graded(pieces, len - g, len, levels, false, p.betaEnd);
+        }
+        for (double[] q : pieces) {
+            int singular = (int) q[2];
+            out.add(new Panel(p.electrode, p.segment, q[0] / len, q[1] / len, singular, q[3], p.sheet, p.contour));
+        }
+    }
+
+    /**
+     * Geometric panels over [a, b] toward the singular end (a if atStart). Returns the end of the graded
+     * zone away from the singular point.
+     */
+    private static double graded(List<double[]> pieces, double a, double b, int levels, boolean atStart, double beta) {
+        double g = b - a;
+        double[] sizes = new double[levels + 1];
+        // Sizes from the singular point outward: g/2^L, g/2^L, g/2^(L-1), ..., g/2.
+        sizes[0] = g / Math.pow(2, levels);
+        for (int k = 1; k <= levels; k++) {
+            sizes[k] = g / Math.pow(2, levels - k + 1);
+        }
+        if (levels == 0) {
+            sizes[0] = g;
+        }
+        double power = beta < -0.01 ? 1 / (1 + beta) : 1;
+        if (atStart) {
+            double s = a;
+            for (int k = 0; k < sizes.length; k++) {
+                boolean singular = k == 0 && power > 1;
+                pieces.add(new double[] {s, s + sizes[k], singular ? -1 : 0, singular ? power : 1});
+                s += sizes[k];
+            }
+            return b;
+        }
+        double s = b;
+        List<double[]> rev = new ArrayList<>();
+        for (int k = 0; k < sizes.length; k++) {
+            boolean singular = k == 0 && power > 1;
+            rev.add(0, new double[] {s - sizes[k], s, singular ? 1 : 0, singular ? power : 1});
+            s -= sizes[k];
+        }
+        pieces.addAll(rev);
+        return a;
+    }
+}
