@@ -125,6 +125,20 @@ public final class BiasedField implements Field, AxialField {
         }
     }
 
+    /**
+     * Distance from (z, r) to the nearest electrode surface, m (from panel bounding circles: a lower bound,
+     * exact to within a panel's sagitta). The near-axis series converges inside this distance.
+     */
+    public double clearance_m(double z_m, double r_m) {
+        double best = Double.POSITIVE_INFINITY;
+        int panels = solution.mesh().panels().size();
+        for (int p = 0; p < panels; p++) {
+            PanelQuadrature.Bounds b = solution.bounds(p);
+            best = Math.min(best, Math.hypot(z_m - b.zc(), r_m - b.rc()) - b.radius());
+        }
+        return Math.max(best, 0);
+    }
+
     /** Charge on each electrode, C. */
     public double[] charges_C() {
         BoundaryMesh mesh = solution.mesh();

@@ -64,48 +64,76 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
         }
     }
 
-    /** A circular arc from start through via to end (three distinct, non-collinear points). */
-    record Arc(ZR start, ZR via, ZR end) implements Segment {
-        public Arc {
+    /**
+     * A circular arc from start through via to end (three distinct, non-collinear points). Immutable value
+     * class (not a record, so that the centre and angles are computed once).
+     */
+    final class Arc implements Segment {
+        private final ZR start;
+        private final ZR via;
+        private final ZR end;
+        private final double zc;
+        private final double rc;
+        private final double radius;
+        private final double angle0;
+        private final double sweep;
+
+        public Arc(ZR start, ZR via, ZR end) {
             double cross = (via.z_m() - start.z_m()) * (end.r_m() - start.r_m())
                     - (via.r_m() - start.r_m()) * (end.z_m() - start.z_m());
             double scale = Math.max(start.distanceTo(via), via.distanceTo(end));
             if (!(Math.abs(cross) > 1e-12 * scale * scale)) {
                 throw new IllegalArgumentException("arc points are collinear or coincide: " + start + ", " + via + ", " + end);
             }
-        }
-
-        /** Centre of the circle through the three points. */
-        public ZR centre() {
+            this.start = start;
+            this.via = via;
+            this.end = end;
             double ax = start.z_m(), ay = start.r_m(), bx = via.z_m(), by = via.r_m(), cx = end.z_m(), cy = end.r_m();
             double d = 2 * (ax * (by - cy) + bx * (cy - ay) + cx * (ay - by));
             double a2 = ax * ax + ay * ay, b2 = bx * bx + by * by, c2 = cx * cx + cy * cy;
-            double ux = (a2 * (by - cy) + b2 * (cy - ay) + c2 * (ay - by)) / d;
-            double uy = (a2 * (cx - bx) + b2 * (ax - cx) + c2 * (bx - ax)) / d;
-            return new ZR(ux, uy);
-        }
-
-        public double radius_m() {
-            return centre().distanceTo(start);
-        }
-
-        private double angle(ZR p, ZR c) {
-            return Math.atan2(p.r_m() - c.r_m(), p.z_m() - c.z_m());
-        }
-
-        /** Start angle and signed sweep (radians) of the arc, going through via. */
-        private double[] angles() {
-            ZR c = centre();
-            double a0 = angle(start, c), a1 = angle(via, c), a2 = angle(end, c);
-            double sweepToEnd = normalise(a2 - a0);
-            double sweepToVia = normalise(a1 - a0);
-            double sweep = sweepToVia <= sweepToEnd ? sweepToEnd : sweepToEnd - 2 * Math.PI;
-            return new double[] {a0, sweep};
+            zc = (a2 * (by - cy) + b2 * (cy - ay) + c2 * (ay - by)) / d;
+            rc = (a2 * (cx - bx) + b2 * (ax - cx) + c2 * (bx - ax)) / d;
+            radius = Math.hypot(ax - zc, ay - rc);
+            double t0 = Math.atan2(ay - rc, ax - zc);
+            double t1 = Math.atan2(by - rc, bx - zc);
+            double t2 = Math.atan2(cy - rc, cx - zc);
+            double sweepToEnd = normalise(t2 - t0);
+            double sweepToVia = normalise(t1 - t0);
+            angle0 = t0;
+            sweep = sweepToVia <= sweepToEnd ? sweepToEnd : sweepToEnd - 2 * Math.PI;
         }
 
         private static double normalise(double a) {
             double x = a % (2 * Math.PI);
             return x < 0 ? x + 2 * Math.PI : x;
+        }
+
+        @Override
+        public ZR start() {
+            return start;
+        }
+
+        public ZR via() {
+            return via;
+        }
+
+        @Override
+        public ZR end() {
+            return end;
+        }
+
+        /** Centre of the circle through the three points. */
+        public ZR centre() {
+            return new ZR(zc, rc);
+        }
+
+        public double radius_m() {
+            return radius;
+        }
+
+        /** Signed sweep angle from start to end through via, radians. */
+        public double sweep_rad() {
+            return sweep;
         }
 
         @Override
@@ -116,24 +144,19 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
             if (t == 1) {
                 return end;
             }
-            ZR c = centre();
-            double[] a = angles();
-            double rad = radius_m();
-            double th = a[0] + t * a[1];
-            return new ZR(c.z_m() + rad * Math.cos(th), c.r_m() + rad * Math.sin(th));
+            double th = angle0 + t * sweep;
+            return new ZR(zc + radius * Math.cos(th), rc + radius * Math.sin(th));
         }
 
         @Override
         public double[] derivative(double t) {
-            double[] a = angles();
-            double rad = radius_m();
-            double th = a[0] + t * a[1];
-            return new double[] {-rad * Math.sin(th) * a[1], rad * Math.cos(th) * a[1]};
+            double th = angle0 + t * sweep;
+            return new double[] {-radius * Math.sin(th) * sweep, radius * Math.cos(th) * sweep};
         }
 
         @Override
         public double length_m() {
-            return radius_m() * Math.abs(angles()[1]);
+            return radius * Math.abs(sweep);
         }
 
         @Override
@@ -149,6 +172,21 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
         @Override
         public Segment mirrored() {
             return new Arc(start.mirrored(), via.mirrored(), end.mirrored());
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Arc a && a.start.equals(start) && a.via.equals(via) && a.end.equals(end);
+        }
+
+        @Override
+        public int hashCode() {
+            return java.util.Objects.hash(start, via, end);
+        }
+
+        @Override
+        public String toString() {
+            return "Arc[start=" + start + ", via=" + via + ", end=" + end + "]";
         }
     }
 }
