@@ -28,7 +28,9 @@ class AberrationTracingTest {
                 Arguments.of("decelerating einzel bump, proton 5 keV", AnalyticAxialField.gaussian(3000, 4e-3), p, 5000.0),
                 Arguments.of("accelerating einzel bump, electron 20 keV", AnalyticAxialField.gaussian(40000, 4e-3), e, 20000.0),
                 Arguments.of("accelerating immersion, electron 10 keV", AnalyticAxialField.tanhStep(0, 30000, 3e-3), e, 10000.0),
-                Arguments.of("decelerating immersion, proton 10 keV", AnalyticAxialField.tanhStep(0, 6000, 3e-3), p, 10000.0));
+                Arguments.of("decelerating immersion, proton 10 keV", AnalyticAxialField.tanhStep(0, 6000, 3e-3), p, 10000.0),
+                Arguments.of("zero-gap two-tube lens R 5 mm 1:5, electron 5 keV", new TwoTubeBesselField(5e-3, 0, 20000), e, 5000.0),
+                Arguments.of("zero-gap two-tube lens R 5 mm 5:1, proton 25 keV", new TwoTubeBesselField(5e-3, 0, 20000), p, 25000.0));
     }
 
     @ParameterizedTest(name = "{0}")
