@@ -53,25 +53,25 @@ final class AxisScan {
     }
 
     /**
-     * The outermost samples beyond which the field weight stays below fraction x its peak, one sample further
-     * out (clipped to the scanned range): {zStart, zEnd}.
+     * Going outward from the strongest point of the lens, the first samples where the field weight has fallen
+     * below fraction x its peak, one sample further out (clipped to the scanned range): {zStart, zEnd}. Stopping
+     * at the first such point keeps the planes inside long drift tubes instead of running on to the tube mouths.
      */
     double[] fieldFreePlanes(double fraction) {
         double limit = weight[peak] * fraction;
-        int first = 0;
-        while (first < z.length - 1 && weight[first] < limit) {
-            first++;
+        if (!(weight[peak] > 0)) {
+            return new double[] {z[0], z[z.length - 1]}; // no field at all: the whole range is field-free
         }
-        int last = z.length - 1;
-        while (last > 0 && weight[last] < limit) {
-            last--;
+        int last = peak;
+        while (last < z.length - 1 && weight[last] >= limit) {
+            last++;
+        }
+        int first = peak;
+        while (first > 0 && weight[first] >= limit) {
+            first--;
         }
         int i0 = Math.max(0, first - 1);
         int i1 = Math.min(z.length - 1, last + 1);
-        if (i1 <= i0) {
-            // no field at all: the whole range is field-free
-            return new double[] {z[0], z[z.length - 1]};
-        }
         return new double[] {z[i0], z[i1]};
     }
 

@@ -4,6 +4,7 @@ import java.util.OptionalDouble;
 
 import org.axistack.field.AxialField;
 import org.axistack.model.Beam;
+import org.axistack.model.Stack;
 import org.hipparchus.analysis.solvers.BrentSolver;
 import org.hipparchus.ode.DenseOutputModel;
 import org.hipparchus.ode.ODEState;
@@ -61,13 +62,34 @@ public final class ParaxialOptics {
 
     /**
      * Paraxial optics with reference planes chosen automatically inside [zMin, zMax] (normally the stack
-     * extent): from the strongest point of the lens outward to where (|U'| + L|U''|)/U has fallen below
-     * {@link ParaxialSettings#fieldFreeFraction()} of its peak for good. A beam start position, when given,
-     * is used as the object-side plane.
+     * extent, see {@link #searchRange_m(Stack)}): from the strongest point of the lens outward to where
+     * (|U'| + L|U''|)/U first falls below {@link ParaxialSettings#fieldFreeFraction()} of its peak (L the scan
+     * step), so the planes stay inside long drift tubes. A beam start position, when given, is used as the
+     * object-side plane. How much the result still depends on the planes is measured and reported in
+     * {@link CardinalElements#planeSensitivity()}.
      */
     public static ParaxialOptics auto(AxialField field, Beam beam, double zMin_m, double zMax_m) {
         return auto(new AccelerationPotential(field, beam), zMin_m, zMax_m, beam.startZ_m(),
                 ParaxialSettings.defaults());
+    }
+
+    /**
+     * Paraxial optics of a stack's field for the stack's beam, planes chosen automatically within
+     * {@link #searchRange_m(Stack)}.
+     */
+    public static ParaxialOptics of(AxialField field, Stack stack) {
+        double[] range = searchRange_m(stack);
+        return auto(field, stack.beam(), range[0], range[1]);
+    }
+
+    /**
+     * Where the reference planes are searched for a stack: its extent widened by half its length on each side,
+     * so fringe fields outside plate lenses are included (the open-boundary field is valid there); inside long
+     * tubes the search stops at the first field-free point anyway.
+     */
+    public static double[] searchRange_m(Stack stack) {
+        double span = stack.maxZ_m() - stack.minZ_m();
+        return new double[] {stack.minZ_m() - 0.5 * span, stack.maxZ_m() + 0.5 * span};
     }
 
     /** As {@link #auto(AxialField, Beam, double, double)} with explicit potential, start and settings. */

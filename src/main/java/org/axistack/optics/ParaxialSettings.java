@@ -4,8 +4,8 @@ package org.axistack.optics;
  * Numerical settings of the paraxial optics. Immutable; vary with the {@code withX} methods.
  *
  * @param relativeTolerance  relative local error of the Dormand-Prince 8(5,3) integration (default 1e-12)
- * @param fieldFreeFraction  a plane counts as field-free when, from there outward, (|U'| + L|U''|)/U stays
- *                           below this fraction of its peak (L the scan step) (default 1e-10)
+ * @param fieldFreeFraction  going outward from the lens, a plane counts as field-free where (|U'| + L|U''|)/U
+ *                           first falls below this fraction of its peak (L the scan step) (default 1e-10)
  * @param scanPoints         samples of the axis used to find the lens and the field-free planes (default 600)
  * @param planeCheckFraction the planes are moved inward by this fraction of their distance to the lens
  *                           centre to measure how much the result depends on them (default 0.1)
