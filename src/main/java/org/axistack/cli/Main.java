@@ -1,2 +1,94 @@
 package org.axistack.cli;
-public final class Main { public static void main(String[] a){ System.out.println("x"); } }
+
+import java.io.PrintWriter;
+import org.axistack.io.StackInputException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
+
+/**
+ * The {@code axistack} command line. Subcommands are listed in {@link CommandList}. Exit codes: 0
+ * success, 1 a physics outcome the user must act on, 2 bad input or usage, 3 an internal error.
+ */
+@Command(name = "axistack", mixinStandardHelpOptions = true, versionProvider = Version.class,
+        description = {"Electrostatic beam-optics planner for einzel and immersion lenses.",
+            "Run 'axistack plan' for the built-in demo lens, or 'axistack COMMAND --help'."},
+        footer = {"", "Exit codes: 0 ok, 1 physics outcome to act on, 2 bad input or usage, 3 internal error."})
+public final class Main implements Runnable {
+
+    /** Exit code: a physics outcome the user must act on (no focus, reflection, electrode hit...). */
+    public static final int EXIT_PHYSICS = 1;
+    /** Exit code: bad input or bad usage. */
+    public static final int EXIT_INPUT = 2;
+    /** Exit code: an internal error (a bug). */
+    public static final int EXIT_INTERNAL = 3;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the tool with the given streams and returns the exit code (never throws). */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = commandLine();
+        cl.setOut(out);
+        cl.setErr(err);
+        try {
+            return cl.execute(args);
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    /** The configured command line with every subcommand of {@link CommandList}. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Main());
+        for (Object sub : CommandList.commands()) {
+            cl.addSubcommand(sub);
+        }
+        cl.setExecutionExceptionHandler(Main::onExecutionException);
+        cl.setParameterExceptionHandler(Main::onParameterException);
+        cl.setUnmatchedOptionsAllowedAsOptionParameters(true);
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        return cl;
+    }
+
+    private static int onExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parsed) {
+        PrintWriter err = cl.getErr();
+        if (ex instanceof StackInputException s) {
+            err.println("error: " + s.getMessage());
+            return EXIT_INPUT;
+        }
+        if (ex instanceof CommandLine.ParameterException p) {
+            return onParameterException(p, new String[0]);
+        }
+        if (ex instanceof OutcomeException o) {
+            err.println(o.getMessage());
+            return EXIT_PHYSICS;
+        }
+        err.println("internal error: " + ex.getClass().getSimpleName() + ": " + ex.getMessage()
+                + ". This is a bug in axistack; please report it with the command and the stack file."
+                + " Set AXISTACK_DEBUG=1 to print the stack trace.");
+        if (System.getenv("AXISTACK_DEBUG") != null) {
+            ex.printStackTrace(err);
+        }
+        return EXIT_INTERNAL;
+    }
+
+    private static int onParameterException(CommandLine.ParameterException ex, String[] args) {
+        CommandLine cl = ex.getCommandLine();
+        PrintWriter err = cl.getErr();
+        err.println("error: " + ex.getMessage() + ". Fix: see '" + cl.getCommandSpec().qualifiedName() + " --help'.");
+        CommandLine.UnmatchedArgumentException.printSuggestions(ex, err);
+        return EXIT_INPUT;
+    }
+}

@@ -1,0 +1,32 @@
+package org.axistack.io;
+
+/**
+ * Bounds on stack-file input: what the tool accepts before it spends memory or time. Sizes in the
+ * units of the stack file.
+ */
+public final class Limits {
+    /** Largest stack file, bytes (1 MiB); checked before the file is read. */
+    public static final long MAX_FILE_BYTES = 1L << 20;
+    /** Most electrodes in one stack. */
+    public static final int MAX_ELECTRODES = 200;
+    /** Most points in one outline. */
+    public static final int MAX_OUTLINE_POINTS = 500;
+    /** Largest |coordinate| or size, mm (10 m). */
+    public static final double MAX_LENGTH_MM = 10_000.0;
+    /** Smallest non-zero size, mm (1 micrometre). */
+    public static final double MIN_SIZE_MM = 0.001;
+    /** Largest |bias|, V (10 MV). */
+    public static final double MAX_BIAS_V = 1e7;
+    /** Largest kinetic energy, eV (10 GeV). */
+    public static final double MAX_ENERGY_EV = 1e10;
+    /** Ion mass range, u. */
+    public static final double MIN_MASS_U = 1e-4;
+    public static final double MAX_MASS_U = 1e6;
+    /** Largest |charge state|. */
+    public static final int MAX_CHARGE_STATE = 200;
+    /** Largest surface-field limit, V/mm. */
+    public static final double MAX_FIELD_V_PER_MM = 1e6;
+
+    private Limits() {
+    }
+}

@@ -1,0 +1,149 @@
+package org.axistack.io;
+
+import java.util.LinkedHashSet;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * The catalogue of user-facing input error messages: every message the tool prints about a bad
+ * stack file or a bad command-line value comes from here. Each entry has a problem template and a
+ * fix template; placeholders are written {name} and filled by {@link #format(Map)}. Lengths in the
+ * messages are millimetres, potentials volts, energies electronvolts, as in the stack file.
+ */
+public enum StackMessage {
+    FILE_NOT_FOUND("the file does not exist",
+            "check the path, or leave STACK out to use the built-in demo lens"),
+    FILE_UNREADABLE("the file cannot be read ({reason})",
+            "check that the path names a readable file, not a folder, and that you may read it"),
+    FILE_TOO_LARGE("the file is {size} bytes, more than the limit of {limit} bytes",
+            "a stack file is normally a few kilobytes; check that this is the right file, or split the stack"),
+    NOT_UTF8("the file contains bytes that are not UTF-8 text (first bad byte at offset {offset})",
+            "save the file as plain UTF-8 text"),
+    EMPTY_FILE("the file is empty",
+            "copy a stack from lens-library/ and edit it; a stack needs a [beam] table and at least one [[electrode]]"),
+    NOT_TOML("the file is not valid TOML: {detail}",
+            "correct the syntax at that line: keys are written name = value, text in double quotes, tables as [beam] and [[electrode]]"),
+    UNKNOWN_KEY("unknown key '{key}' in {table}{suggestion}",
+            "remove or rename it; the keys allowed here are: {allowed}"),
+    WRONG_TYPE("expected {expected}, found {found}",
+            "write it as {example}"),
+    MISSING_KEY("the required key '{key}' is missing",
+            "add a line such as {key} = {example}"),
+    NOT_FINITE("the value {value} is not a finite number",
+            "write an ordinary number such as {example}"),
+    OUT_OF_RANGE("{value} {unit} is outside the accepted range {min} to {max} {unit}",
+            "give a value within that range ({hint})"),
+    NOT_POSITIVE("the value must be greater than 0 {unit}, found {value}",
+            "give a positive value such as {example}"),
+    NEGATIVE("the value must not be negative, found {value} {unit}",
+            "give 0 for a thin sheet, or a positive thickness such as {example}"),
+    Z_ORDER("z_end_mm ({end} mm) must be greater than z_start_mm ({start} mm)",
+            "swap the two values, or correct the one that is wrong"),
+    HOLE_TOO_LARGE("hole_radius_mm ({hole} mm) must be smaller than outer_radius_mm ({outer} mm)",
+            "make the hole smaller or the plate larger"),
+    WIRE_TOO_THICK("wire_radius_mm ({wire} mm) must be smaller than radius_mm ({radius} mm)",
+            "use a thinner wire or a larger ring"),
+    UNKNOWN_SHAPE("unknown shape '{shape}'{suggestion}",
+            "use one of: tube, aperture, disk, ring, outline"),
+    KEY_NOT_FOR_SHAPE("the key '{key}' does not apply to shape '{shape}'",
+            "remove it; the keys for {shape} are: {allowed}"),
+    UNKNOWN_PARTICLE("unknown particle '{particle}'{suggestion}",
+            "use \"electron\", \"proton\" or \"ion\" (an ion also needs mass_u and charge_state)"),
+    ION_KEY_MISSING("an ion needs '{key}'",
+            "add {key} = {example} to [beam] (mass in unified atomic mass units, charge in units of e)"),
+    ION_KEY_NOT_APPLICABLE("'{key}' applies only to particle = \"ion\", but the particle is '{particle}'",
+            "remove {key}, or set particle = \"ion\""),
+    CHARGE_STATE_ZERO("charge_state is 0: a neutral particle is not steered by electrodes",
+            "give the ion's charge in units of e, for example 1 (or -1 for a negative ion)"),
+    MISSING_BEAM("the file has no [beam] table",
+            "add a [beam] table, for example: [beam] particle = \"electron\", energy_eV = 500.0 (one key per line)"),
+    NO_ELECTRODES("the file has no [[electrode]] table",
+            "add at least one electrode, for example a tube with name, shape, bias_V, radius_mm, z_start_mm and z_end_mm"),
+    TOO_MANY_ELECTRODES("the file has {count} electrodes, more than the limit of {limit}",
+            "a lens stack has a handful of electrodes; merge parts at the same bias into one outline"),
+    TOO_MANY_POINTS("the outline has {count} points, more than the limit of {limit}",
+            "describe the shape with fewer points, using arcs for curved parts"),
+    TOO_FEW_POINTS("the outline has {count} point(s); it needs at least {min}",
+            "list the corners as points_mm = [[z1, r1], [z2, r2], ...]"),
+    DUPLICATE_NAME("the name '{name}' is already used by the electrode at line {other}",
+            "give every electrode its own name (the names are used by --set)"),
+    BLANK_NAME("the electrode name is empty",
+            "give the electrode a short name such as \"focus\""),
+    BAD_POINT("point {index} is not [z, r] or [z, r, via_z, via_r] in millimetres",
+            "write each point as two numbers, or four for an arc through (via_z, via_r)"),
+    NEGATIVE_RADIUS("point {index} has r = {r} mm, below the axis",
+            "the meridian outline lives in r >= 0 (the axis is r = 0); correct the point"),
+    REPEATED_POINT("point {index} repeats the previous point (z = {z} mm, r = {r} mm)",
+            "remove the repeated point"),
+    ARC_COLLINEAR("point {index}: the arc's via point lies on the straight line between its ends",
+            "move the via point off the chord, or write the point as [z, r] for a straight segment"),
+    SELF_CROSSING("the outline crosses or touches itself near z = {z} mm, r = {r} mm",
+            "reorder the points so that the outline goes round the shape once without crossing"),
+    OVERLAP("electrodes '{first}' and '{second}' (line {otherLine}) overlap near z = {z} mm, r = {r} mm",
+            "move them apart, or merge them into one outline electrode if they are one part"),
+    TOUCH("electrodes '{first}' ({firstBias} V) and '{second}' ({secondBias} V, line {otherLine}) touch near z = {z} mm, r = {r} mm while at different biases",
+            "leave an insulating gap between them (lenses usually keep 1 mm or more), or give them the same bias"),
+    MODEL_REJECTED("the values do not describe a valid {what} ({detail})",
+            "check this table's numbers against the stack file format in the README"),
+    LIMITS_ORDER("the aggressive limit ({aggressive} V/mm) is below the comfort limit ({comfort} V/mm)",
+            "make aggressive_surface_field_V_per_mm at least comfort_surface_field_V_per_mm"),
+    SET_SYNTAX("--set '{arg}' is not of the form NAME=VOLTS",
+            "write for example --set focus=-1400"),
+    SET_UNKNOWN_NAME("--set names electrode '{name}', which the stack does not have{suggestion}",
+            "use one of the stack's electrodes: {names}"),
+    SET_BAD_NUMBER("--set {name}={value}: '{value}' is not a finite number of volts",
+            "write a plain number of volts such as --set {name}=-1400"),
+    SET_TWICE("--set gives electrode '{name}' two biases",
+            "give each electrode at most one --set");
+
+    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([a-zA-Z]+)}");
+
+    private final String problem;
+    private final String fix;
+
+    StackMessage(String problem, String fix) {
+        this.problem = problem;
+        this.fix = fix;
+    }
+
+    public String problemTemplate() {
+        return problem;
+    }
+
+    public String fixTemplate() {
+        return fix;
+    }
+
+    /** The placeholder names the two templates use. */
+    public Set<String> placeholders() {
+        Set<String> s = new LinkedHashSet<>();
+        for (String t : new String[] {problem, fix}) {
+            Matcher m = PLACEHOLDER.matcher(t);
+            while (m.find()) {
+                s.add(m.group(1));
+            }
+        }
+        return s;
+    }
+
+    /** "problem. Fix: fix." with the placeholders filled; a missing value is an error in the caller. */
+    public String format(Map<String, ?> values) {
+        return fill(problem, values) + ". Fix: " + fill(fix, values) + ".";
+    }
+
+    private String fill(String template, Map<String, ?> values) {
+        Matcher m = PLACEHOLDER.matcher(template);
+        StringBuilder sb = new StringBuilder();
+        while (m.find()) {
+            String key = m.group(1);
+            if (!values.containsKey(key)) {
+                throw new IllegalArgumentException("message " + name() + " needs a value for {" + key + "}");
+            }
+            m.appendReplacement(sb, Matcher.quoteReplacement(String.valueOf(values.get(key))));
+        }
+        m.appendTail(sb);
+        return sb.toString();
+    }
+}

@@ -1,0 +1,95 @@
+package org.axistack.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javax.imageio.ImageIO;
+import org.axistack.report.SafetyNotice;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class MainTest {
+
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        StringWriter out = new StringWriter(), err = new StringWriter();
+        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void helpOnTheToolAndOnEveryCommand() {
+        Run top = run("--help");
+        assertThat(top.code).isZero();
+        assertThat(top.out).contains("plan").contains("Exit codes");
+        for (String name : Main.commandLine().getSubcommands().keySet()) {
+            Run r = run(name, "--help");
+            assertThat(r.code).as(name).isZero();
+            assertThat(r.out).as(name).contains("Usage:");
+        }
+        assertThat(run().code).isZero();
+    }
+
+    @Test
+    void planWithoutStackRunsTheDemoAndShowsTheCautions() {
+        Run r = run("plan");
+        assertThat(r.code).as(r.err).isZero();
+        assertThat(r.out).contains("Flood-gun einzel lens").contains("focus").contains("-120")
+                .contains(SafetyNotice.TITLE).contains("IEC 61010-1");
+        assertThat(r.err).isEmpty();
+    }
+
+    @Test
+    void setAcceptsNegativeVoltsInBothForms() {
+        Run a = run("plan", "--set", "focus=-1400");
+        Run b = run("plan", "--set=focus=-90");
+        assertThat(a.code).as(a.err).isZero();
+        assertThat(b.code).as(b.err).isZero();
+        assertThat(a.out).containsPattern("focus\\s+tube\\s+-1400");
+        assertThat(b.out).containsPattern("focus\\s+tube\\s+-90");
+    }
+
+    @Test
+    void badSetAndUnknownOptionsExitTwoWithoutATrace() {
+        Run a = run("plan", "--set", "fokus=-1400");
+        assertThat(a.code).isEqualTo(2);
+        assertThat(a.err).contains("did you mean 'focus'?");
+        Run b = run("plan", "--bogus");
+        assertThat(b.code).isEqualTo(2);
+        assertThat(b.err).contains("--bogus").contains("--help");
+        Run c = run("frobnicate");
+        assertThat(c.code).isEqualTo(2);
+        for (Run r : new Run[] {a, b, c}) {
+            assertThat(r.err).doesNotContain("\tat ").doesNotContain("Exception");
+        }
+    }
+
+    @Test
+    void planOutWritesAReadablePngAndAnSvgAndNothingElse(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("report");
+        Run r = run("plan", "--out", out.toString());
+        assertThat(r.code).as(r.err).isZero();
+        var png = ImageIO.read(out.resolve("geometry.png").toFile());
+        assertThat(png.getWidth()).isEqualTo(1200);
+        assertThat(png.getHeight()).isBetween(420, 900);
+        String svg = Files.readString(out.resolve("geometry.svg"));
+        assertThat(svg).startsWith("<?xml").contains("<svg").contains("focus").contains("-120 V");
+        try (var files = Files.list(out)) {
+            assertThat(files.map(p -> p.getFileName().toString()).sorted().toList())
+                    .containsExactly("geometry.png", "geometry.svg");
+        }
+    }
+
+    @Test
+    void outThatIsAFileIsBadUsage(@TempDir Path dir) throws Exception {
+        Path f = Files.writeString(dir.resolve("afile"), "x");
+        Run r = run("plan", "--out", f.toString());
+        assertThat(r.code).isEqualTo(2);
+        assertThat(r.err).contains("not a folder");
+    }
+}

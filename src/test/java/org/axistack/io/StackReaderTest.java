@@ -1,0 +1,136 @@
+package org.axistack.io;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.axistack.model.Codata2018;
+import org.axistack.model.Contour;
+import org.axistack.model.Electrode;
+import org.axistack.model.Segment;
+import org.axistack.model.Stack;
+import org.axistack.model.ZR;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The mapping from stack-file keys (mm, V, eV) to the SI model, and the writer's inverse. */
+class StackReaderTest {
+
+    @Test
+    void convertsMillimetresToMetresAndReadsEveryShape() throws Exception {
+        String text = """
+                title = "all shapes"
+                [beam]
+                particle = "ion"
+                mass_u = 39.962
+                charge_state = -2
+                energy_eV = 3000
+                start_z_mm = -40.0
+                object_z_mm = -80.0
+                [[electrode]]
+                name = "t"
+                shape = "tube"
+                bias_V = 10
+                radius_mm = 5.0
+                z_start_mm = -45.0
+                z_end_mm = -4.0
+                wall_mm = 0.5
+                [[electrode]]
+                name = "ap"
+                shape = "aperture"
+                bias_V = -1400.0
+                z_mm = 20.0
+                hole_radius_mm = 1.0
+                outer_radius_mm = 12.0
+                [[electrode]]
+                name = "d"
+                shape = "disk"
+                bias_V = 0.0
+                z_mm = 40.0
+                radius_mm = 8.0
+                thickness_mm = 1.0
+                [[electrode]]
+                name = "r"
+                shape = "ring"
+                bias_V = 0.0
+                z_mm = 30.0
+                radius_mm = 9.0
+                wire_radius_mm = 0.25
+                [[electrode]]
+                name = "o"
+                shape = "outline"
+                bias_V = 5.0
+                closed = false
+                points_mm = [[0.0, 15.0], [4.0, 15.0], [8.0, 19.0, 6.828427, 16.171573]]
+                [screen]
+                z_mm = 60.0
+                [mesh]
+                target_elements = 900
+                edge_levels = 8
+                [limits]
+                comfort_surface_field_V_per_mm = 4000.0
+                aggressive_surface_field_V_per_mm = 9000.0
+                """;
+        Stack s = StackReader.parse(text, "all.toml");
+        assertThat(s.beam().particle().charge_C()).isEqualTo(-2 * Codata2018.ELEMENTARY_CHARGE_C);
+        assertThat(s.beam().particle().mass_kg()).isEqualTo(39.962 * Codata2018.ATOMIC_MASS_UNIT_KG);
+        assertThat(s.beam().startZ_m().getAsDouble()).isEqualTo(-0.040);
+        assertThat(s.beam().objectZ_m().getAsDouble()).isEqualTo(-0.080);
+        assertThat(s.electrode("t")).isEqualTo(new Electrode.Tube("t", 10, 0.005, -0.045, -0.004, 0.0005));
+        assertThat(s.electrode("ap")).isEqualTo(new Electrode.Aperture("ap", -1400, 0.020, 0.001, 0.012, 0));
+        assertThat(s.electrode("d")).isEqualTo(new Electrode.Disk("d", 0, 0.040, 0.008, 0.001));
+        assertThat(s.electrode("r")).isEqualTo(new Electrode.Ring("r", 0, 0.030, 0.009, 0.00025));
+        Contour c = s.electrode("o").contour();
+        assertThat(c.closed()).isFalse();
+        assertThat(c.segments()).hasSize(2);
+        Segment.Arc arc = (Segment.Arc) c.segments().get(1);
+        // a quarter circle of radius 4 mm centred at (4, 19) mm: centre and radius from the three points
+        assertThat(arc.centre().z_m()).isCloseTo(0.004, within(1e-9));
+        assertThat(arc.centre().r_m()).isCloseTo(0.019, within(1e-9));
+        assertThat(arc.radius_m()).isCloseTo(0.004, within(1e-9));
+        assertThat(s.screenZ_m().getAsDouble()).isEqualTo(0.060);
+        assertThat(s.mesh().targetElements()).isEqualTo(900);
+        assertThat(s.mesh().edgeLevels()).isEqualTo(8);
+        assertThat(s.limits().comfort_V_per_m()).isEqualTo(4e6);
+        assertThat(s.limits().aggressive_V_per_m()).isEqualTo(9e6);
+
+        Stack again = StackReader.parse(StackWriter.toToml(s), "again.toml");
+        assertThat(again).isEqualTo(s);
+    }
+
+    @Test
+    void aClosedOutlineMayEndOnItsFirstPointToCloseWithAnArc() throws Exception {
+        String text = MalformedStacks.replaceB("""
+                shape = "outline"
+                bias_V = 1.0
+                closed = true
+                points_mm = [[8.0, 8.0], [12.0, 8.0], [8.0, 8.0, 10.0, 10.0]]""");
+        Electrode.Outline o = (Electrode.Outline) StackReader.parse(text, "arc.toml").electrode("b");
+        assertThat(o.outline().segments()).hasSize(2);
+        assertThat(o.outline().segments().get(1)).isInstanceOf(Segment.Arc.class);
+        assertThat(o.outline().segments().get(1).end()).isEqualTo(new ZR(0.008, 0.008));
+    }
+
+    @Test
+    void readsUtf8WithByteOrderMarkAndWritesAtomically(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("bom.toml");
+        Files.write(f, ("\uFEFF" + MalformedStacks.BASE.replace("\"t\"", "\"Linse f\u00fcr Ionen \\\"A\\\"\"")).getBytes("UTF-8"));
+        Stack s = StackReader.read(f);
+        assertThat(s.title()).isEqualTo("Linse f\u00fcr Ionen \"A\"");
+        Path out = dir.resolve("sub/written.toml");
+        StackWriter.write(s, out);
+        assertThat(StackReader.read(out)).isEqualTo(s);
+        try (var files = Files.list(out.getParent())) {
+            assertThat(files.map(p -> p.getFileName().toString()).toList()).containsExactly("written.toml");
+        }
+    }
+
+    @Test
+    void writerNumbersKeepFifteenDigits() {
+        assertThat(StackWriter.num(5.0)).isEqualTo("5.0");
+        assertThat(StackWriter.num(-1400)).isEqualTo("-1400.0");
+        assertThat(StackWriter.num(Units.mToMm(Units.mmToM(3.70711)))).isEqualTo("3.70711");
+        assertThat(StackWriter.num(0.1 + 0.2)).isEqualTo("0.3");
+    }
+}

@@ -1,0 +1,73 @@
+package org.axistack.model;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/** Geometry checks against hand-worked plane geometry (distances between axis-parallel rectangles). */
+class GeometryCheckTest {
+
+    private static Electrode tube(String n, double bias, double z0, double z1, double wall) {
+        return new Electrode.Tube(n, bias, 0.005, z0, z1, wall);
+    }
+
+    @Test
+    void separatedTubesAreFineAndTheirGapIsTheAxialDistance() {
+        Electrode a = tube("a", 0, -0.02, -0.001, 0.001), b = tube("b", 100, 0.001, 0.02, 0.001);
+        assertThat(GeometryCheck.check(List.of(a, b))).isEmpty();
+        assertThat(GeometryCheck.gap_m(a, b)).isCloseTo(0.002, within(1e-15));
+    }
+
+    @Test
+    void touchingIsAnErrorOnlyAtDifferentBiases() {
+        Electrode a = tube("a", 0, -0.02, 0.0, 0.001), b = tube("b", 0, 0.0, 0.02, 0.001);
+        assertThat(GeometryCheck.check(List.of(a, b))).isEmpty();
+        List<GeometryCheck.Problem> p = GeometryCheck.check(List.of(a, b.withBias_V(5)));
+        assertThat(p).singleElement().satisfies(q -> assertThat(q.kind()).isEqualTo(GeometryCheck.Kind.TOUCH));
+    }
+
+    @Test
+    void aGapBelowTheToleranceCountsAsTouching() {
+        Electrode a = tube("a", 0, -0.02, 0.0, 0.001), b = tube("b", 1, 0.5e-7, 0.02, 0.001);
+        assertThat(GeometryCheck.check(List.of(a, b))).extracting(GeometryCheck.Problem::kind)
+                .containsExactly(GeometryCheck.Kind.TOUCH);
+        Electrode c = tube("c", 1, 2e-7, 0.02, 0.001);
+        assertThat(GeometryCheck.check(List.of(a, c))).isEmpty();
+    }
+
+    @Test
+    void overlapAndContainmentAreErrorsAtAnyBias() {
+        Electrode a = tube("a", 0, -0.02, 0.005, 0.001), b = tube("b", 0, 0.0, 0.02, 0.001);
+        assertThat(GeometryCheck.check(List.of(a, b))).extracting(GeometryCheck.Problem::kind)
+                .containsExactly(GeometryCheck.Kind.OVERLAP);
+        // a thin ring wholly inside a thick plate: no crossing, but contained
+        Electrode plate = new Electrode.Aperture("p", 0, 0, 0.001, 0.02, 0.004);
+        Electrode ring = new Electrode.Ring("r", 0, 0, 0.01, 0.0005);
+        assertThat(GeometryCheck.check(List.of(plate, ring))).extracting(GeometryCheck.Problem::kind)
+                .containsExactly(GeometryCheck.Kind.OVERLAP);
+        // a sheet crossing a sheet
+        Electrode s1 = new Electrode.Aperture("s1", 0, 0.0, 0.001, 0.02, 0);
+        Electrode s2 = new Electrode.Tube("s2", 0, 0.01, -0.005, 0.005, 0);
+        assertThat(GeometryCheck.check(List.of(s1, s2))).extracting(GeometryCheck.Problem::kind)
+                .containsExactly(GeometryCheck.Kind.OVERLAP);
+    }
+
+    @Test
+    void selfCrossingOutlinesAreFound() {
+        Contour bowTie = Contour.polyline(true, new ZR(0, 0.01), new ZR(0.004, 0.014), new ZR(0.004, 0.01),
+                new ZR(0, 0.014));
+        assertThat(GeometryCheck.check(List.of(new Electrode.Outline("x", 0, bowTie))))
+                .extracting(GeometryCheck.Problem::kind).containsExactly(GeometryCheck.Kind.SELF_CROSSING);
+        Contour folded = Contour.polyline(false, new ZR(0, 0.01), new ZR(0.004, 0.01), new ZR(0.002, 0.01));
+        assertThat(GeometryCheck.check(List.of(new Electrode.Outline("y", 0, folded))))
+                .extracting(GeometryCheck.Problem::kind).containsExactly(GeometryCheck.Kind.SELF_CROSSING);
+        Contour square = Contour.polyline(true, new ZR(0, 0.01), new ZR(0.004, 0.01), new ZR(0.004, 0.014),
+                new ZR(0, 0.014));
+        assertThat(GeometryCheck.check(List.of(new Electrode.Outline("z", 0, square)))).isEmpty();
+        // every built-in shape passes, including the ring made of two arcs
+        assertThat(GeometryCheck.check(List.of(new Electrode.Ring("r", 0, 0, 0.01, 0.0005),
+                new Electrode.Disk("d", 0, 0.01, 0.01, 0.001), new Electrode.Disk("e", 0, 0.02, 0.01, 0)))).isEmpty();
+    }
+}
