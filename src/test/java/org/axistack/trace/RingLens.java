@@ -14,16 +14,21 @@ import org.axistack.model.Electrode;
 record RingLens(RingChargeField field, ElectrodeGeometry geometry, double sign) {
 
     static RingLens standard() {
-        return build(1);
+        return build(1, -400);
+    }
+
+    /** The same geometry with the central ring's own centre potential set to v0 (V). */
+    static RingLens withCentre(double v0_V) {
+        return build(1, v0_V);
     }
 
     RingLens withSign(double s) {
-        return build(s);
+        return build(s, -400);
     }
 
-    private static RingLens build(double s) {
+    private static RingLens build(double s, double v0) {
         double a = 5e-3;
-        double q = s * RingChargeField.chargeForCentrePotential(a, -400);
+        double q = s * RingChargeField.chargeForCentrePotential(a, v0);
         RingChargeField f = new RingChargeField(new double[] {-8e-3, 0, 8e-3}, new double[] {a, a, a},
                 new double[] {-q / 2, q, -q / 2});
         List<Electrode> wires = List.of(new Electrode.Ring("left", 0, -8e-3, a, 0.3e-3),
