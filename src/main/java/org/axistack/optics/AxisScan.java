@@ -53,26 +53,51 @@ final class AxisScan {
     }
 
     /**
-     * Going outward from the strongest point of the lens, the first samples where the field weight has fallen
-     * below fraction x its peak, one sample further out (clipped to the scanned range): {zStart, zEnd}. Stopping
-     * at the first such point keeps the planes inside long drift tubes instead of running on to the tube mouths.
+     * Going outward from the strongest point of the lens on each side: the first sample where the field weight
+     * has fallen below fraction x its peak (one sample further out, clipped to the scanned range); if it never
+     * does, the sample where it is smallest (the most nearly field-free place, e.g. the middle of a short drift
+     * tube whose open mouth leaks field). Stopping there keeps the planes inside drift tubes instead of running
+     * on to the tube mouths. Returns {zStart, zEnd}.
      */
     double[] fieldFreePlanes(double fraction) {
-        double limit = weight[peak] * fraction;
         if (!(weight[peak] > 0)) {
             return new double[] {z[0], z[z.length - 1]}; // no field at all: the whole range is field-free
         }
-        int last = peak;
-        while (last < z.length - 1 && weight[last] >= limit) {
-            last++;
+        double limit = weight[peak] * fraction;
+        int right = z.length - 1;
+        int bestRight = peak;
+        for (int i = peak; i < z.length; i++) {
+            if (weight[i] < limit) {
+                right = Math.min(z.length - 1, i + 1);
+                bestRight = -1;
+                break;
+            }
+            if (weight[i] < weight[bestRight]) {
+                bestRight = i;
+            }
         }
-        int first = peak;
-        while (first > 0 && weight[first] >= limit) {
-            first--;
+        if (bestRight >= 0) {
+            right = bestRight;
         }
-        int i0 = Math.max(0, first - 1);
-        int i1 = Math.min(z.length - 1, last + 1);
-        return new double[] {z[i0], z[i1]};
+        int left = 0;
+        int bestLeft = peak;
+        for (int i = peak; i >= 0; i--) {
+            if (weight[i] < limit) {
+                left = Math.max(0, i - 1);
+                bestLeft = -1;
+                break;
+            }
+            if (weight[i] < weight[bestLeft]) {
+                bestLeft = i;
+            }
+        }
+        if (bestLeft >= 0) {
+            left = bestLeft;
+        }
+        if (right <= left) {
+            return new double[] {z[0], z[z.length - 1]};
+        }
+        return new double[] {z[left], z[right]};
     }
 
     /**

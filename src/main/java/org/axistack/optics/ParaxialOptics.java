@@ -64,7 +64,8 @@ public final class ParaxialOptics {
      * Paraxial optics with reference planes chosen automatically inside [zMin, zMax] (normally the stack
      * extent, see {@link #searchRange_m(Stack)}): from the strongest point of the lens outward to where
      * (|U'| + L|U''|)/U first falls below {@link ParaxialSettings#fieldFreeFraction()} of its peak (L the scan
-     * step), so the planes stay inside long drift tubes. A beam start position, when given, is used as the
+     * step), or, if it never does, to where it is smallest; so the planes stay inside drift tubes rather than
+     * running on to leaky tube mouths. A beam start position, when given, is used as the
      * object-side plane. How much the result still depends on the planes is measured and reported in
      * {@link CardinalElements#planeSensitivity()}.
      */
