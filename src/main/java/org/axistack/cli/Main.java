@@ -55,6 +55,14 @@ public final class Main implements Runnable {
         for (Object sub : CommandList.commands()) {
             cl.addSubcommand(sub);
         }
+        return configure(cl);
+    }
+
+    /**
+     * Applies the tool's conventions to a command line (and its subcommands added so far): bad input
+     * and usage exit 2 with a message and no stack trace; option values may be negative.
+     */
+    static CommandLine configure(CommandLine cl) {
         cl.setExecutionExceptionHandler(Main::onExecutionException);
         cl.setParameterExceptionHandler(Main::onParameterException);
         cl.setUnmatchedOptionsAllowedAsOptionParameters(true);

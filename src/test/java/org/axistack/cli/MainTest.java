@@ -92,4 +92,54 @@ class MainTest {
         assertThat(r.code).isEqualTo(2);
         assertThat(r.err).contains("not a folder");
     }
+
+    @picocli.CommandLine.Command(name = "probe")
+    static final class Probe implements Runnable {
+        @picocli.CommandLine.Option(names = "--axis")
+        String axis;
+        @picocli.CommandLine.Option(names = "--object-z")
+        double objectZ;
+
+        @Override
+        public void run() {
+        }
+    }
+
+    @Test
+    void negativeOptionValuesWorkInBothForms() {
+        for (String[] args : new String[][] {{"--axis", "-15:15:0.5", "--object-z", "-80"},
+            {"--axis=-15:15:0.5", "--object-z=-80"}}) {
+            Probe p = new Probe();
+            picocli.CommandLine cl = Main.configure(new picocli.CommandLine(p));
+            assertThat(cl.execute(args)).isZero();
+            assertThat(p.axis).isEqualTo("-15:15:0.5");
+            assertThat(p.objectZ).isEqualTo(-80.0);
+        }
+    }
+
+    @Test
+    void aPhysicsOutcomeExitsOneAndABugExitsThreeWithoutATrace() {
+        @picocli.CommandLine.Command(name = "x")
+        final class Outcome implements Runnable {
+            @Override
+            public void run() {
+                throw new OutcomeException("no focus between -2000 V and 0 V");
+            }
+        }
+        @picocli.CommandLine.Command(name = "y")
+        final class Bug implements Runnable {
+            @Override
+            public void run() {
+                throw new IllegalStateException("oops");
+            }
+        }
+        StringWriter err = new StringWriter();
+        picocli.CommandLine a = Main.configure(new picocli.CommandLine(new Outcome()));
+        a.setErr(new PrintWriter(err, true));
+        assertThat(a.execute()).isEqualTo(1);
+        picocli.CommandLine b = Main.configure(new picocli.CommandLine(new Bug()));
+        b.setErr(new PrintWriter(err, true));
+        assertThat(b.execute()).isEqualTo(3);
+        assertThat(err.toString()).contains("no focus between").contains("internal error").doesNotContain("\tat ");
+    }
 }
