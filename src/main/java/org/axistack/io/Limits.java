@@ -11,6 +11,8 @@ public final class Limits {
     public static final int MAX_ELECTRODES = 200;
     /** Most points in one outline. */
     public static final int MAX_OUTLINE_POINTS = 500;
+    /** Most outline points in one stack, all outlines together (bounds the geometry checks' work). */
+    public static final int MAX_TOTAL_POINTS = 2000;
     /** Largest |coordinate| or size, mm (10 m). */
     public static final double MAX_LENGTH_MM = 10_000.0;
     /** Smallest non-zero size, mm (1 micrometre). */

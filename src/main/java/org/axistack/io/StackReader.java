@@ -137,8 +137,10 @@ public final class StackReader {
             TomlParseError err = toml.errors().get(0);
             String more = toml.errors().size() > 1 ? " (and " + (toml.errors().size() - 1) + " more errors)" : "";
             int line = err.position() == null ? 0 : err.position().line();
-            throw new StackInputException(StackMessage.NOT_TOML, source, line, null, null,
-                    Map.of("detail", stripPosition(err.getMessage()) + more));
+            String detail = stripPosition(err.getMessage());
+            StackMessage id = detail.contains("too large") ? StackMessage.NUMBER_TOO_LARGE
+                    : detail.contains("previously defined") ? StackMessage.DUPLICATE_KEY : StackMessage.NOT_TOML;
+            throw new StackInputException(id, source, line, null, null, Map.of("detail", detail + more));
         }
         if (toml.isEmpty()) {
             throw new StackInputException(StackMessage.EMPTY_FILE, source, 0, null, null, Map.of());
@@ -292,6 +294,16 @@ public final class StackReader {
         if (arr.size() > Limits.MAX_ELECTRODES) {
             throw new StackInputException(StackMessage.TOO_MANY_ELECTRODES, source, 0, null, null,
                     Map.of("count", arr.size(), "limit", Limits.MAX_ELECTRODES));
+        }
+        long points = 0;
+        for (int i = 0; i < arr.size(); i++) {
+            if (arr.getTable(i).get(List.of("points_mm")) instanceof TomlArray pts) {
+                points += pts.size();
+            }
+        }
+        if (points > Limits.MAX_TOTAL_POINTS) {
+            throw new StackInputException(StackMessage.TOO_MANY_POINTS_TOTAL, source, 0, null, "points_mm",
+                    Map.of("count", points, "limit", Limits.MAX_TOTAL_POINTS));
         }
         List<Electrode> list = new ArrayList<>();
         List<Integer> lines = new ArrayList<>();

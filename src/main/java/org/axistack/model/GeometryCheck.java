@@ -5,7 +5,7 @@ import java.util.List;
 
 /**
  * Pure geometric sanity checks of a stack's meridian outlines: outlines that cross themselves, and
- * electrodes that overlap or touch. Arcs are flattened into short chords (at most 1/24 of the arc);
+ * electrodes that overlap or touch. Arcs are flattened into 16 chords each;
  * segment distances and crossings use the standard orientation (signed-area) tests of computational
  * geometry (de Berg et al., Computational Geometry, 3rd ed., ch. 2). Containment uses the even-odd
  * ray-crossing rule.
@@ -17,6 +17,9 @@ public final class GeometryCheck {
 
     /** Gap below which two surfaces count as touching, m (0.1 micrometre). */
     public static final double TOUCH_TOLERANCE_M = 1e-7;
+
+    /** Chords per arc when flattening (sagitta below 0.5 % of the radius for a half circle). */
+    static final int ARC_PIECES = 16;
 
     /** What is wrong. */
     public enum Kind {
@@ -93,7 +96,7 @@ public final class GeometryCheck {
         ZR s0 = c.segments().get(0).start();
         pts.add(new double[] {s0.z_m(), s0.r_m()});
         for (Segment s : c.segments()) {
-            int n = s instanceof Segment.Arc ? 24 : 1;
+            int n = s instanceof Segment.Arc ? ARC_PIECES : 1;
             for (int k = 1; k <= n; k++) {
                 ZR p = k == n ? s.end() : s.at((double) k / n);
                 pts.add(new double[] {p.z_m(), p.r_m()});
@@ -104,8 +107,16 @@ public final class GeometryCheck {
 
     private static ZR selfCrossing(double[][] p, boolean closed, double tol) {
         int n = p.length - 1; // pieces
-        for (int a = 0; a < n; a++) {
-            for (int b = a + 1; b < n; b++) {
+        int[] order = sortedByMinZ(p);
+        for (int x = 0; x < n; x++) {
+            int a0 = order[x];
+            double zMax = Math.max(p[a0][0], p[a0 + 1][0]) + tol;
+            for (int y = x + 1; y < n; y++) {
+                int b0 = order[y];
+                if (Math.min(p[b0][0], p[b0 + 1][0]) > zMax) {
+                    break;
+                }
+                int a = Math.min(a0, b0), b = Math.max(a0, b0);
                 boolean adjacent = b == a + 1 || (closed && a == 0 && b == n - 1);
                 if (adjacent) {
                     int shared = b == a + 1 ? a + 1 : 0;
@@ -116,15 +127,27 @@ public final class GeometryCheck {
                     }
                     continue;
                 }
-                if (!boxesNear(p[a], p[a + 1], p[b], p[b + 1], tol)) {
-                    continue;
-                }
-                if (segmentDistance(p[a], p[a + 1], p[b], p[b + 1]) <= tol) {
+                if (boxesNear(p[a], p[a + 1], p[b], p[b + 1], tol)
+                        && segmentDistance(p[a], p[a + 1], p[b], p[b + 1]) <= tol) {
                     return new ZR(p[b][0], p[b][1]);
                 }
             }
         }
         return null;
+    }
+
+    /** Piece indices (piece k runs from vertex k to k+1) sorted by their smallest z. */
+    private static int[] sortedByMinZ(double[][] p) {
+        Integer[] idx = new Integer[p.length - 1];
+        for (int k = 0; k < idx.length; k++) {
+            idx[k] = k;
+        }
+        java.util.Arrays.sort(idx, java.util.Comparator.comparingDouble(k -> Math.min(p[k][0], p[k + 1][0])));
+        int[] out = new int[idx.length];
+        for (int k = 0; k < idx.length; k++) {
+            out[k] = idx[k];
+        }
+        return out;
     }
 
     /** Whether the piece from shared to x and the piece from shared to y lie on top of each other. */
@@ -137,10 +160,26 @@ public final class GeometryCheck {
 
     private static Problem pair(List<Electrode> es, List<double[][]> flat, int i, int j, double tol) {
         double[][] a = flat.get(i), b = flat.get(j);
+        double[] ba = bounds(a), bb = bounds(b);
+        if (ba[0] > bb[1] + tol || bb[0] > ba[1] + tol || ba[2] > bb[3] + tol || bb[2] > ba[3] + tol) {
+            return null;
+        }
+        // sweep over both piece lists sorted by smallest z: only pieces whose z ranges meet are compared
+        int[] oa = sortedByMinZ(a), ob = sortedByMinZ(b);
         double minD = Double.POSITIVE_INFINITY;
         ZR where = null;
-        for (int u = 0; u + 1 < a.length; u++) {
-            for (int v = 0; v + 1 < b.length; v++) {
+        int start = 0;
+        for (int u : oa) {
+            double uMin = Math.min(a[u][0], a[u + 1][0]) - tol, uMax = Math.max(a[u][0], a[u + 1][0]) + tol;
+            // a b-piece ending before this a-piece starts also ends before every later one
+            while (start < ob.length && Math.max(b[ob[start]][0], b[ob[start] + 1][0]) < uMin) {
+                start++;
+            }
+            for (int y = start; y < ob.length; y++) {
+                int v = ob[y];
+                if (Math.min(b[v][0], b[v + 1][0]) > uMax) {
+                    break;
+                }
                 if (!boxesNear(a[u], a[u + 1], b[v], b[v + 1], tol)) {
                     continue;
                 }
@@ -154,21 +193,36 @@ public final class GeometryCheck {
                 }
             }
         }
-        ZR inside = insideSolid(es.get(i).contour(), a, b, tol);
+        // without a crossing or a touch, one contour lies wholly inside the other or wholly outside:
+        // one test point decides; when they touch, every vertex and midpoint is tested
+        boolean touching = minD <= tol;
+        ZR inside = insideSolid(es.get(i).contour(), a, b, tol, !touching);
         if (inside == null) {
-            inside = insideSolid(es.get(j).contour(), b, a, tol);
+            inside = insideSolid(es.get(j).contour(), b, a, tol, !touching);
         }
         if (inside != null) {
             return new Problem(Kind.OVERLAP, i, j, inside);
         }
-        if (minD <= tol && es.get(i).bias_V() != es.get(j).bias_V()) {
+        if (touching && es.get(i).bias_V() != es.get(j).bias_V()) {
             return new Problem(Kind.TOUCH, i, j, where);
         }
         return null;
     }
 
+    /** zMin, zMax, rMin, rMax of a vertex list. */
+    private static double[] bounds(double[][] p) {
+        double[] r = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        for (double[] q : p) {
+            r[0] = Math.min(r[0], q[0]);
+            r[1] = Math.max(r[1], q[0]);
+            r[2] = Math.min(r[2], q[1]);
+            r[3] = Math.max(r[3], q[1]);
+        }
+        return r;
+    }
+
     /** A point of {@code other} strictly inside the solid bounded by {@code c}, or null. */
-    private static ZR insideSolid(Contour c, double[][] poly, double[][] other, double tol) {
+    private static ZR insideSolid(Contour c, double[][] poly, double[][] other, double tol, boolean onePoint) {
         if (c.isSheet()) {
             return null;
         }
@@ -183,8 +237,13 @@ public final class GeometryCheck {
             double[] mid = k + 1 < other.length
                     ? new double[] {(q[0] + other[k + 1][0]) / 2, (q[1] + other[k + 1][1]) / 2} : q;
             for (double[] t : new double[][] {q, mid}) {
-                if (distanceToPolyline(t, ring) > tol && contains(ring, t)) {
-                    return new ZR(t[0], t[1]);
+                if (distanceToPolyline(t, ring) > tol) {
+                    if (contains(ring, t)) {
+                        return new ZR(t[0], t[1]);
+                    }
+                    if (onePoint) {
+                        return null;
+                    }
                 }
             }
         }

@@ -79,9 +79,9 @@ final class MalformedStacks {
         add(c, "JSON, not TOML", "{\"beam\": {\"particle\": \"electron\"}}\n", NOT_TOML, 1, null, "not valid TOML");
         add(c, "truncated inside a string", BASE.substring(0, BASE.indexOf("name = \"b\"") + 9), NOT_TOML, 15, null, "TOML");
         add(c, "truncated table header", BASE.substring(0, BASE.lastIndexOf("[[electrode]]") + 6), NOT_TOML, 14, null, "TOML");
-        add(c, "key given twice", edit(BEAM_END, BEAM_END + "energy_eV = 600.0\n"), NOT_TOML, 5, null, "previously defined");
-        add(c, "float too large for TOML", edit("radius_mm = 5.0", "radius_mm = 1e400"), NOT_TOML, 10, null, "too large");
-        add(c, "integer too large for TOML", edit("bias_V = 0.0", "bias_V = 99999999999999999999"), NOT_TOML, 9, null, "too large");
+        add(c, "key given twice", edit(BEAM_END, BEAM_END + "energy_eV = 600.0\n"), DUPLICATE_KEY, 5, null, "previously defined");
+        add(c, "float too large for TOML", edit("radius_mm = 5.0", "radius_mm = 1e400"), NUMBER_TOO_LARGE, 10, null, "too large");
+        add(c, "integer too large for TOML", edit("bias_V = 0.0", "bias_V = 99999999999999999999"), NUMBER_TOO_LARGE, 9, null, "too large");
         // structure
         add(c, "missing beam", BASE.replace("[beam]\nparticle = \"electron\"\nenergy_eV = 500.0\n", ""), MISSING_BEAM, 0, null, "[beam]");
         add(c, "beam is a number", edit("[beam]\nparticle = \"electron\"\nenergy_eV = 500.0\n", "beam = 3\n"), WRONG_TYPE, 2, "beam", "table");
@@ -182,6 +182,15 @@ final class MalformedStacks {
                     .append(30 + i).append(".0\nradius_mm = 9.0\nwire_radius_mm = 0.1\n");
         }
         add(c, "too many electrodes", tooMany.toString(), TOO_MANY_ELECTRODES, 0, null, "limit of 200");
+        StringBuilder manyOutlines = new StringBuilder(BASE);
+        for (int e = 0; e < 5; e++) {
+            manyOutlines.append("[[electrode]]\nname = \"o").append(e).append("\"\nshape = \"outline\"\nbias_V = 0.0\nclosed = false\npoints_mm = [");
+            for (int i = 0; i < 450; i++) {
+                manyOutlines.append(i == 0 ? "" : ", ").append("[").append(30 + e * 10 + i * 0.01).append(", 8.0]");
+            }
+            manyOutlines.append("]\n");
+        }
+        add(c, "too many outline points in all", manyOutlines.toString(), TOO_MANY_POINTS_TOTAL, 0, "points_mm", "2250 points in all");
         add(c, "file over 1 MiB", BASE + "# " + "x".repeat(1 << 20) + "\n", FILE_TOO_LARGE, 0, null, "1048576");
         byte[] latin1 = edit("title = \"t\"", "title = \"Linse f\u00fcr Ionen\"").getBytes(StandardCharsets.ISO_8859_1);
         c.add(new Case("non-UTF-8 bytes", latin1, NOT_UTF8, 1, null, "UTF-8"));

@@ -70,4 +70,36 @@ class GeometryCheckTest {
         assertThat(GeometryCheck.check(List.of(new Electrode.Ring("r", 0, 0, 0.01, 0.0005),
                 new Electrode.Disk("d", 0, 0.01, 0.01, 0.001), new Electrode.Disk("e", 0, 0.02, 0.01, 0)))).isEmpty();
     }
+
+    /**
+     * Worst case the reader admits (2000 outline points, all arcs, bounding boxes overlapping): four
+     * nested, non-touching circles of 500 arc points each. The checks must finish and find nothing.
+     */
+    @Test
+    @org.junit.jupiter.api.Timeout(value = 20, unit = java.util.concurrent.TimeUnit.SECONDS)
+    void nestedArcOutlinesAtTheSizeLimitAreCheckedInReasonableTime() {
+        java.util.List<Electrode> es = new java.util.ArrayList<>();
+        for (int k = 0; k < 4; k++) {
+            double rad = 0.004 + 0.002 * k;
+            java.util.List<Segment> segs = new java.util.ArrayList<>();
+            int n = 500;
+            for (int i = 0; i < n; i++) {
+                double t0 = 2 * Math.PI * i / n, t1 = 2 * Math.PI * (i + 1) / n, tm = (t0 + t1) / 2;
+                ZR a = new ZR(rad * Math.cos(t0), 0.02 + rad * Math.sin(t0));
+                ZR m = new ZR(rad * Math.cos(tm), 0.02 + rad * Math.sin(tm));
+                ZR b = i + 1 == n ? segs.get(0).start() : new ZR(rad * Math.cos(t1), 0.02 + rad * Math.sin(t1));
+                segs.add(new Segment.Arc(a, m, b));
+            }
+            es.add(new Electrode.Outline("c" + k, k, new Contour(segs, true)));
+        }
+        // nested closed outlines: each inner circle lies inside the solid bounded by the outer ones
+        assertThat(GeometryCheck.check(es)).extracting(GeometryCheck.Problem::kind).containsOnly(GeometryCheck.Kind.OVERLAP);
+        // the same circles side by side along z: no problem at all
+        java.util.List<Electrode> apart = new java.util.ArrayList<>();
+        for (int k = 0; k < 4; k++) {
+            apart.add(es.get(3).shifted(0.03 * k).withBias_V(k));
+        }
+        assertThat(GeometryCheck.check(apart.stream().map(e -> (Electrode) new Electrode.Outline("s" + e.bias_V(),
+                e.bias_V(), e.contour())).toList())).isEmpty();
+    }
 }
