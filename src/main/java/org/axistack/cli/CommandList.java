@@ -12,6 +12,7 @@ final class CommandList {
 
     static List<Object> commands() {
         return List.of(
-                new PlanCommand());
+                new PlanCommand(),
+                new OpticsCommand());
     }
 }

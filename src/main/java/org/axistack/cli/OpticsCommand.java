@@ -1,0 +1,199 @@
+package org.axistack.cli;
+
+import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+
+import org.axistack.field.BemSolver;
+import org.axistack.field.BiasedField;
+import org.axistack.io.StackInputException;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.optics.Aberrations;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.Imaging;
+import org.axistack.optics.ParaxialOptics;
+import org.axistack.optics.ReflectionException;
+import org.axistack.report.SafetyNotice;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code optics STACK [--object-z Z] [--json]}: solves the field, then prints the paraxial cardinal elements,
+ * imaging of a finite object, and the spherical and chromatic aberration coefficients (keys of interface.md).
+ * Exit 1 when the beam is reflected or the lens does not focus.
+ */
+@Command(name = "optics", mixinStandardHelpOptions = true,
+        description = {"Paraxial optics of a stack: focal points, principal planes and focal lengths on both sides,",
+            "the image of an axial object, and the spherical (Cs) and chromatic (Cc) aberration coefficients.",
+            "Relativistic throughout. Lengths in mm in the stack's z coordinates."})
+final class OpticsCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    StackInput input;
+
+    @Option(names = "--object-z", paramLabel = "Z",
+            description = "Axial object position in mm (default: the stack's [beam] object, else at infinity).")
+    Double objectZ_mm;
+
+    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
+    boolean json;
+
+    @Override
+    public Integer call() throws StackInputException {
+        Stack stack = input.load(spec.commandLine());
+        PrintWriter err = spec.commandLine().getErr();
+        int[] lastPercent = {-10};
+        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), (stage, fraction) -> {
+            int percent = (int) Math.floor(fraction * 100);
+            if (!json && percent >= lastPercent[0] + 25) {
+                lastPercent[0] = percent;
+                err.printf(Locale.ROOT, "field solve: %s, %d%%%n", stage, percent);
+                err.flush();
+            }
+            return true;
+        }).biased();
+        OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("stack", input.shownAs());
+        out.put("particle", stack.beam().particle().label());
+        out.put("kinetic_energy_eV", stack.beam().energy_eV());
+        ParaxialOptics optics;
+        try {
+            optics = ParaxialOptics.of(field, stack);
+        } catch (ReflectionException e) {
+            out.put("reflected", true);
+            out.put("turning_point_z_mm", Units.mToMm(e.reflection().turningZ_m()));
+            print(out);
+            throw new OutcomeException(e.getMessage() + "; lower the retarding bias or raise the beam energy");
+        }
+        if (objectZ.isPresent() && !(objectZ.getAsDouble() < optics.zEnd_m())) {
+            throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
+                    "--object-z %s mm lies at or after the image-side reference plane (%s mm); give an object before it",
+                    PlanCommand.num(Units.mToMm(objectZ.getAsDouble())), PlanCommand.num(Units.mToMm(optics.zEnd_m()))));
+        }
+        CardinalElements c = optics.cardinal();
+        out.put("reflected", false);
+        out.put("relativistic", optics.relativistic());
+        out.put("lens_kind", c.kind().name().toLowerCase(Locale.ROOT));
+        out.put("reference_plane_object_z_mm", mm(c.zStart_m()));
+        out.put("reference_plane_image_z_mm", mm(c.zEnd_m()));
+        out.put("plane_sensitivity", c.planeSensitivity());
+        out.put("object_z_mm", objectZ.isPresent() ? mm(objectZ.getAsDouble()) : null);
+        out.put("focal_length_object_mm", mm(c.focalLengthObject_m()));
+        out.put("focal_length_image_mm", mm(c.focalLengthImage_m()));
+        out.put("focal_point_object_z_mm", mm(c.focalPointObjectZ_m()));
+        out.put("focal_point_image_z_mm", mm(c.focalPointImageZ_m()));
+        out.put("principal_plane_object_z_mm", mm(c.principalPlaneObjectZ_m()));
+        out.put("principal_plane_image_z_mm", mm(c.principalPlaneImageZ_m()));
+        out.put("real_focus_image_z_mm", c.realFocusImageZ_m().isPresent() ? mm(c.realFocusImageZ_m().getAsDouble()) : null);
+        out.put("real_focus_object_z_mm", c.realFocusObjectZ_m().isPresent() ? mm(c.realFocusObjectZ_m().getAsDouble()) : null);
+        if (objectZ.isPresent()) {
+            Imaging im = optics.imaging(objectZ.getAsDouble());
+            out.put("image_z_mm", mm(im.imageZ_m()));
+            out.put("magnification", finite(im.lateralMagnification()));
+            out.put("angular_magnification", finite(im.angularMagnification()));
+            out.put("real_image_z_mm", im.realImageZ_m().isPresent() ? mm(im.realImageZ_m().getAsDouble()) : null);
+        }
+        if (c.kind() != CardinalElements.Kind.AFOCAL) {
+            Aberrations ab = objectZ.isPresent() && Double.isFinite(optics.imaging(objectZ.getAsDouble()).imageZ_m())
+                    ? optics.aberrations(objectZ.getAsDouble()) : optics.aberrations();
+            out.put("spherical_aberration_mm", mm(ab.sphericalImage_m()));
+            out.put("chromatic_aberration_mm", mm(ab.chromaticImage_m()));
+            if (ab.objectZ_m().isPresent()) {
+                out.put("spherical_aberration_object_side_mm", mm(ab.sphericalObject_m().getAsDouble()));
+                out.put("chromatic_aberration_object_side_mm", mm(ab.chromaticObject_m().getAsDouble()));
+            }
+            out.put("aberration_convention", ab.convention());
+        } else {
+            out.put("spherical_aberration_mm", null);
+            out.put("chromatic_aberration_mm", null);
+            out.put("aberration_convention", "undefined for an afocal lens");
+        }
+        print(out);
+        if (c.kind() != CardinalElements.Kind.CONVERGING) {
+            throw new OutcomeException("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
+                    + "): a parallel beam leaves " + (c.kind() == CardinalElements.Kind.AFOCAL ? "parallel" : "diverging")
+                    + "; change the biases (e.g. with --set) to get a real focus");
+        }
+        return 0;
+    }
+
+    private static Double mm(double z_m) {
+        return finite(Units.mToMm(z_m));
+    }
+
+    private static Double finite(double x) {
+        return Double.isFinite(x) ? x : null;
+    }
+
+    private void print(Map<String, Object> out) {
+        PrintWriter w = spec.commandLine().getOut();
+        if (json) {
+            try {
+                w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(out));
+            } catch (JsonProcessingException e) {
+                throw new IllegalStateException(e);
+            }
+            return;
+        }
+        w.println("Paraxial optics of " + out.get("stack"));
+        w.println("  " + out.get("particle") + ", " + PlanCommand.num((Double) out.get("kinetic_energy_eV"))
+                + " eV where the potential is 0 V");
+        if (Boolean.TRUE.equals(out.get("reflected"))) {
+            w.println(String.format(Locale.ROOT, "  REFLECTED: the axial kinetic energy reaches zero at z = %.4f mm (a mirror)",
+                    (Double) out.get("turning_point_z_mm")));
+            return;
+        }
+        w.println("  relativistic paraxial ray equation; lens " + out.get("lens_kind"));
+        w.println(String.format(Locale.ROOT, "  reference planes (taken as field-free): z = %s and %s mm; moving them inward"
+                + " changes the results by %.1e (relative)", f(out.get("reference_plane_object_z_mm")),
+                f(out.get("reference_plane_image_z_mm")), (Double) out.get("plane_sensitivity")));
+        w.println("                      object side       image side");
+        row(w, "focal length f1, f2", out.get("focal_length_object_mm"), out.get("focal_length_image_mm"));
+        row(w, "focal point F1, F2", out.get("focal_point_object_z_mm"), out.get("focal_point_image_z_mm"));
+        row(w, "principal plane H1, H2", out.get("principal_plane_object_z_mm"), out.get("principal_plane_image_z_mm"));
+        row(w, "real axis crossing", out.get("real_focus_object_z_mm"), out.get("real_focus_image_z_mm"));
+        w.println("  (mm; focal lengths positive when converging; F, H are z positions)");
+        if (out.get("object_z_mm") != null) {
+            w.println("  object at z = " + f(out.get("object_z_mm")) + " mm: image at z = " + f(out.get("image_z_mm"))
+                    + " mm, lateral magnification " + f(out.get("magnification")) + ", angular magnification "
+                    + f(out.get("angular_magnification")));
+        }
+        w.println("  spherical aberration Cs = " + f(out.get("spherical_aberration_mm")) + " mm, chromatic aberration Cc = "
+                + f(out.get("chromatic_aberration_mm")) + " mm");
+        if (out.containsKey("spherical_aberration_object_side_mm")) {
+            w.println("  object side: Cs_o = " + f(out.get("spherical_aberration_object_side_mm")) + " mm, Cc_o = "
+                    + f(out.get("chromatic_aberration_object_side_mm")) + " mm");
+        }
+        w.println("  convention: " + out.get("aberration_convention"));
+        w.println();
+        w.println(SafetyNotice.text());
+    }
+
+    private static void row(PrintWriter w, String label, Object a, Object b) {
+        w.println(String.format(Locale.ROOT, "  %-22s %14s %16s", label, f(a), f(b)));
+    }
+
+    private static String f(Object x) {
+        if (x == null) {
+            return "-";
+        }
+        return String.format(Locale.ROOT, "%.6g", ((Number) x).doubleValue());
+    }
+}

@@ -1,0 +1,90 @@
+package org.axistack.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+
+import org.axistack.model.Particle;
+import org.axistack.report.SafetyNotice;
+import org.junit.jupiter.api.Test;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+/** The optics command: contract keys of interface.md, exit codes, and one physics check through the CLI. */
+class OpticsCommandTest {
+
+    private static String stack() throws Exception {
+        return Path.of(OpticsCommandTest.class.getResource("optics-two-tube.toml").toURI()).toString();
+    }
+
+    private static MainTest.Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new MainTest.Run(code, out.toString(), err.toString());
+    }
+
+    /**
+     * JSON keys of interface.md, and Helmholtz-Lagrange f2/f1 = sqrt(U2* / U1*) (physics brief) for the accelerating
+     * two-tube lens: protons at 1 keV into a -3 kV tube, U1 = 1000 V, U2 = 4000 V.
+     */
+    @Test
+    void jsonCarriesTheContractKeysAndHelmholtzLagrangeHolds() throws Exception {
+        MainTest.Run r = run("optics", stack(), "--json", "--object-z=-80");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        for (String key : new String[] {"object_z_mm", "focal_length_object_mm", "focal_length_image_mm",
+            "focal_point_object_z_mm", "focal_point_image_z_mm", "principal_plane_object_z_mm",
+            "principal_plane_image_z_mm", "image_z_mm", "magnification", "spherical_aberration_mm",
+            "chromatic_aberration_mm", "aberration_convention", "relativistic", "real_focus_image_z_mm"}) {
+            assertThat(j.has(key)).as(key).isTrue();
+        }
+        double vr = Particle.proton().restPotential_V();
+        double expected = Math.sqrt(4000 * (1 + 4000 / (2 * vr)) / (1000 * (1 + 1000 / (2 * vr))));
+        double ratio = j.get("focal_length_image_mm").asDouble() / j.get("focal_length_object_mm").asDouble();
+        // the tubes are finite and open, so the reference planes are field-free only to plane_sensitivity
+        assertThat(ratio).isCloseTo(expected, within(10 * j.get("plane_sensitivity").asDouble() * expected + 1e-9));
+        assertThat(j.get("object_z_mm").asDouble()).isEqualTo(-80.0);
+        assertThat(j.get("spherical_aberration_mm").asDouble()).isPositive();
+        assertThat(j.get("chromatic_aberration_mm").asDouble()).isPositive();
+        assertThat(j.get("spherical_aberration_object_side_mm").asDouble()).isPositive();
+        assertThat(j.get("relativistic").asBoolean()).isTrue();
+        assertThat(j.get("aberration_convention").asText()).contains("object side");
+        // Newton in stack coordinates: (z_o - F1)(z_i - F2) = -f1 f2
+        double lhs = (-80 - j.get("focal_point_object_z_mm").asDouble())
+                * (j.get("image_z_mm").asDouble() - j.get("focal_point_image_z_mm").asDouble());
+        double rhs = -j.get("focal_length_object_mm").asDouble() * j.get("focal_length_image_mm").asDouble();
+        assertThat(lhs).isCloseTo(rhs, within(1e-8 * Math.abs(rhs)));
+    }
+
+    @Test
+    void textShowsTheTableAndTheCautions() throws Exception {
+        MainTest.Run r = run("optics", stack());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("focal length f1, f2").contains("principal plane H1, H2")
+                .contains("spherical aberration Cs").contains(SafetyNotice.TITLE);
+    }
+
+    @Test
+    void reflectionExitsOneAndSaysWhere() throws Exception {
+        MainTest.Run r = run("optics", stack(), "--set", "second=2500", "--json");
+        assertThat(r.code()).isEqualTo(1);
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertThat(j.get("reflected").asBoolean()).isTrue();
+        assertThat(j.get("turning_point_z_mm").asDouble()).isBetween(-5.0, 5.0);
+        assertThat(r.err()).contains("reflected").doesNotContain("Exception");
+    }
+
+    @Test
+    void objectAfterTheLensIsBadUsage() throws Exception {
+        MainTest.Run r = run("optics", stack(), "--object-z", "55");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("--object-z").doesNotContain("\tat ");
+        MainTest.Run missing = run("optics");
+        assertThat(missing.code()).isEqualTo(2);
+    }
+}
