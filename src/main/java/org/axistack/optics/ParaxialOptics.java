@@ -6,7 +6,6 @@ import org.axistack.field.AxialField;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
 import org.hipparchus.analysis.solvers.BrentSolver;
-import org.hipparchus.ode.DenseOutputModel;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
@@ -31,7 +30,7 @@ public final class ParaxialOptics {
     private final double zStart;
     private final double zEnd;
     private final double lensCentreZ;
-    private final DenseOutputModel dense;
+    private final StepStore dense;
 
     private ParaxialOptics(AccelerationPotential potential, ParaxialSettings settings, double zStart,
             double zEnd, double lensCentreZ) {
@@ -115,17 +114,17 @@ public final class ParaxialOptics {
         return new ParaxialOptics(potential, settings, start, planes[1], centre);
     }
 
-    private DenseOutputModel integrate() {
+    private StepStore integrate() {
         double length = zEnd - zStart;
         double tol = settings.relativeTolerance();
         double[] absTol = {tol * 1e-3, tol * 1e-3 / length, tol * 1e-3 * length, tol * 1e-3};
         double[] relTol = {tol, tol, tol, tol};
         DormandPrince853Integrator integrator =
                 new DormandPrince853Integrator(length * 1e-12, length / 50, absTol, relTol);
-        DenseOutputModel model = new DenseOutputModel();
-        integrator.addStepHandler(model);
+        StepStore store = new StepStore();
+        integrator.addStepHandler(store);
         integrator.integrate(new RayEquation(potential), new ODEState(zStart, new double[] {1, 0, 0, 1}), zEnd);
-        return model;
+        return store.freeze();
     }
 
     /** The paraxial equation for two rays at once (shares the field evaluations). */
@@ -190,7 +189,7 @@ public final class ParaxialOptics {
                     "z = %.6f mm is outside the traced range %.6f .. %.6f mm", z * 1e3, zStart * 1e3, zEnd * 1e3));
         }
         double zc = Math.min(Math.max(z, zStart), zEnd);
-        double[] y = dense.getInterpolatedState(zc).getPrimaryState();
+        double[] y = dense.state(zc);
         return new double[] {y[0], y[2], y[1], y[3]};
     }
 
