@@ -17,6 +17,7 @@ import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
+import org.axistack.optics.StartPlaneException;
 import org.axistack.report.SafetyNotice;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -76,6 +77,12 @@ final class OpticsCommand implements Callable<Integer> {
         ParaxialOptics optics;
         try {
             optics = ParaxialOptics.of(field, stack);
+        } catch (StartPlaneException e) {
+            throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
+                    "%s: [beam] start_z_mm = %s mm cannot be used: rays must start before the lens exit plane"
+                            + " (usable %s .. %s mm); set start_z_mm in the field-free entrance region or remove it",
+                    input.shownAs(), PlanCommand.num(Units.mToMm(e.startZ_m())),
+                    PlanCommand.num(Units.mToMm(e.usableFromZ_m())), PlanCommand.num(Units.mToMm(e.usableToZ_m()))));
         } catch (ReflectionException e) {
             out.put("reflected", true);
             out.put("turning_point_z_mm", Units.mToMm(e.reflection().turningZ_m()));

@@ -65,7 +65,7 @@ public final class ParaxialOptics {
      * (|U'| + L|U''|)/U first falls below {@link ParaxialSettings#fieldFreeFraction()} of its peak (L the scan
      * step), or, if it never does, to where it is smallest; so the planes stay inside drift tubes rather than
      * running on to leaky tube mouths. A beam start position, when given, is used as the
-     * object-side plane. How much the result still depends on the planes is measured and reported in
+     * object-side plane ({@link StartPlaneException} if it is outside [zMin, image-side plane)). How much the result still depends on the planes is measured and reported in
      * {@link CardinalElements#planeSensitivity()}.
      */
     public static ParaxialOptics auto(AxialField field, Beam beam, double zMin_m, double zMax_m) {
@@ -103,10 +103,8 @@ public final class ParaxialOptics {
         double start = planes[0];
         if (startZ_m.isPresent()) {
             start = startZ_m.getAsDouble();
-            if (start < zMin_m || start >= planes[1]) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                        "beam start z = %.4f mm lies outside the usable range %.4f .. %.4f mm",
-                        start * 1e3, zMin_m * 1e3, planes[1] * 1e3));
+            if (!(start >= zMin_m && start < planes[1])) {
+                throw new StartPlaneException(start, zMin_m, planes[1]);
             }
         }
         scan.checkNoReflection(start);

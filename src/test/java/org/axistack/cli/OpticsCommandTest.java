@@ -87,4 +87,14 @@ class OpticsCommandTest {
         MainTest.Run missing = run("optics");
         assertThat(missing.code()).isEqualTo(2);
     }
+
+    @Test
+    void startAfterTheLensIsBadInputNamingTheField(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        String text = java.nio.file.Files.readString(Path.of(stack()))
+                .replace("energy_eV = 1000.0", "energy_eV = 1000.0\nstart_z_mm = 50.0");
+        Path file = java.nio.file.Files.writeString(dir.resolve("late-start.toml"), text);
+        MainTest.Run r = run("optics", file.toString());
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("late-start.toml").contains("start_z_mm").doesNotContain("internal error");
+    }
 }
