@@ -45,6 +45,8 @@ import org.hipparchus.ode.sampling.ODEStepHandler;
  */
 public final class EnvelopeSolver {
 
+    private static final double TINY = 1e-300;
+
     private final EnvelopeSettings settings;
 
     public EnvelopeSolver(EnvelopeSettings settings) {
@@ -163,7 +165,9 @@ public final class EnvelopeSolver {
                         settings.reflectionFraction(), s.getTime() * 1e3));
                 return Action.STOP;
             }));
-            integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[1], (s, d, increasing) -> {
+            // the tiny offsets keep the g functions away from exact zero when R' or R vanish identically
+            // (a parallel ray in a drift), which would stall the root finder; they move a waist by ~1e-300 rad
+            integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[1] - TINY, (s, d, increasing) -> {
                 double r = s.getPrimaryState()[0];
                 boolean minimum = linear ? (r > 0) == increasing : increasing;
                 boolean atCrossover = Math.abs(s.getTime() - lastCrossover_m) <= 1e-9 * length;
@@ -173,7 +177,7 @@ public final class EnvelopeSolver {
                 return Action.CONTINUE;
             }));
             if (linear) {
-                integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[0], (s, d, increasing) -> {
+                integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[0] - TINY, (s, d, increasing) -> {
                     if (s.getTime() > p.zStart_m() + 1e-9 * length) {
                         waists.add(new Waist(s.getTime(), 0, Waist.Kind.AXIS_CROSSING));
                     }
