@@ -13,6 +13,7 @@ final class CommandList {
     static List<Object> commands() {
         return List.of(
                 new PlanCommand(),
-                new OpticsCommand());
+                new OpticsCommand(),
+                new EnvelopeCommand());
     }
 }
