@@ -133,7 +133,7 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("aberration_convention", "undefined for an afocal lens");
         }
         print(out);
-        if (c.kind() != CardinalElements.Kind.CONVERGING) {
+        if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
             throw new OutcomeException("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
                     + "): a parallel beam leaves " + (c.kind() == CardinalElements.Kind.AFOCAL ? "parallel" : "diverging")
                     + "; change the biases (e.g. with --set) to get a real focus");
@@ -167,7 +167,9 @@ final class OpticsCommand implements Callable<Integer> {
                     (Double) out.get("turning_point_z_mm")));
             return;
         }
-        w.println("  relativistic paraxial ray equation; lens " + out.get("lens_kind"));
+        w.println("  relativistic paraxial ray equation; lens " + out.get("lens_kind")
+                + ("converging".equals(out.get("lens_kind")) || out.get("real_focus_image_z_mm") == null ? ""
+                        : " asymptotically, but the real ray crosses the axis inside the field (a strong lens)"));
         w.println(String.format(Locale.ROOT, "  reference planes (taken as field-free): z = %s and %s mm; moving them inward"
                 + " changes the results by %.1e (relative)", f(out.get("reference_plane_object_z_mm")),
                 f(out.get("reference_plane_image_z_mm")), (Double) out.get("plane_sensitivity")));
