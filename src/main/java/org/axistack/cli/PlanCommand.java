@@ -26,9 +26,11 @@ import picocli.CommandLine.Spec;
 
 /** {@code plan [STACK] [--out DIR]}: the main job. So far: load, validate, summarise, draw the geometry. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
-        description = {"Plan a lens stack: load and check it, print a summary and the high-voltage cautions,",
-            "and with --out write the geometry picture (geometry.png, geometry.svg) into DIR.",
-            "Without STACK it uses the built-in demo lens."})
+        description = {"The main job: check a lens stack, summarise it, draw its geometry.",
+            "",
+            "Loads and validates STACK (the built-in demo lens when omitted), prints the beam, the electrodes "
+                    + "and the largest voltage per gap length, and the high-voltage cautions. With --out it "
+                    + "writes the meridian cross-section to DIR/geometry.png and DIR/geometry.svg."})
 final class PlanCommand implements Callable<Integer> {
 
     @Spec

@@ -126,6 +126,7 @@ public final class StackReader {
         if (text.isBlank()) {
             throw new StackInputException(StackMessage.EMPTY_FILE, source, 0, null, null, Map.of());
         }
+        precheck(text, source);
         TomlParseResult toml;
         try {
             toml = Toml.parse(text);
@@ -146,6 +147,28 @@ public final class StackReader {
             throw new StackInputException(StackMessage.EMPTY_FILE, source, 0, null, null, Map.of());
         }
         return map(toml, source, text);
+    }
+
+    /** Cheap checks before the TOML parser, whose time grows faster than the input in some shapes. */
+    private static void precheck(String text, String source) throws StackInputException {
+        int line = 1, lineStart = 0, commas = 0;
+        for (int i = 0; i <= text.length(); i++) {
+            char c = i < text.length() ? text.charAt(i) : '\n';
+            if (c == ',') {
+                commas++;
+            } else if (c == '\n') {
+                if (i - lineStart > Limits.MAX_LINE_CHARS) {
+                    throw new StackInputException(StackMessage.LINE_TOO_LONG, source, line, null, null,
+                            Map.of("count", i - lineStart, "limit", Limits.MAX_LINE_CHARS));
+                }
+                line++;
+                lineStart = i + 1;
+            }
+        }
+        if (commas > Limits.MAX_COMMAS) {
+            throw new StackInputException(StackMessage.TOO_MANY_VALUES, source, 0, null, null,
+                    Map.of("count", commas, "limit", Limits.MAX_COMMAS));
+        }
     }
 
     private static String stripPosition(String msg) {

@@ -183,14 +183,20 @@ final class MalformedStacks {
         }
         add(c, "too many electrodes", tooMany.toString(), TOO_MANY_ELECTRODES, 0, null, "limit of 200");
         StringBuilder manyOutlines = new StringBuilder(BASE);
-        for (int e = 0; e < 5; e++) {
+        for (int e = 0; e < 3; e++) {
             manyOutlines.append("[[electrode]]\nname = \"o").append(e).append("\"\nshape = \"outline\"\nbias_V = 0.0\nclosed = false\npoints_mm = [");
             for (int i = 0; i < 450; i++) {
                 manyOutlines.append(i == 0 ? "" : ", ").append("[").append(30 + e * 10 + i * 0.01).append(", 8.0]");
             }
             manyOutlines.append("]\n");
         }
-        add(c, "too many outline points in all", manyOutlines.toString(), TOO_MANY_POINTS_TOTAL, 0, "points_mm", "2250 points in all");
+        add(c, "too many outline points in all", manyOutlines.toString(), TOO_MANY_POINTS_TOTAL, 0, "points_mm", "1350 points in all");
+        add(c, "a 900 kB line", BASE + "# " + "x".repeat(900_000) + "\n", LINE_TOO_LONG, 21, null, "900002 characters");
+        StringBuilder values = new StringBuilder(BASE + "[screen]\nz_mm = 1.0\nextra = [\n");
+        for (int i = 0; i < 100_000; i++) {
+            values.append("1,\n");
+        }
+        add(c, "a hundred thousand array values", values + "]\n", TOO_MANY_VALUES, 0, null, "100000 comma-separated values");
         add(c, "file over 1 MiB", BASE + "# " + "x".repeat(1 << 20) + "\n", FILE_TOO_LARGE, 0, null, "1048576");
         byte[] latin1 = edit("title = \"t\"", "title = \"Linse f\u00fcr Ionen\"").getBytes(StandardCharsets.ISO_8859_1);
         c.add(new Case("non-UTF-8 bytes", latin1, NOT_UTF8, 1, null, "UTF-8"));

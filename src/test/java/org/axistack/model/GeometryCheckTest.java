@@ -72,7 +72,7 @@ class GeometryCheckTest {
     }
 
     /**
-     * Worst case the reader admits (2000 outline points, all arcs, bounding boxes overlapping): four
+     * Beyond the worst case the reader admits (1000 outline points; here 2000, all arcs, bounding boxes overlapping): four
      * nested, non-touching circles of 500 arc points each. The checks must finish and find nothing.
      */
     @Test
@@ -99,7 +99,23 @@ class GeometryCheckTest {
         for (int k = 0; k < 4; k++) {
             apart.add(es.get(3).shifted(0.03 * k).withBias_V(k));
         }
-        assertThat(GeometryCheck.check(apart.stream().map(e -> (Electrode) new Electrode.Outline("s" + e.bias_V(),
-                e.bias_V(), e.contour())).toList())).isEmpty();
+        List<Electrode> named = apart.stream().map(e -> (Electrode) new Electrode.Outline("s" + e.bias_V(),
+                e.bias_V(), e.contour())).toList();
+        assertThat(GeometryCheck.check(named)).isEmpty();
+        // circles of radius 10 mm, centres 30 mm apart: the gap is 10 mm (to the chord error of the flattening)
+        assertThat(GeometryCheck.gap_m(named.get(0), named.get(1))).isCloseTo(0.010, within(1e-6));
+    }
+
+    @Test
+    void gapMatchesHandWorkedPlaneGeometry() {
+        Electrode lip = new Electrode.Ring("w", 0, 0.003, 0.006, 0.0005);
+        Electrode plate = new Electrode.Aperture("p", 1, 0.0, 0.002, 0.012, 0.001);
+        Electrode tube = new Electrode.Tube("t", 2, 0.004, 0.005, 0.03, 0.001);
+        // hand-worked: ring leftmost point z = 2.5 mm vs plate face z = 0.5 mm -> 2.0 mm;
+        // tube starts at z = 5 mm, r 4..5 mm; ring rightmost point (3.5, 6) mm -> distance to corner (5, 5) mm
+        assertThat(GeometryCheck.gap_m(lip, plate)).isCloseTo(0.002, within(1e-9));
+        assertThat(GeometryCheck.gap_m(plate, tube)).isCloseTo(0.0045, within(1e-12));
+        double ringToTube = Math.hypot(0.005 - 0.003, 0.006 - 0.005) - 0.0005;
+        assertThat(GeometryCheck.gap_m(lip, tube)).isCloseTo(ringToTube, within(2e-6));
     }
 }
