@@ -30,12 +30,13 @@ import picocli.CommandLine.Spec;
 
 /** {@code envelope STACK --current A --emittance MM_MRAD [--json]}: beam envelope with emittance and space charge. */
 @Command(name = "envelope", mixinStandardHelpOptions = true,
-        description = {"Beam envelope through the solved lens with emittance and space charge (round-beam",
-            "envelope equation), compared with zero current and zero emittance; bore fill per electrode;",
-            "optionally a scan of the waist against beam current.",
-            "Emittance is the edge (full) emittance unless --rms; it is the geometric emittance at the start",
-            "plane unless --normalised. Without --radius-mm or --source-radius-mm the start radius is a quarter",
-            "of the narrowest open bore, parallel."})
+        description = {"Beam envelope through the solved lens with emittance and space charge",
+            "(round-beam envelope equation), compared with zero current and with zero",
+            "emittance; bore fill per electrode; optionally the waist against current.",
+            "Emittance: edge (full) unless --rms, geometric at the start plane unless",
+            "--normalised. Without --radius-mm or --source-radius-mm the beam starts",
+            "parallel with a quarter of the narrowest open bore. Without STACK: the",
+            "built-in demo lens. Exit 1 when the beam hits an electrode or reflects."})
 final class EnvelopeCommand implements Callable<Integer> {
 
     @Spec
@@ -104,7 +105,7 @@ final class EnvelopeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws StackInputException {
         CommandLine cl = spec.commandLine();
-        Stack stack = input.load(cl);
+        Stack stack = input.loadOrDemo();
         EnvelopeRequest req = request(stack, cl);
         EnvelopeSolver solver = new EnvelopeSolver(nearFill == null ? org.axistack.beam.EnvelopeSettings.defaults()
                 : checked(cl, () -> org.axistack.beam.EnvelopeSettings.defaults().withNearFill(nearFill)));
