@@ -14,6 +14,7 @@ final class CommandList {
         return List.of(
                 new PlanCommand(),
                 new OpticsCommand(),
+                new TraceCommand(),
                 new EnvelopeCommand());
     }
 }

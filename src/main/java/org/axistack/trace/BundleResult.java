@@ -47,6 +47,23 @@ public record BundleResult(RaySet rays, TraceTargets targets, List<Trajectory> t
         return out;
     }
 
+    /** Every ray on every observation plane, ray by ray, planes in order. */
+    public List<TableRow> tableRows() {
+        List<TableRow> rows = new ArrayList<>();
+        for (Trajectory t : trajectories) {
+            for (int i = 0; i < targets.planes_m().size(); i++) {
+                var p = t.at(i);
+                rows.add(new TableRow(t.id(), targets.planes_m().get(i), p, p.isPresent() ? "ok" : t.statusLabel()));
+            }
+        }
+        return rows;
+    }
+
+    /** Rays that did not reach the screen. */
+    public int lost() {
+        return (int) trajectories.stream().filter(t -> t.status() != TraceStatus.SCREEN).count();
+    }
+
     /** How many rays ended each way. */
     public Map<TraceStatus, Integer> statusCounts() {
         Map<TraceStatus, Integer> m = new EnumMap<>(TraceStatus.class);

@@ -65,6 +65,11 @@ public final class Tracer {
 
     /** Checks that the screen and the planes lie inside the traced region. */
     public void validateTargets(TraceTargets targets) {
+        checkTargets(geometry, targets);
+    }
+
+    /** Checks that the screen and the planes lie inside the region of the geometry (no field needed). */
+    public static void checkTargets(ElectrodeGeometry geometry, TraceTargets targets) {
         double zs = targets.screenZ_m();
         if (zs < geometry.regionZMin_m() || zs > geometry.regionZMax_m()) {
             throw new IllegalArgumentException("screen at z = " + mm(zs) + " lies outside the traced region ("
@@ -86,6 +91,24 @@ public final class Tracer {
      * Checks a ray's start and returns its kinetic energy per charge there, V (T0/|q| - sign(q) phi).
      */
     public double validateStart(Particle particle, RayStart ray, TraceTargets targets) {
+        checkPlacement(geometry, ray, targets);
+        double r = ray.r_m();
+        double w = ray.energy_eV() * E / particle.absCharge_C();
+        double phi0 = field.potential_V(ray.z_m(), r);
+        double t = w - particle.chargeSign() * phi0;
+        if (!(t > 0)) {
+            throw new IllegalArgumentException("ray " + ray.id() + " cannot start at z = " + mm(ray.z_m()) + ", r = "
+                    + mm(r) + ": the potential there (" + Fmt.num(phi0) + " V) leaves it no kinetic energy (energy "
+                    + Fmt.num(ray.energy_eV()) + " eV at 0 V); start it where the potential lets it move, or raise its energy");
+        }
+        return t;
+    }
+
+    /**
+     * Checks where a ray starts against the geometry and the targets (no field needed): inside the
+     * region, outside every electrode, before the screen and the planes.
+     */
+    public static void checkPlacement(ElectrodeGeometry geometry, RayStart ray, TraceTargets targets) {
         double r = ray.r_m();
         if (!geometry.inRegion(ray.z_m(), r)) {
             throw new IllegalArgumentException("ray " + ray.id() + " starts at z = " + mm(ray.z_m()) + ", r = " + mm(r)
@@ -109,15 +132,6 @@ public final class Tracer {
                         + " at z = " + mm(ray.z_m()) + ": choose planes after the start");
             }
         }
-        double w = ray.energy_eV() * E / particle.absCharge_C();
-        double phi0 = field.potential_V(ray.z_m(), r);
-        double t = w - particle.chargeSign() * phi0;
-        if (!(t > 0)) {
-            throw new IllegalArgumentException("ray " + ray.id() + " cannot start at z = " + mm(ray.z_m()) + ", r = "
-                    + mm(r) + ": the potential there (" + Fmt.num(phi0) + " V) leaves it no kinetic energy (energy "
-                    + Fmt.num(ray.energy_eV()) + " eV at 0 V); start it where the potential lets it move, or raise its energy");
-        }
-        return t;
     }
 
     public Trajectory trace(Particle particle, RayStart ray, TraceTargets targets) {
