@@ -139,6 +139,17 @@ final class TraceCommand implements Callable<Integer> {
     @Option(names = "--tolerance", paramLabel = "REL", description = "Relative tolerance of the integrator. Default 1e-11.")
     double tolerance = 1e-11;
 
+    @Option(names = "--aberrations", description = "Also fit Cs and Cc to exact traces (image side, object at infinity) and"
+            + " print them beside the paraxial values and the aberration integrals, with the spot budget.")
+    boolean aberrations;
+
+    @Option(names = "--emittance", paramLabel = "MM_MRAD", description = "Spot budget: image-side edge emittance"
+            + " (half-width x half-angle), mm mrad. Default 0.")
+    double emittanceMmMrad;
+
+    @Option(names = "--energy-width", paramLabel = "EV", description = "Spot budget: full energy width of the beam, eV. Default 0.")
+    double energyWidthEv;
+
     @Option(names = "--allow-losses", description = "Exit 0 even when rays hit electrodes, turn back or leave the region.")
     boolean allowLosses;
 
@@ -169,7 +180,7 @@ final class TraceCommand implements Callable<Integer> {
         try {
             rays = raySet(k, beam, startZ, bore);
             targets = new TraceTargets(planes, screenZ);
-            TraceSettings.defaults().withRelativeTolerance(tolerance);
+            TraceSettings.defaults().withRelativeTolerance(tolerance); // checks the tolerance's range
             Tracer.checkTargets(geometry, targets);
             for (var r : rays.rays()) {
                 Tracer.checkPlacement(geometry, r, targets);
@@ -211,13 +222,27 @@ final class TraceCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw usage(e.getMessage());
         }
+        TracedAberrationSection ab = null;
+        if (aberrations) {
+            err.println("fitting aberrations to exact traces ...");
+            try {
+                ab = new TracedAberrationSection(stack, biased, tracer, bore, emittanceMmMrad * 1e-6, energyWidthEv);
+            } catch (IllegalArgumentException e) {
+                throw usage("--aberrations: " + e.getMessage());
+            }
+        }
         if (table != null) {
             writeTable(res);
         }
         if (json) {
-            printJson(out, stack, res, method);
+            printJson(out, stack, res, method, ab);
         } else {
             printText(out, stack, res, method);
+            if (ab != null) {
+                ab.print(out);
+            }
+            out.println();
+            out.println(SafetyNotice.text());
         }
         int lost = res.lost();
         if (lost > 0 && !allowLosses) {
@@ -358,8 +383,6 @@ final class TraceCommand implements Callable<Integer> {
             w.println();
             w.println("Trajectory table: " + table + " (" + res.tableRows().size() + " rows)");
         }
-        w.println();
-        w.println(SafetyNotice.text());
     }
 
     private static String statusText(BundleResult res) {
@@ -370,7 +393,7 @@ final class TraceCommand implements Callable<Integer> {
         return String.join(", ", parts);
     }
 
-    private void printJson(PrintWriter w, Stack stack, BundleResult res, String method) {
+    private void printJson(PrintWriter w, Stack stack, BundleResult res, String method, TracedAberrationSection ab) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("title", stack.title());
         root.put("particle", res.rays().particle().label());
@@ -412,6 +435,9 @@ final class TraceCommand implements Callable<Integer> {
             ends.add(m);
         }
         root.put("ray_ends", ends);
+        if (ab != null) {
+            root.put("aberrations", ab.json());
+        }
         root.put("safety_notice", SafetyNotice.text());
         try {
             w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(root));

@@ -158,7 +158,9 @@ public final class Tracer {
         double maxStep = 0.1 * scale / beta0;
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(0, maxStep, absTol, relTol);
         integrator.setMaxEvaluations(settings.maxEvaluations());
-        double check = settings.checkFraction() * scale;
+        // smooth switching functions (z - plane, u_z, distance to the region's edge) change sign at most
+        // once per crossing, so checking every 1/50 of the region is ample; hits use the finer chords
+        double check = Math.max(settings.checkFraction(), 0.02) * scale;
         double acc = 1e-14 * scale / beta0;
         List<Double> planes = targets.planes_m();
         for (int i = 0; i < planes.size(); i++) {

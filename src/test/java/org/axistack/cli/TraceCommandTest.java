@@ -106,6 +106,24 @@ class TraceCommandTest {
     }
 
     @Test
+    void aberrationsAreFittedToTracesAndPrintedBesideTheIntegrals() throws Exception {
+        MainTest.Run t = MainTest.run("trace", stack.toString(), "--count", "4", "--radius", "0.5", "--aberrations",
+                "--emittance", "0.001", "--energy-width", "0.5");
+        assertThat(t.code()).as(t.err()).isZero();
+        assertThat(t.out()).contains("spherical aberration Cs (mm)").contains("Spot budget").contains("optimum: alpha =")
+                .contains(SafetyNotice.TITLE);
+        MainTest.Run r = MainTest.run("trace", stack.toString(), "--count", "4", "--radius", "0.5", "--aberrations",
+                "--json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode ab = new ObjectMapper().readTree(r.out()).get("aberrations");
+        double cs = ab.get("spherical_aberration_mm").asDouble(), csT = ab.get("traced_spherical_aberration_mm").asDouble();
+        double cc = ab.get("chromatic_aberration_mm").asDouble(), ccT = ab.get("traced_chromatic_aberration_mm").asDouble();
+        // integral versus fitted within 1 % (issue 5); Scherzer: both positive
+        assertThat(csT).isPositive().isCloseTo(cs, org.assertj.core.data.Percentage.withPercentage(1));
+        assertThat(ccT).isPositive().isCloseTo(cc, org.assertj.core.data.Percentage.withPercentage(1));
+    }
+
+    @Test
     void lostRaysExitOneUnlessAllowed() {
         MainTest.Run r = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
                 "--count", "4");
