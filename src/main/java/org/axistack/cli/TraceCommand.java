@@ -246,11 +246,31 @@ final class TraceCommand implements Callable<Integer> {
         }
         int lost = res.lost();
         if (lost > 0 && !allowLosses) {
-            throw new OutcomeException(String.format(Locale.ROOT, "%d of %d rays did not reach the screen (%s): shrink the"
-                    + " beam, move it onto the axis or check the biases; pass --allow-losses if the losses are intended",
-                    lost, res.trajectories().size(), res.statusCounts()));
+            throw new OutcomeException(lossMessage(res));
         }
         return 0;
+    }
+
+    /** What went wrong with lost rays and what to do, one clause per way of ending. */
+    static String lossMessage(BundleResult res) {
+        List<String> why = new ArrayList<>();
+        Map<TraceStatus, Integer> c = res.statusCounts();
+        if (c.containsKey(TraceStatus.HIT)) {
+            why.add(c.get(TraceStatus.HIT) + " hit electrodes (shrink the beam or its angles, or centre it)");
+        }
+        if (c.containsKey(TraceStatus.REFLECTED)) {
+            why.add(c.get(TraceStatus.REFLECTED) + " turned back (a bias reaches past the beam's energy per charge:"
+                    + " weaken that bias or raise the beam energy)");
+        }
+        if (c.containsKey(TraceStatus.LEFT_REGION)) {
+            why.add(c.get(TraceStatus.LEFT_REGION) + " left the traced region (start them inside the bore, aimed forward)");
+        }
+        if (c.containsKey(TraceStatus.STEP_LIMIT)) {
+            why.add(c.get(TraceStatus.STEP_LIMIT) + " ran out of integration steps (loosen --tolerance)");
+        }
+        return String.format(Locale.ROOT, "%d of %d rays did not reach the screen: %s. The outputs are complete;"
+                + " pass --allow-losses if the losses are intended", res.lost(), res.trajectories().size(),
+                String.join("; ", why));
     }
 
     private static double bore(Stack s) {
@@ -374,10 +394,21 @@ final class TraceCommand implements Callable<Integer> {
                     p.rays(), num(Units.mToMm(p.rmsRadius_m())), num(Units.mToMm(p.maxRadius_m())),
                     num(Units.mToMm(p.centroidX_m())), num(Units.mToMm(p.centroidY_m())), num(p.meanEnergy_eV())));
         }
-        List<Trajectory> hits = res.trajectories().stream().filter(t -> t.hit().isPresent()).limit(5).toList();
-        for (Trajectory t : hits) {
-            w.println(String.format(Locale.ROOT, "  ray %d hit '%s' at z = %s mm, r = %s mm", t.id(),
-                    t.hit().get().electrode(), num(Units.mToMm(t.hit().get().z_m())), num(Units.mToMm(t.hit().get().r_m()))));
+        List<Trajectory> lostRays = res.trajectories().stream().filter(t -> t.status() != TraceStatus.SCREEN).toList();
+        for (Trajectory t : lostRays.subList(0, Math.min(5, lostRays.size()))) {
+            RayPoint e = t.end();
+            String where = String.format(Locale.ROOT, "at z = %s mm, r = %s mm", num(Units.mToMm(e.z_m())),
+                    num(Units.mToMm(e.r_m())));
+            String what = switch (t.status()) {
+                case HIT -> "hit '" + t.hit().orElseThrow().electrode() + "'";
+                case REFLECTED -> "turned back";
+                case LEFT_REGION -> "left the region";
+                default -> "stopped (step limit)";
+            };
+            w.println("  ray " + t.id() + " " + what + " " + where);
+        }
+        if (lostRays.size() > 5) {
+            w.println("  ... and " + (lostRays.size() - 5) + " more rays that did not reach the screen");
         }
         if (table != null) {
             w.println();

@@ -191,20 +191,24 @@ public final class FieldMap implements Field {
         double c0 = 2 * u3 - 3 * u2 + 1, c1 = -2 * u3 + 3 * u2, e0 = u3 - 2 * u2 + u, e1 = u3 - u2;
         double dc0 = 6 * u2 - 6 * u, dc1 = -dc0, de0 = 3 * u2 - 4 * u + 1, de1 = 3 * u2 - 2 * u;
         int k00 = idx(i, j), k10 = idx(i + 1, j), k01 = k00 + 1, k11 = k10 + 1;
-        double p = 0, dpt = 0, dpu = 0;
-        // corner (0,0)
-        double[] ta = {a0, a1}, tb = {b0, b1}, tda = {da0, da1}, tdb = {db0, db1};
-        double[] uc = {c0, c1}, ue = {e0, e1}, udc = {dc0, dc1}, ude = {de0, de1};
-        int[][] ks = {{k00, k01}, {k10, k11}};
-        for (int a = 0; a < 2; a++) {
-            for (int b = 0; b < 2; b++) {
-                int k = ks[a][b];
-                double f = phi[k], fz = hz * pz[k], fr = hr * pr[k], fzr = hz * hr * pzr[k];
-                p += f * ta[a] * uc[b] + fz * tb[a] * uc[b] + fr * ta[a] * ue[b] + fzr * tb[a] * ue[b];
-                dpt += f * tda[a] * uc[b] + fz * tdb[a] * uc[b] + fr * tda[a] * ue[b] + fzr * tdb[a] * ue[b];
-                dpu += f * ta[a] * udc[b] + fz * tb[a] * udc[b] + fr * ta[a] * ude[b] + fzr * tb[a] * ude[b];
-            }
-        }
+        double hzr = hz * hr;
+        // node (a, b) contributes f A_a C_b + hz fz B_a C_b + hr fr A_a E_b + hz hr fzr B_a E_b
+        double f00 = phi[k00], z00 = hz * pz[k00], r00 = hr * pr[k00], x00 = hzr * pzr[k00];
+        double f01 = phi[k01], z01 = hz * pz[k01], r01 = hr * pr[k01], x01 = hzr * pzr[k01];
+        double f10 = phi[k10], z10 = hz * pz[k10], r10 = hr * pr[k10], x10 = hzr * pzr[k10];
+        double f11 = phi[k11], z11 = hz * pz[k11], r11 = hr * pr[k11], x11 = hzr * pzr[k11];
+        // combine along u first: for each a, the value and u-derivative of the u-interpolant of f and fz
+        double g0 = f00 * c0 + r00 * e0 + f01 * c1 + r01 * e1; // f-part at a = 0
+        double q0 = z00 * c0 + x00 * e0 + z01 * c1 + x01 * e1; // fz-part at a = 0
+        double g1 = f10 * c0 + r10 * e0 + f11 * c1 + r11 * e1;
+        double q1 = z10 * c0 + x10 * e0 + z11 * c1 + x11 * e1;
+        double gu0 = f00 * dc0 + r00 * de0 + f01 * dc1 + r01 * de1;
+        double qu0 = z00 * dc0 + x00 * de0 + z01 * dc1 + x01 * de1;
+        double gu1 = f10 * dc0 + r10 * de0 + f11 * dc1 + r11 * de1;
+        double qu1 = z10 * dc0 + x10 * de0 + z11 * dc1 + x11 * de1;
+        double p = g0 * a0 + q0 * b0 + g1 * a1 + q1 * b1;
+        double dpt = g0 * da0 + q0 * db0 + g1 * da1 + q1 * db1;
+        double dpu = gu0 * a0 + qu0 * b0 + gu1 * a1 + qu1 * b1;
         if (base == null) {
             out[0] = -dpt / hz;
             out[1] = -dpu / hr;

@@ -88,8 +88,9 @@ public class EinzelBundleBenchmark {
         for (int i = 0; i < times.length; i++) {
             BundleResult r = b.bundle1000();
             times[i] = r.seconds();
-            System.out.printf("bundle %d: %.3f s, statuses %s, max energy error %.2e, rms at screen %.6f mm%n", i,
-                    r.seconds(), r.statusCounts(), r.maxEnergyError(),
+            System.out.printf("bundle %d: %.3f s, statuses %s, mean evaluations %.0f, max energy error %.2e,"
+                    + " rms at screen %.6f mm%n", i, r.seconds(), r.statusCounts(),
+                    r.trajectories().stream().mapToInt(t -> t.evaluations()).average().orElse(0), r.maxEnergyError(),
                     1e3 * Math.sqrt(r.trajectories().stream().mapToDouble(t -> t.end().r_m() * t.end().r_m()).average().orElse(0)));
         }
         java.util.Arrays.sort(times);

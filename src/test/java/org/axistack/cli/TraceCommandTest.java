@@ -128,11 +128,19 @@ class TraceCommandTest {
         MainTest.Run r = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
                 "--count", "4");
         assertThat(r.code()).isEqualTo(1);
-        assertThat(r.err()).contains("4 of 4 rays did not reach the screen").contains("--allow-losses");
+        assertThat(r.err()).contains("4 of 4 rays did not reach the screen: 4 hit electrodes").contains("--allow-losses");
         assertThat(r.out()).contains("hit 'entry' at z = -18.00").contains("4 hit");
         MainTest.Run ok = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
                 "--count", "4", "--allow-losses");
         assertThat(ok.code()).isZero();
+    }
+
+    @Test
+    void aMirrorSaysTheRaysTurnedBack() {
+        MainTest.Run r = MainTest.run("trace", stack.toString(), "--set", "middle=-1000", "--count", "3", "--radius", "0.5");
+        assertThat(r.code()).isEqualTo(1);
+        assertThat(r.err()).contains("3 turned back").contains("weaken that bias");
+        assertThat(r.out()).contains("ray 1 turned back at z = ");
     }
 
     @Test

@@ -10,6 +10,8 @@ import org.axistack.model.Codata2018;
 import org.axistack.model.Electrode;
 import org.axistack.model.Particle;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 class TracerTest {
 
@@ -20,23 +22,25 @@ class TracerTest {
         return new ElectrodeGeometry(List.of(new Electrode.Tube("can", 0, 0.05, -0.01, 0.11, 0)), -0.02, 0.12, 0.1);
     }
 
-    @Test
-    void uniformFieldMatchesTheRelativisticClosedForm() {
+    @ParameterizedTest
+    @CsvSource({"10000, -1e6", "1000000, -2e7", "50000, 2e5"})
+    void uniformFieldMatchesTheRelativisticClosedForm(double energy_eV, double e0) {
         // Source: motion in a constant electric field, Landau and Lifshitz, "The Classical Theory of
-        // Fields", section 20 (closed form with asinh for the transverse coordinate). A 10 keV electron
-        // accelerated by 100 kV/m over 100 mm, launched at 1 mm off axis with slope 0.05.
+        // Fields", section 20 (closed form with asinh for the transverse coordinate). Electrons of
+        // 10 keV and 1 MeV (gamma ~ 3) accelerated, and of 50 keV decelerated, over 100 mm, launched
+        // at 1 mm off axis with slope 0.05. E_z < 0 pushes electrons towards +z.
         Particle el = Particle.electron();
-        double e0 = -1e6; // E_z, V/m: pushes electrons towards +z (their charge is negative)
+        double startEnergy_eV = energy_eV;
         UniformField f = new UniformField(0, e0);
         Tracer tracer = new Tracer(f, can(), TraceSettings.defaults().withRelativeTolerance(1e-12));
-        RayStart ray = RayStart.withSlopes(1, 1e-3, 0, 0, 0.05, 0, 10_000);
+        RayStart ray = RayStart.withSlopes(1, 1e-3, 0, 0, 0.05, 0, startEnergy_eV);
         double zs = 0.1;
         Trajectory t = tracer.trace(el, ray, TraceTargets.screenOnly(zs));
         assertThat(t.status()).isEqualTo(TraceStatus.SCREEN);
 
         double vRest = el.restPotential_V();
         double kappa = el.chargeSign() * e0 / vRest; // q E / (m c^2), 1/m
-        double g0 = 1 + 10_000 / vRest;
+        double g0 = 1 + startEnergy_eV / vRest;
         double u = Math.sqrt(g0 * g0 - 1);
         double ux = u * ray.dirX(), uz0 = u * ray.dirZ();
         double gs = g0 + kappa * (zs - 0);
