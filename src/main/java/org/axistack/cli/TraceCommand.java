@@ -1,10 +1,7 @@
 package org.axistack.cli;
 
 import java.io.IOException;
-import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -13,12 +10,9 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.Field;
-import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackInputException;
 import org.axistack.io.Units;
 import org.axistack.model.Beam;
@@ -34,7 +28,6 @@ import org.axistack.trace.PlaneStatistics;
 import org.axistack.trace.RayPoint;
 import org.axistack.trace.RaySet;
 import org.axistack.trace.RaySets;
-import org.axistack.trace.TableRow;
 import org.axistack.trace.TraceProgress;
 import org.axistack.trace.TraceSettings;
 import org.axistack.trace.TraceStatus;
@@ -337,41 +330,9 @@ final class TraceCommand implements Callable<Integer> {
         };
     }
 
-    static final String[] TABLE_HEADER = {"ray_id", "z_mm", "x_mm", "y_mm", "r_mm", "slope_mrad", "kinetic_energy_eV",
-        "time_ns", "status", "slope_x_mrad", "slope_y_mrad"};
-
     private void writeTable(BundleResult res) {
         try {
-            AtomicFiles.write(table, os -> {
-                Writer w = new OutputStreamWriter(os, StandardCharsets.UTF_8);
-                try (CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(TABLE_HEADER).get())) {
-                    for (TableRow row : res.tableRows()) {
-                        List<String> cells = new ArrayList<>();
-                        cells.add(Integer.toString(row.rayId()));
-                        cells.add(num(Units.mToMm(row.z_m())));
-                        if (row.point().isPresent()) {
-                            RayPoint p = row.point().get();
-                            cells.add(num(Units.mToMm(p.x_m())));
-                            cells.add(num(Units.mToMm(p.y_m())));
-                            cells.add(num(Units.mToMm(p.r_m())));
-                            cells.add(num(Units.radToMrad(p.radialSlope())));
-                            cells.add(num(p.kineticEnergy_eV()));
-                            cells.add(num(p.time_s() * 1e9));
-                            cells.add(row.status());
-                            cells.add(num(Units.radToMrad(p.slopeX())));
-                            cells.add(num(Units.radToMrad(p.slopeY())));
-                        } else {
-                            for (int i = 0; i < 6; i++) {
-                                cells.add("");
-                            }
-                            cells.add(row.status());
-                            cells.add("");
-                            cells.add("");
-                        }
-                        csv.printRecord(cells);
-                    }
-                }
-            });
+            TraceTableCsv.write(table, res);
         } catch (IOException e) {
             throw usage("--table " + table + ": cannot write there (" + e.getMessage() + "); choose a file you can write to");
         }

@@ -124,15 +124,24 @@ class TraceCommandTest {
     }
 
     @Test
-    void lostRaysExitOneUnlessAllowed() {
+    void lostRaysExitOneUnlessAllowed() throws Exception {
         MainTest.Run r = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
                 "--count", "4");
         assertThat(r.code()).isEqualTo(1);
         assertThat(r.err()).contains("4 of 4 rays did not reach the screen: 4 hit electrodes").contains("--allow-losses");
         assertThat(r.out()).contains("hit 'entry' at z = -18.00").contains("4 hit");
+        Path csv = dir.resolve("lost.csv");
         MainTest.Run ok = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
-                "--count", "4", "--allow-losses");
+                "--count", "4", "--allow-losses", "--planes=0,10", "--table", csv.toString());
         assertThat(ok.code()).isZero();
+        List<CSVRecord> rows;
+        try (Reader in = Files.newBufferedReader(csv)) {
+            rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(in).getRecords();
+        }
+        assertThat(rows).hasSize(8).allSatisfy(row -> {
+            assertThat(row.get("status")).isEqualTo("hit:entry");
+            assertThat(row.get("x_mm")).isEmpty();
+        });
     }
 
     @Test
