@@ -20,13 +20,8 @@ public final class BiasedField implements Field, AxialField {
     /** sigma/eps0 times |dy/dtau| at each node: the smooth quantity the near rule interpolates. */
     private final double[] densityJac;
     private final double[] density;
-    private final ThreadLocal<Scratch> scratch;
-
-    private static final class Scratch {
-        final PanelQuadrature.Rule rule = new PanelQuadrature.Rule();
-        final double[] basis = new double[64];
-        final double[] ke = new double[3];
-    }
+    /** Axial expansion coefficients for these biases, made on first use (benign race: same value). */
+    private volatile double[][][] combined;
 
     BiasedField(FieldSolution solution, double[] biases, double[] strength, double[] density) {
         this.solution = solution;
@@ -38,7 +33,6 @@ public final class BiasedField implements Field, AxialField {
         for (int j = 0; j < density.length; j++) {
             densityJac[j] = density[j] * mesh.nodeJacobian(j);
         }
-        scratch = ThreadLocal.withInitial(Scratch::new);
     }
 
     public FieldSolution solution() {
@@ -67,62 +61,48 @@ public final class BiasedField implements Field, AxialField {
     }
 
     private void accumulate(double z, double r, double[] acc) {
-        BoundaryMesh mesh = solution.mesh();
-        List<Panel> panels = mesh.panels();
-        int order = mesh.order();
-        Scratch s = scratch.get();
-        PanelQuadrature quad = solution.quadrature();
-        for (int p = 0; p < panels.size(); p++) {
-            int base = p * order;
-            if (solution.bounds(p).near(z, r)) {
-                quad.build(panels.get(p), z, r, Double.NaN, s.rule);
-                PanelQuadrature.Rule rule = s.rule;
-                for (int q = 0; q < rule.size; q++) {
-                    quad.basis(rule.t[q], s.basis);
-                    double f = 0;
-                    for (int j = 0; j < order; j++) {
-                        f += s.basis[j] * densityJac[base + j];
-                    }
-                    RingKernel.accumulate(z, r, rule.z[q], rule.r[q], 0.5 * rule.w[q] * f * rule.r[q], acc, s.ke);
-                }
-            } else {
-                for (int j = base; j < base + order; j++) {
-                    RingKernel.accumulate(z, r, mesh.nodeZ(j), mesh.nodeR(j), strength[j], acc, s.ke);
-                }
-            }
-        }
+        RingSums.field(solution, z, r, strength, densityJac, acc);
     }
 
+    /**
+     * Axial potential and derivatives. Inside the stack's neighbourhood and up to order
+     * {@link AxialExpansion#ORDER} this uses the piecewise Chebyshev expansion of the exact values (relative
+     * error below {@link #axialExpansionError()}); elsewhere the exact Legendre-form sum of {@link #exactAxial}.
+     */
     @Override
     public void axial(double z_m, int order, double[] out) {
         if (order < 0 || order > MAX_ORDER) {
             throw new IllegalArgumentException("derivative order must be 0.." + MAX_ORDER);
         }
-        java.util.Arrays.fill(out, 0, order + 1, 0.0);
-        BoundaryMesh mesh = solution.mesh();
-        List<Panel> panels = mesh.panels();
-        int n = mesh.order();
-        Scratch s = scratch.get();
-        PanelQuadrature quad = solution.quadrature();
-        for (int p = 0; p < panels.size(); p++) {
-            int base = p * n;
-            if (solution.bounds(p).near(z_m, 0)) {
-                quad.build(panels.get(p), z_m, 0, Double.NaN, s.rule);
-                PanelQuadrature.Rule rule = s.rule;
-                for (int q = 0; q < rule.size; q++) {
-                    quad.basis(rule.t[q], s.basis);
-                    double f = 0;
-                    for (int j = 0; j < n; j++) {
-                        f += s.basis[j] * densityJac[base + j];
-                    }
-                    RingKernel.accumulateAxial(z_m, rule.z[q], rule.r[q], 0.5 * rule.w[q] * f * rule.r[q], order, out);
+        if (order <= AxialExpansion.ORDER) {
+            AxialExpansion x = solution.axialExpansion();
+            if (z_m >= x.zMin() && z_m <= x.zMax()) {
+                double[][][] c = combined;
+                if (c == null) {
+                    c = x.combine(biases);
+                    combined = c;
                 }
-            } else {
-                for (int j = base; j < base + n; j++) {
-                    RingKernel.accumulateAxial(z_m, mesh.nodeZ(j), mesh.nodeR(j), strength[j], order, out);
-                }
+                x.evaluate(c, z_m, order, out);
+                return;
             }
         }
+        exactAxial(z_m, order, out);
+    }
+
+    /** Largest relative error of the axial expansion measured against the exact sum when it was built. */
+    public double axialExpansionError() {
+        return solution.axialExpansion().maxError();
+    }
+
+    /**
+     * Axial potential and derivatives by the exact sum over the surface-charge rings,
+     * d^n/dz^n (1/rho) = (-1)^n n! P_n(cos t)/rho^(n+1), near panels by the graded rule.
+     */
+    public void exactAxial(double z_m, int order, double[] out) {
+        if (order < 0 || order > MAX_ORDER) {
+            throw new IllegalArgumentException("derivative order must be 0.." + MAX_ORDER);
+        }
+        RingSums.axial(solution, z_m, order, new double[][] {strength}, new double[][] {densityJac}, new double[][] {out});
     }
 
     /**

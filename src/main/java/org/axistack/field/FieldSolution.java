@@ -25,6 +25,7 @@ public final class FieldSolution {
     private final double solveSeconds;
     private final double assembleSeconds;
     private final double[][] capacitance;
+    private volatile AxialExpansion axialExpansion;
 
     FieldSolution(List<Electrode> electrodes, BoundaryMesh mesh, PanelQuadrature quad, PanelQuadrature.Bounds[] bounds,
             double[][] unitDensity, double residual, double solveSeconds, double assembleSeconds) {
@@ -129,6 +130,51 @@ public final class FieldSolution {
             c[i] = capacitance[i].clone();
         }
         return c;
+    }
+
+    /**
+     * The piecewise Chebyshev expansion of the unit axial potentials, built on first use over the stack's
+     * extent widened by half its length on each side.
+     */
+    AxialExpansion axialExpansion() {
+        AxialExpansion x = axialExpansion;
+        if (x == null) {
+            synchronized (this) {
+                x = axialExpansion;
+                if (x == null) {
+                    double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+                    for (Electrode e : electrodes) {
+                        lo = Math.min(lo, e.contour().minZ_m());
+                        hi = Math.max(hi, e.contour().maxZ_m());
+                    }
+                    double span = Math.max(hi - lo, 1e-6);
+                    x = AxialExpansion.build(this, lo - 0.5 * span, hi + 0.5 * span);
+                    axialExpansion = x;
+                }
+            }
+        }
+        return x;
+    }
+
+    /** Axial derivatives of every unit solution at z: out[e][n], computed together (shared geometry). */
+    void unitAxial(double z, int order, double[][] out) {
+        RingSums.axial(this, z, order, unitStrength, unitDensityJac(), out);
+    }
+
+    private volatile double[][] unitDensityJac;
+
+    private double[][] unitDensityJac() {
+        double[][] d = unitDensityJac;
+        if (d == null) {
+            d = new double[unitDensity.length][mesh.size()];
+            for (int e = 0; e < d.length; e++) {
+                for (int j = 0; j < mesh.size(); j++) {
+                    d[e][j] = unitDensity[e][j] * mesh.nodeJacobian(j);
+                }
+            }
+            unitDensityJac = d;
+        }
+        return d;
     }
 
     /** sigma/eps0 at node j for unit bias on electrode e, V/m. */

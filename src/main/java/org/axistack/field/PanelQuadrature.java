@@ -19,6 +19,8 @@ final class PanelQuadrature {
 
     /** A target closer than this many panel lengths to a panel is integrated with the graded rule. */
     static final double NEAR_FACTOR = 3.0;
+    /** Size of per-thread buffers for axial derivative orders. */
+    static final int MAX_ORDER_OUT = AxialField.MAX_ORDER + 1;
     private static final int SUB = 10;
     private static final double RATIO = 0.3;
     private static final double[] SUB_X = new double[SUB];
@@ -106,7 +108,7 @@ final class PanelQuadrature {
      * @param tauStar local coordinate of the target's nearest point (NaN: find it)
      */
     void build(Panel p, double z, double r, double tauStar, Rule rule) {
-        double ts = Double.isNaN(tauStar) ? closestTau(p, z, r) : tauStar;
+        double ts = Double.isNaN(tauStar) ? p.closestTau(z, r) : tauStar;
         ZR near = p.at(ts);
         double d = Math.hypot(near.z_m() - z, near.r_m() - r);
         double len = p.length_m();
@@ -151,47 +153,4 @@ final class PanelQuadrature {
         }
     }
 
-    /** Local coordinate of the point of panel p nearest to (z, r): sampled, then golden-section refined. */
-    static double closestTau(Panel p, double z, double r) {
-        int samples = 24;
-        double best = 0;
-        double bestD = Double.POSITIVE_INFINITY;
-        for (int k = 0; k <= samples; k++) {
-            double t = (double) k / samples;
-            ZR q = p.at(t);
-            double d = (q.z_m() - z) * (q.z_m() - z) + (q.r_m() - r) * (q.r_m() - r);
-            if (d < bestD) {
-                bestD = d;
-                best = t;
-            }
-        }
-        double a = Math.max(0, best - 1.0 / samples);
-        double b = Math.min(1, best + 1.0 / samples);
-        double gr = (Math.sqrt(5) - 1) / 2;
-        double c = b - gr * (b - a);
-        double e = a + gr * (b - a);
-        double fc = dist2(p, c, z, r);
-        double fe = dist2(p, e, z, r);
-        for (int it = 0; it < 60 && b - a > 1e-15; it++) {
-            if (fc < fe) {
-                b = e;
-                e = c;
-                fe = fc;
-                c = b - gr * (b - a);
-                fc = dist2(p, c, z, r);
-            } else {
-                a = c;
-                c = e;
-                fc = fe;
-                e = a + gr * (b - a);
-                fe = dist2(p, e, z, r);
-            }
-        }
-        return 0.5 * (a + b);
-    }
-
-    private static double dist2(Panel p, double t, double z, double r) {
-        ZR q = p.at(t);
-        return (q.z_m() - z) * (q.z_m() - z) + (q.r_m() - r) * (q.r_m() - r);
-    }
 }

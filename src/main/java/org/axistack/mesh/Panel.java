@@ -68,6 +68,26 @@ public record Panel(int electrode, Segment segment, double t0, double t1, int si
         return new double[] {d[0] / n, d[1] / n};
     }
 
+    /** Local coordinate tau of segment parameter t (t in [t0, t1]). */
+    public double tau(double t) {
+        double u = Math.max(0, Math.min(1, (t - t0) / (t1 - t0)));
+        return switch (singularEnd) {
+            case -1 -> Math.pow(u, 1 / power);
+            case 1 -> 1 - Math.pow(1 - u, 1 / power);
+            default -> u;
+        };
+    }
+
+    /** Local coordinate of the panel point nearest to (z, r). */
+    public double closestTau(double z_m, double r_m) {
+        double t = segment.closestParameter(z_m, r_m);
+        if (t >= t0 && t <= t1) {
+            return tau(t);
+        }
+        ZR p = new ZR(z_m, r_m);
+        return segment.at(t0).distanceTo(p) <= segment.at(t1).distanceTo(p) ? 0 : 1;
+    }
+
     /** Arc length of the panel, metres. */
     public double length_m() {
         return segment.length_m() * (t1 - t0);

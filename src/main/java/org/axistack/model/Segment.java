@@ -18,6 +18,9 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
 
     double length_m();
 
+    /** Parameter t in [0, 1] of the segment point nearest to (z, r). */
+    double closestParameter(double z_m, double r_m);
+
     Segment scaled(double k);
 
     Segment shifted(double dz_m);
@@ -46,6 +49,14 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
         @Override
         public double length_m() {
             return start.distanceTo(end);
+        }
+
+        @Override
+        public double closestParameter(double z_m, double r_m) {
+            double dz = end.z_m() - start.z_m();
+            double dr = end.r_m() - start.r_m();
+            double t = ((z_m - start.z_m()) * dz + (r_m - start.r_m()) * dr) / (dz * dz + dr * dr);
+            return Math.max(0, Math.min(1, t));
         }
 
         @Override
@@ -157,6 +168,21 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
         @Override
         public double length_m() {
             return radius * Math.abs(sweep);
+        }
+
+        @Override
+        public double closestParameter(double z_m, double r_m) {
+            if (z_m == zc && r_m == rc) {
+                return 0;
+            }
+            double th = Math.atan2(r_m - rc, z_m - zc);
+            double along = sweep > 0 ? normalise(th - angle0) : normalise(angle0 - th);
+            double t = along / Math.abs(sweep);
+            if (t <= 1) {
+                return t;
+            }
+            // beyond the arc: the nearer end
+            return at(0).distanceTo(new ZR(z_m, r_m)) <= at(1).distanceTo(new ZR(z_m, r_m)) ? 0 : 1;
         }
 
         @Override

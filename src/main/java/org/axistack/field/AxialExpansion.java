@@ -1,0 +1,224 @@
+package org.axistack.field;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.stream.IntStream;
+
+/**
+ * Piecewise Chebyshev expansions of the unit-bias axial potentials and their derivatives (each derivative
+ * order fitted separately from its exact values, so no accuracy is lost to differentiation), for fast
+ * evaluation by Clenshaw's recurrence (e.g. W. H. Press et al., Numerical Recipes, 3rd ed., sec. 5.8).
+ * Interval lengths follow the distance from the axis to the nearest charge, so each expansion is analytic
+ * well beyond its interval; intervals are split until the expansion matches the exact Legendre-form sum at
+ * check points within {@link #TOLERANCE} of the unit bias. Re-biasing combines the coefficients linearly.
+ */
+final class AxialExpansion {
+
+    /** Highest derivative order held in the expansion. */
+    static final int ORDER = 10;
+    /** Chebyshev points (and coefficients) per interval. */
+    static final int POINTS = 18;
+    /** Target accuracy of every order relative to its largest magnitude over the expansion's range. */
+    static final double TOLERANCE = 1e-11;
+
+    private final double[] breaks;
+    /** coef[e][interval][order][j] */
+    private final double[][][][] coef;
+    private final double maxError;
+
+    private AxialExpansion(double[] breaks, double[][][][] coef, double maxError) {
+        this.breaks = breaks;
+        this.coef = coef;
+        this.maxError = maxError;
+    }
+
+    double zMin() {
+        return breaks[0];
+    }
+
+    double zMax() {
+        return breaks[breaks.length - 1];
+    }
+
+    /** Largest relative difference from the exact sum found at the check points. */
+    double maxError() {
+        return maxError;
+    }
+
+    /** Builds the expansion for every unit solution over [zMin, zMax]. */
+    static AxialExpansion build(FieldSolution s, double zMin, double zMax) {
+        int ne = s.electrodes().size();
+        FieldSolution unit = s;
+        BiasedField probe = s.withBiases(new double[ne]);
+        // initial intervals: length about half the clearance from the axis
+        List<double[]> work = new ArrayList<>();
+        double z = zMin;
+        while (z < zMax) {
+            double c = Math.max(probe.clearance_m(z, 0), 1e-6 * (zMax - zMin));
+            double len = Math.min(Math.max(0.5 * c, 1e-4 * (zMax - zMin)), 0.1 * (zMax - zMin));
+            double end = Math.min(zMax, z + len);
+            if (zMax - end < 0.3 * len) {
+                end = zMax;
+            }
+            work.add(new double[] {z, end});
+            z = end;
+        }
+        List<double[]> done = new ArrayList<>();
+        List<double[][][]> doneCoef = new ArrayList<>();
+        double worst = 0;
+        double[][] scale = null;
+        for (int pass = 0; pass < 6 && !work.isEmpty(); pass++) {
+            List<double[]> current = work;
+            double[][][][] fitted = new double[current.size()][][][];
+            IntStream.range(0, current.size()).parallel().forEach(i -> {
+                double[] iv = current.get(i);
+                fitted[i] = fit(unit, iv[0], iv[1]);
+            });
+            if (scale == null) {
+                // Global scale of every (electrode, order) over the whole range: the error is measured against it,
+                // since far from the lens high derivatives are tiny and made of round-off.
+                scale = new double[ne][ORDER + 1];
+                for (double[][][] f : fitted) {
+                    for (int e = 0; e < ne; e++) {
+                        for (int o = 0; o <= ORDER; o++) {
+                            for (double c : f[e][o]) {
+                                scale[e][o] = Math.max(scale[e][o], Math.abs(c));
+                            }
+                        }
+                    }
+                }
+            }
+            double[][] sc = scale;
+            double[] errors = new double[current.size()];
+            IntStream.range(0, current.size()).parallel().forEach(i -> {
+                double[] iv = current.get(i);
+                errors[i] = check(unit, fitted[i], iv[0], iv[1], sc);
+            });
+            work = new ArrayList<>();
+            for (int i = 0; i < current.size(); i++) {
+                double[] iv = current.get(i);
+                if (errors[i] > TOLERANCE && pass < 5) {
+                    double mid = 0.5 * (iv[0] + iv[1]);
+                    work.add(new double[] {iv[0], mid});
+                    work.add(new double[] {mid, iv[1]});
+                } else {
+                    done.add(iv);
+                    doneCoef.add(fitted[i]);
+                    worst = Math.max(worst, errors[i]);
+                }
+            }
+        }
+        Integer[] idx = new Integer[done.size()];
+        for (int i = 0; i < idx.length; i++) {
+            idx[i] = i;
+        }
+        Arrays.sort(idx, (a, b) -> Double.compare(done.get(a)[0], done.get(b)[0]));
+        double[] breaks = new double[idx.length + 1];
+        double[][][][] coef = new double[ne][idx.length][][];
+        for (int i = 0; i < idx.length; i++) {
+            breaks[i] = done.get(idx[i])[0];
+            for (int e = 0; e < ne; e++) {
+                coef[e][i] = doneCoef.get(idx[i])[e];
+            }
+        }
+        breaks[idx.length] = zMax;
+        return new AxialExpansion(breaks, coef, worst);
+    }
+
+    /** coefficients [electrode][order][j] on [a, b]. */
+    private static double[][][] fit(FieldSolution unit, double a, double b) {
+        int ne = unit.electrodes().size();
+        double[][][] c = new double[ne][ORDER + 1][POINTS];
+        double[][] all = new double[ne][ORDER + 1];
+        for (int k = 0; k < POINTS; k++) {
+            double x = Math.cos(Math.PI * (k + 0.5) / POINTS);
+            double z = 0.5 * (a + b) + 0.5 * (b - a) * x;
+            unit.unitAxial(z, ORDER, all);
+            for (int e = 0; e < ne; e++) {
+                double[] d = all[e];
+                for (int o = 0; o <= ORDER; o++) {
+                    for (int j = 0; j < POINTS; j++) {
+                        c[e][o][j] += d[o] * Math.cos(Math.PI * j * (k + 0.5) / POINTS);
+                    }
+                }
+            }
+        }
+        for (int e = 0; e < ne; e++) {
+            for (int o = 0; o <= ORDER; o++) {
+                for (int j = 0; j < POINTS; j++) {
+                    c[e][o][j] *= 2.0 / POINTS;
+                }
+                c[e][o][0] *= 0.5;
+            }
+        }
+        return c;
+    }
+
+    /** Largest error over orders and electrodes at off-node check points of [a, b], relative to the global scale. */
+    private static double check(FieldSolution unit, double[][][] c, double a, double b, double[][] scale) {
+        double worst = 0;
+        int ne = unit.electrodes().size();
+        double[][] all = new double[ne][ORDER + 1];
+        for (double x : new double[] {-0.97, -0.5, 0.13, 0.71, 0.999}) {
+            double z = 0.5 * (a + b) + 0.5 * (b - a) * x;
+            unit.unitAxial(z, ORDER, all);
+            for (int e = 0; e < ne; e++) {
+                double[] d = all[e];
+                for (int o = 0; o <= ORDER; o++) {
+                    if (scale[e][o] > 0) {
+                        worst = Math.max(worst, Math.abs(clenshaw(c[e][o], x) - d[o]) / scale[e][o]);
+                    }
+                }
+            }
+        }
+        return worst;
+    }
+
+    static double clenshaw(double[] c, double x) {
+        double b1 = 0, b2 = 0;
+        double x2 = 2 * x;
+        for (int j = c.length - 1; j >= 1; j--) {
+            double t = x2 * b1 - b2 + c[j];
+            b2 = b1;
+            b1 = t;
+        }
+        return x * b1 - b2 + c[0];
+    }
+
+    /** Combined coefficients for a bias set: [interval][order][j]. */
+    double[][][] combine(double[] biases) {
+        int ni = breaks.length - 1;
+        double[][][] out = new double[ni][ORDER + 1][POINTS];
+        for (int e = 0; e < biases.length; e++) {
+            double b = biases[e];
+            if (b == 0) {
+                continue;
+            }
+            for (int i = 0; i < ni; i++) {
+                for (int o = 0; o <= ORDER; o++) {
+                    double[] src = coef[e][i][o];
+                    double[] dst = out[i][o];
+                    for (int j = 0; j < POINTS; j++) {
+                        dst[j] += b * src[j];
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Evaluates combined coefficients at z (inside [zMin, zMax]) for orders 0..order. */
+    void evaluate(double[][][] combined, double z, int order, double[] out) {
+        int i = Arrays.binarySearch(breaks, z);
+        if (i < 0) {
+            i = -i - 2;
+        }
+        i = Math.max(0, Math.min(i, breaks.length - 2));
+        double a = breaks[i], b = breaks[i + 1];
+        double x = (2 * z - a - b) / (b - a);
+        for (int o = 0; o <= order; o++) {
+            out[o] = clenshaw(combined[i][o], x);
+        }
+    }
+}

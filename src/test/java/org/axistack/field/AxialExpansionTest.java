@@ -1,0 +1,42 @@
+package org.axistack.field;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.List;
+
+import org.axistack.model.Electrode;
+import org.axistack.model.MeshSettings;
+import org.junit.jupiter.api.Test;
+
+/** The fast axial expansion against the exact Legendre-form sum it was fitted to. */
+class AxialExpansionTest {
+
+    @Test
+    void expansionMatchesExactSumEverywhere() {
+        List<Electrode> es = List.of(new Electrode.Tube("in", 0, 0.004, -0.04, -0.003, 0),
+                new Electrode.Aperture("stop", -1200, 0, 0.0015, 0.01, 0.0005),
+                new Electrode.Tube("out", 300, 0.004, 0.003, 0.04, 0.001));
+        FieldSolution s = BemSolver.solve(es, new MeshSettings(700, 10), SolveProgress.NONE);
+        BiasedField f = s.withBiases(new double[] {0, -1200, 300});
+        long t0 = System.nanoTime();
+        double[] fast = new double[11];
+        f.axial(0, 10, fast);
+        System.out.printf("axial expansion built in %.3f s, max relative error %.2e%n", (System.nanoTime() - t0) * 1e-9,
+                f.axialExpansionError());
+        double[] exact = new double[11];
+        double[] scale = new double[11];
+        for (double z = -0.07; z <= 0.07; z += 0.0007) {
+            f.exactAxial(z, 10, exact);
+            for (int k = 0; k <= 10; k++) {
+                scale[k] = Math.max(scale[k], Math.abs(exact[k]));
+            }
+        }
+        for (double z = -0.0713; z <= 0.0713; z += 0.000331) {
+            f.axial(z, 10, fast);
+            f.exactAxial(z, 10, exact);
+            for (int k = 0; k <= 10; k++) {
+                assertThat(Math.abs(fast[k] - exact[k])).as("order %d at z=%g", k, z).isLessThan(1e-9 * scale[k]);
+            }
+        }
+    }
+}
