@@ -89,6 +89,13 @@ public final class BiasedField implements Field, AxialField {
         exactAxial(z_m, order, out);
     }
 
+    /** Exact axial potential (no expansion), V. */
+    public double exactAxial0(double z_m) {
+        double[] o = new double[1];
+        exactAxial(z_m, 0, o);
+        return o[0];
+    }
+
     /** Largest relative error of the axial expansion measured against the exact sum when it was built. */
     public double axialExpansionError() {
         return solution.axialExpansion().maxError();

@@ -44,6 +44,15 @@ public final class Mesher {
                         + p.segment.length_m() + " m, too short to mesh (degenerate element); remove or merge it");
             }
         }
+        // Local feature size at every graded end: the distance to the nearest other piece of outline that does
+        // not meet there (another electrode across a gap, the far wall of a thin plate). Grading continues until
+        // the smallest panel is a quarter of it, whatever the settings say.
+        for (int i = 0; i < plans.size(); i++) {
+            SegPlan p = plans.get(i);
+            double fs = p.gradeStart ? feature(p.segment.start(), plans, i) : Double.POSITIVE_INFINITY;
+            double fe = p.gradeEnd ? feature(p.segment.end(), plans, i) : Double.POSITIVE_INFINITY;
+            plans.set(i, p.withFeatures(fs, fe));
+        }
         int levels = settings.edgeLevels();
         int targetPanels = Math.max(1, settings.targetElements() / ORDER);
         // Bisection on the uniform panel size h (panel count decreases with h).
@@ -73,7 +82,10 @@ public final class Mesher {
 
     /** Per-segment plan: where the singular ends are and their exponents. */
     private record SegPlan(Segment segment, int electrode, int contour, String name, boolean sheet, boolean gradeStart,
-            boolean gradeEnd, double betaStart, double betaEnd) {
+            boolean gradeEnd, double betaStart, double betaEnd, double featureStart, double featureEnd) {
+        SegPlan withFeatures(double fs, double fe) {
+            return new SegPlan(segment, electrode, contour, name, sheet, gradeStart, gradeEnd, betaStart, betaEnd, fs, fe);
+        }
     }
 
     private static List<SegPlan> plan(Contour c, int electrode, String name) {
@@ -114,7 +126,8 @@ public final class Mesher {
         int contourId = electrode;
         List<SegPlan> out = new ArrayList<>();
         for (int k = 0; k < n; k++) {
-            out.add(new SegPlan(segs.get(k), electrode, contourId, name, sheet, gradeS[k], gradeE[k], betaS[k], betaE[k]));
+            out.add(new SegPlan(segs.get(k), electrode, contourId, name, sheet, gradeS[k], gradeE[k], betaS[k], betaE[k],
+                    Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY));
         }
         return out;
     }
@@ -146,6 +159,28 @@ public final class Mesher {
         return a / 2;
     }
 
+    /** Distance from point q to the nearest segment that neither is segment i nor touches q. */
+    private static double feature(ZR q, List<SegPlan> plans, int i) {
+        double best = Double.POSITIVE_INFINITY;
+        for (int k = 0; k < plans.size(); k++) {
+            Segment s = plans.get(k).segment;
+            if (k == i || s.start().distanceTo(q) < 1e-12 || s.end().distanceTo(q) < 1e-12) {
+                continue;
+            }
+            best = Math.min(best, s.at(s.closestParameter(q.z_m(), q.r_m())).distanceTo(q));
+        }
+        return best;
+    }
+
+    /** Levels needed at an end: the settings' levels, more if the feature there is smaller than the panels. */
+    private static int levelsFor(double graded, double feature, int levels) {
+        if (!(feature < Double.POSITIVE_INFINITY) || feature <= 0) {
+            return levels;
+        }
+        int need = (int) Math.ceil(Math.log(4 * graded / feature) / Math.log(2));
+        return Math.max(levels, Math.min(need, 40));
+    }
+
     private static int countPanels(List<SegPlan> plans, double h, int levels) {
         List<Panel> sink = new ArrayList<>();
         int count = 0;
@@ -165,7 +200,7 @@ public final class Mesher {
         List<double[]> pieces = new ArrayList<>(); // [s0, s1, singularEnd, power]
         double s = 0;
         if (p.gradeStart) {
-            s = graded(pieces, 0, g, levels, true, p.betaStart);
+            s = graded(pieces, 0, g, levelsFor(g, p.featureStart, levels), true, p.betaStart);
         }
         double midEnd = p.gradeEnd ? len - g : len;
         double mid = midEnd - s;
@@ -176,7 +211,7 @@ public final class Mesher {
             }
         }
         if (p.gradeEnd) {
-            graded(pieces, len - g, len, levels, false, p.betaEnd);
+            graded(pieces, len - g, len, levelsFor(g, p.featureEnd, levels), false, p.betaEnd);
         }
         for (double[] q : pieces) {
             int singular = (int) q[2];

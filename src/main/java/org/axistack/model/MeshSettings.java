@@ -4,14 +4,15 @@ package org.axistack.model;
  * How finely electrode outlines are cut into boundary elements.
  *
  * @param targetElements approximate total number of elements (unknowns) over all electrodes
- * @param edgeLevels     number of geometric refinement levels toward each edge and corner (each level
- *                       halves the element length)
+ * @param edgeLevels     least number of geometric refinement levels toward each edge and corner (each
+ *                       level halves the element length); the mesher adds levels where another surface is
+ *                       closer to an edge than the elements are long
  */
 public record MeshSettings(int targetElements, int edgeLevels) {
 
     /** Default element budget: fine enough for 1e-6 axial accuracy on typical lenses. */
     public static final int DEFAULT_TARGET_ELEMENTS = 1200;
-    public static final int DEFAULT_EDGE_LEVELS = 10;
+    public static final int DEFAULT_EDGE_LEVELS = 4;
     /** Largest element count the tool accepts (dense matrix of 8 N^2 bytes, see DEVELOPERS.md). */
     public static final int MAX_ELEMENTS = 12_000;
 
