@@ -13,8 +13,10 @@ final class CommandList {
     static List<Object> commands() {
         return List.of(
                 new PlanCommand(),
+                new FieldCommand(),
                 new OpticsCommand(),
                 new TraceCommand(),
-                new EnvelopeCommand());
+                new EnvelopeCommand(),
+                new BenchCommand());
     }
 }

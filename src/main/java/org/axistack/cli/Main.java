@@ -79,6 +79,10 @@ public final class Main implements Runnable {
         if (ex instanceof CommandLine.ParameterException p) {
             return onParameterException(p, new String[0]);
         }
+        if (ex instanceof org.axistack.field.MeshException m) {
+            err.println("error: the field cannot be solved as given: " + m.getMessage() + ".");
+            return EXIT_INPUT;
+        }
         if (ex instanceof OutcomeException o) {
             err.println(o.getMessage());
             return EXIT_PHYSICS;

@@ -44,11 +44,16 @@ public final class BemSolver {
     /** Meshes and solves. */
     public static FieldSolution solve(List<Electrode> electrodes, MeshSettings settings, SolveProgress progress) {
         long t0 = System.nanoTime();
-        BoundaryMesh mesh = Mesher.mesh(electrodes, settings);
+        BoundaryMesh mesh;
+        try {
+            mesh = Mesher.mesh(electrodes, settings);
+        } catch (IllegalArgumentException e) {
+            throw new MeshException(e.getMessage());
+        }
         int n = mesh.size();
         int limit = maxUnknownsForHeap();
         if (n > limit) {
-            throw new IllegalArgumentException("the mesh has " + n + " unknowns but this heap supports at most "
+            throw new MeshException("the mesh has " + n + " unknowns but this heap supports at most "
                     + limit + "; lower [mesh] target_elements or start Java with a larger -Xmx");
         }
         int ne = electrodes.size();
@@ -120,7 +125,7 @@ public final class BemSolver {
         }
         LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.lu(n);
         if (!solver.setA(a)) {
-            throw new IllegalStateException("the collocation matrix is singular: check for electrodes that coincide");
+            throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
         }
         DMatrixRMaj x = new DMatrixRMaj(n, ne);
         solver.solve(rhs, x);

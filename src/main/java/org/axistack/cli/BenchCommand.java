@@ -1,0 +1,109 @@
+package org.axistack.cli;
+
+import java.io.PrintWriter;
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.axistack.field.AxialField;
+import org.axistack.field.BemSolver;
+import org.axistack.field.BiasedField;
+import org.axistack.field.FieldSolution;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.StackInputException;
+import org.axistack.model.Stack;
+import org.axistack.optics.ParaxialOptics;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code bench [STACK] [--repeat N]}: times the core operations on the built-in demo lens (or STACK) and prints
+ * medians against the project's speed targets. Wall-clock times on whatever else this machine is doing.
+ */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = {"Times the field solve, re-biasing with the axial potential, and cardinal elements",
+            "on the built-in demo lens (or STACK); prints medians against the speed targets."})
+final class BenchCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    StackInput input;
+
+    @Option(names = "--repeat", paramLabel = "N", defaultValue = "7", description = "Repetitions per measurement (default 7).")
+    int repeat;
+
+    @Override
+    public Integer call() throws StackInputException {
+        if (repeat < 1 || repeat > 1000) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--repeat must be 1..1000");
+        }
+        Stack stack = input.loadOrDemo();
+        PrintWriter out = spec.commandLine().getOut();
+        out.printf(Locale.ROOT, "Benchmark on %s, %d cores, %d repetitions (medians, wall clock)%n", input.shownAs(),
+                Runtime.getRuntime().availableProcessors(), repeat);
+        BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE); // warm-up
+        double[] solve = new double[repeat];
+        FieldSolution sol = null;
+        for (int i = 0; i < repeat; i++) {
+            long t = System.nanoTime();
+            sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE);
+            solve[i] = (System.nanoTime() - t) * 1e-9;
+        }
+        row(out, "field solve (mesh, assemble, LU, unit solves), " + sol.unknowns() + " unknowns", median(solve), 0.5);
+        long t0 = System.nanoTime();
+        BiasedField first = sol.biased();
+        first.axial(0.5 * (stack.minZ_m() + stack.maxZ_m()), 0, new double[1]);
+        double build = (System.nanoTime() - t0) * 1e-9;
+        row(out, "axial expansion build (once per solve), error " + String.format(Locale.ROOT, "%.1e", first.axialExpansionError()), build, Double.NaN);
+        double[] biases = stack.biases_V();
+        double[] rebias = new double[Math.max(repeat, 20)];
+        double[] d = new double[7];
+        double zMin = stack.minZ_m(), zMax = stack.maxZ_m();
+        for (int i = 0; i < rebias.length; i++) {
+            double[] b = biases.clone();
+            for (int k = 0; k < b.length; k++) {
+                b[k] *= 1 + 1e-3 * (i + 1);
+            }
+            long t = System.nanoTime();
+            BiasedField f = sol.withBiases(b);
+            for (int k = 0; k < 2000; k++) {
+                f.axial(zMin + (zMax - zMin) * k / 1999.0, 6, d);
+            }
+            rebias[i] = (System.nanoTime() - t) * 1e-9;
+        }
+        row(out, "re-bias + axial V..V^(6) at 2000 points", median(rebias), 0.020);
+        double[] cardinal = new double[Math.max(repeat, 20)];
+        for (int i = 0; i < cardinal.length; i++) {
+            double[] b = biases.clone();
+            for (int k = 0; k < b.length; k++) {
+                b[k] *= 1 + 1e-3 * (i + 1);
+            }
+            long t = System.nanoTime();
+            AxialField f = sol.withBiases(b);
+            ParaxialOptics.of(f, stack.withBiases(b)).cardinal();
+            cardinal[i] = (System.nanoTime() - t) * 1e-9;
+        }
+        row(out, "cardinal elements for a new bias set", median(cardinal), 0.005);
+        out.flush();
+        return 0;
+    }
+
+    private static void row(PrintWriter out, String what, double seconds, double target) {
+        String verdict = Double.isNaN(target) ? "" : seconds <= target
+                ? String.format(Locale.ROOT, "  (target <= %s s: met)", target)
+                : String.format(Locale.ROOT, "  (target <= %s s: NOT met)", target);
+        out.printf(Locale.ROOT, "  %-70s %9.4f s%s%n", what, seconds, verdict);
+    }
+
+    private static double median(double[] v) {
+        double[] s = v.clone();
+        Arrays.sort(s);
+        return s.length % 2 == 1 ? s[s.length / 2] : 0.5 * (s[s.length / 2 - 1] + s[s.length / 2]);
+    }
+}
