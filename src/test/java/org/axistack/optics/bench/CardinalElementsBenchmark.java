@@ -43,7 +43,7 @@ public class CardinalElementsBenchmark {
     @Benchmark
     public CardinalElements newBiasSet() {
         double focus = 1500 + (counter++ % 64) * 10.0; // a new bias every call
-        return ParaxialOptics.of(demo.units.withBiases(new double[] {0, focus, 0}), demo.stack).cardinal();
+        return ParaxialOptics.of(demo.solution.withBiases(new double[] {0, focus, 0}), demo.stack).cardinal();
     }
 
     public static void main(String[] args) throws RunnerException {
