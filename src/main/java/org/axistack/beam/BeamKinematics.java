@@ -3,6 +3,8 @@ package org.axistack.beam;
 import static org.axistack.model.Codata2018.EPSILON0_F_PER_M;
 import static org.axistack.model.Codata2018.SPEED_OF_LIGHT_M_PER_S;
 
+import org.axistack.model.Relativity;
+
 /**
  * Relativistic kinematics of a particle in terms of its acceleration potential U = T/|q| (volts) and
  * its rest potential V0 = m c^2/|q|, and the generalised perveance of a round beam.
@@ -18,19 +20,9 @@ public final class BeamKinematics {
     private BeamKinematics() {
     }
 
-    /** Lorentz factor gamma = 1 + U/V0. */
-    public static double gamma(double u_V, double restPotential_V) {
-        return 1 + u_V / restPotential_V;
-    }
-
-    /** Relativistically corrected potential U* = U (1 + U/(2 V0)), V. */
-    public static double relativisticPotential_V(double u_V, double restPotential_V) {
-        return u_V * (1 + u_V / (2 * restPotential_V));
-    }
-
     /** (beta gamma)^2 = 2 U* / V0 (signed: negative where U &lt; 0, i.e. where the particle cannot go). */
     public static double betaGammaSquared(double u_V, double restPotential_V) {
-        return 2 * relativisticPotential_V(u_V, restPotential_V) / restPotential_V;
+        return 2 * Relativity.relativisticPotential_V(u_V, restPotential_V) / restPotential_V;
     }
 
     /** beta gamma = p/(m c) for U &gt; 0. */

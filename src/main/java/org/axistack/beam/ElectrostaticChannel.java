@@ -2,6 +2,7 @@ package org.axistack.beam;
 
 import org.axistack.field.AxialField;
 import org.axistack.model.Particle;
+import org.axistack.model.Relativity;
 
 /**
  * A round electrostatic lens seen by the envelope equation: U(z) = U0 - sign(q) V(z) from the axial
@@ -47,8 +48,8 @@ public record ElectrostaticChannel(AxialField field, Particle particle, double e
         double v0 = restPotential_V();
         out[BETA_GAMMA_SQUARED] = BeamKinematics.betaGammaSquared(u, v0);
         double uc = Math.max(u, CLAMP_FRACTION * energyPerCharge_V);
-        double g = BeamKinematics.gamma(uc, v0);
-        double us = BeamKinematics.relativisticPotential_V(uc, v0);
+        double g = Relativity.gamma(uc, v0);
+        double us = Relativity.relativisticPotential_V(uc, v0);
         out[DAMPING] = g * du / (2 * us);
         out[FOCUSING] = g * d2u / (4 * us);
     }

@@ -1,5 +1,7 @@
 package org.axistack.optics;
 
+import org.axistack.model.Relativity;
+
 import org.axistack.field.AxialField;
 import org.axistack.model.Beam;
 
@@ -87,11 +89,11 @@ public final class AccelerationPotential {
 
     /** Relativistic acceleration potential U* = U (1 + U/(2 Vr)), V. */
     public double uStar(double u_V) {
-        return u_V * (1 + u_V / (2 * restPotential_V));
+        return Relativity.relativisticPotential_V(u_V, restPotential_V);
     }
 
     /** g = d(U*)/dU = 1 + U/Vr. */
     public double g(double u_V) {
-        return 1 + u_V / restPotential_V;
+        return Relativity.gamma(u_V, restPotential_V);
     }
 }
