@@ -1,0 +1,244 @@
+package org.axistack.tune;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+
+import org.axistack.field.FieldSolution;
+import org.axistack.model.Stack;
+import org.axistack.optics.TransferMatrix;
+import org.hipparchus.analysis.solvers.AllowedSolution;
+import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.hipparchus.exception.MathIllegalStateException;
+
+/**
+ * Finds every bias of one electrode, within a range, at which the lens images an object onto a given plane.
+ *
+ * <p>Method: a bracket scan of the continuous focusing condition of {@link FocusProbe} (height at the image plane
+ * of the paraxial ray from the object) on {@value #SCAN_POINTS} equally spaced biases, refined by bisection near
+ * the edge of any reflecting part of the range and around every dip of |height| that does not change sign (so
+ * close pairs of roots are not missed); each sign change is then solved by the bracketing n-th order Brent
+ * method (Hipparchus {@code BracketingNthOrderBrentSolver}; R. P. Brent, Algorithms for Minimization without
+ * Derivatives, 1973, with inverse polynomial interpolation of order 5). Einzel lenses give two roots, one
+ * decelerating and one accelerating. Each bias set is applied by superposition of the stored unit solutions;
+ * the field is never solved again. Thread-safe (immutable).
+ */
+public final class BiasTuner {
+
+    /** Equally spaced biases of the first scan. */
+    public static final int SCAN_POINTS = 33;
+    /** Upper bound on optics evaluations per tune (scan, refinement and roots). */
+    static final int MAX_EVALUATIONS = 400;
+    private static final int EDGE_BISECTIONS = 10;
+    private static final int DIP_BISECTIONS = 5;
+
+    private final FieldSolution solution;
+    private final Stack stack;
+
+    /**
+     * @param solution the stack's field solution (unit solutions per electrode)
+     * @param stack    the stack (its biases are the starting biases of every electrode not varied)
+     */
+    public BiasTuner(FieldSolution solution, Stack stack) {
+        if (solution.electrodes().size() != stack.electrodes().size()) {
+            throw new IllegalArgumentException("the field solution belongs to a different stack");
+        }
+        this.solution = solution;
+        this.stack = stack;
+    }
+
+    /** Object from the stack's beam (object_z, else at infinity), default supply range. */
+    public TuneResult focus(String electrode, double imageZ_m) {
+        return focus(electrode, new FocusTarget(imageZ_m, stack.beam().objectZ_m()), BiasRange.supplyDefault(stack.beam()));
+    }
+
+    /**
+     * Every bias of {@code electrode} in {@code range} that images {@code target}'s object onto its image plane.
+     *
+     * @throws IllegalArgumentException for an unknown electrode name
+     */
+    public TuneResult focus(String electrode, FocusTarget target, BiasRange range) {
+        int index = stack.indexOf(electrode);
+        if (index < 0) {
+            throw new IllegalArgumentException("no electrode named '" + electrode + "'");
+        }
+        FocusProbe probe = new FocusProbe(solution, stack, target);
+        double[] base = stack.biases_V();
+        TreeMap<Double, FocusProbe.Point> scan = new TreeMap<>();
+        int[] count = {0};
+        java.util.function.DoubleFunction<FocusProbe.Point> eval = v -> {
+            double[] b = base.clone();
+            b[index] = v;
+            count[0]++;
+            return probe.at(b);
+        };
+        for (int i = 0; i < SCAN_POINTS; i++) {
+            double v = range.from_V() + range.width_V() * i / (SCAN_POINTS - 1);
+            scan.put(v, eval.apply(v));
+        }
+        refineEdges(scan, eval, range, count);
+        refineDips(scan, eval, range, count);
+
+        List<FocusSolution> solutions = new ArrayList<>();
+        double absAcc = 1e-10 * Math.max(range.width_V(), Math.max(Math.abs(range.from_V()), Math.abs(range.to_V())));
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-14, absAcc, 1e-15, 5);
+        Map.Entry<Double, FocusProbe.Point> prev = null;
+        double reflectFrom = Double.NaN;
+        double reflectTo = Double.NaN;
+        for (Map.Entry<Double, FocusProbe.Point> e : scan.entrySet()) {
+            FocusProbe.Point p = e.getValue();
+            if (!p.valid()) {
+                reflectFrom = Double.isNaN(reflectFrom) ? e.getKey() : Math.min(reflectFrom, e.getKey());
+                reflectTo = Double.isNaN(reflectTo) ? e.getKey() : Math.max(reflectTo, e.getKey());
+            }
+            if (prev != null && prev.getValue().valid() && p.valid()) {
+                double m0 = prev.getValue().miss();
+                double m1 = p.miss();
+                if (m1 == 0) {
+                    solutions.add(describe(electrode, index, p, target));
+                } else if (m0 != 0 && Math.signum(m0) != Math.signum(m1)) {
+                    try {
+                        double root = solver.solve(200, v -> {
+                            FocusProbe.Point q = eval.apply(v);
+                            if (!q.valid()) {
+                                throw new IllegalStateException("reflection inside a bracket");
+                            }
+                            return q.miss();
+                        }, prev.getKey(), e.getKey(), AllowedSolution.ANY_SIDE);
+                        solutions.add(describe(electrode, index, eval.apply(root), target));
+                    } catch (IllegalStateException | MathIllegalStateException ex) {
+                        // a reflecting island inside the bracket: no clean root here
+                    }
+                }
+            } else if (prev == null && p.valid() && p.miss() == 0) {
+                solutions.add(describe(electrode, index, p, target));
+            }
+            prev = e;
+        }
+        Optional<TuneResult.NearestApproach> nearest = Optional.empty();
+        if (solutions.isEmpty()) {
+            FocusProbe.Point best = null;
+            for (FocusProbe.Point p : scan.values()) {
+                if (p.valid() && (best == null
+                        || Math.abs(p.imageZ_m() - target.imageZ_m()) < Math.abs(best.imageZ_m() - target.imageZ_m()))) {
+                    best = p;
+                }
+            }
+            if (best != null) {
+                nearest = Optional.of(new TuneResult.NearestApproach(best.biases_V()[index], best.imageZ_m(),
+                        best.imageZ_m() - target.imageZ_m()));
+            }
+        }
+        return new TuneResult(electrode, target, range, solutions, nearest, count[0], reflectFrom, reflectTo);
+    }
+
+    /** Bisect every interval between a reflecting and a transmitting bias, so roots near the edge are bracketed. */
+    private static void refineEdges(TreeMap<Double, FocusProbe.Point> scan,
+            java.util.function.DoubleFunction<FocusProbe.Point> eval, BiasRange range, int[] count) {
+        for (int pass = 0; pass < EDGE_BISECTIONS && count[0] < MAX_EVALUATIONS; pass++) {
+            List<Double> add = new ArrayList<>();
+            Map.Entry<Double, FocusProbe.Point> prev = null;
+            for (Map.Entry<Double, FocusProbe.Point> e : scan.entrySet()) {
+                if (prev != null && prev.getValue().valid() != e.getValue().valid()
+                        && e.getKey() - prev.getKey() > 1e-9 * range.width_V()) {
+                    add.add(0.5 * (prev.getKey() + e.getKey()));
+                }
+                prev = e;
+            }
+            if (add.isEmpty()) {
+                return;
+            }
+            for (double v : add) {
+                scan.put(v, eval.apply(v));
+            }
+        }
+    }
+
+    /**
+     * Bisect both intervals beside a scan point where |miss| has a local minimum without a sign change and is
+     * small compared with its change to the neighbours: a pair of roots may hide there.
+     */
+    private static void refineDips(TreeMap<Double, FocusProbe.Point> scan,
+            java.util.function.DoubleFunction<FocusProbe.Point> eval, BiasRange range, int[] count) {
+        for (int pass = 0; pass < DIP_BISECTIONS && count[0] < MAX_EVALUATIONS; pass++) {
+            List<Double> add = new ArrayList<>();
+            List<Map.Entry<Double, FocusProbe.Point>> list = new ArrayList<>(scan.entrySet());
+            for (int i = 1; i + 1 < list.size(); i++) {
+                FocusProbe.Point a = list.get(i - 1).getValue();
+                FocusProbe.Point b = list.get(i).getValue();
+                FocusProbe.Point c = list.get(i + 1).getValue();
+                if (!a.valid() || !b.valid() || !c.valid()) {
+                    continue;
+                }
+                double ma = a.miss();
+                double mb = b.miss();
+                double mc = c.miss();
+                boolean sameSign = Math.signum(ma) == Math.signum(mb) && Math.signum(mb) == Math.signum(mc);
+                boolean dip = Math.abs(mb) <= Math.abs(ma) && Math.abs(mb) <= Math.abs(mc);
+                boolean small = Math.abs(mb) < Math.max(Math.abs(ma - mb), Math.abs(mc - mb));
+                if (sameSign && dip && small) {
+                    add.add(0.5 * (list.get(i - 1).getKey() + list.get(i).getKey()));
+                    add.add(0.5 * (list.get(i).getKey() + list.get(i + 1).getKey()));
+                }
+            }
+            if (add.isEmpty()) {
+                return;
+            }
+            for (double v : add) {
+                if (count[0] >= MAX_EVALUATIONS) {
+                    return;
+                }
+                scan.putIfAbsent(v, eval.apply(v));
+            }
+        }
+    }
+
+    private FocusSolution describe(String electrode, int index, FocusProbe.Point p, FocusTarget target) {
+        double bias = p.biases_V()[index];
+        double sign = stack.beam().particle().chargeSign();
+        FocusSolution.Mode mode = sign * bias > 0 ? FocusSolution.Mode.DECELERATING : FocusSolution.Mode.ACCELERATING;
+        double magnification = Double.NaN;
+        if (!target.objectAtInfinity()) {
+            TransferMatrix t = p.optics().transfer(target.objectZ_m().getAsDouble(), target.imageZ_m());
+            magnification = t.a();
+        }
+        double[] fields = p.field().maxSurfaceFieldPerElectrode_V_per_m();
+        int worst = 0;
+        for (int i = 1; i < fields.length; i++) {
+            if (fields[i] > fields[worst]) {
+                worst = i;
+            }
+        }
+        return new FocusSolution(electrode, bias, p.biases_V(), mode, p.imageZ_m(), magnification,
+                p.optics().cardinal(), fields[worst], fields, stack.electrodes().get(worst).name(),
+                SurfaceFieldCheck.of(fields[worst], stack.limits()), crossings(p, target));
+    }
+
+    /** Real crossings of the probe ray strictly before the image plane (sampled at 400 planes). */
+    private static int crossings(FocusProbe.Point p, FocusTarget target) {
+        var optics = p.optics();
+        double z0 = target.objectAtInfinity() ? optics.zStart_m() : target.objectZ_m().getAsDouble();
+        double h0 = target.objectAtInfinity() ? 1 : 0;
+        double s0 = target.objectAtInfinity() ? 0 : 1;
+        double from = Math.max(z0, optics.zStart_m());
+        double to = Math.min(target.imageZ_m(), optics.zEnd_m());
+        int n = 400;
+        int crossings = 0;
+        double prev = Double.NaN;
+        double stop = target.imageZ_m() - 1e-6 * Math.abs(target.imageZ_m() - z0);
+        for (int i = 0; i <= n; i++) {
+            double z = from + (to - from) * i / n;
+            if (z > stop || (i == 0 && !target.objectAtInfinity() && z <= z0)) {
+                continue;
+            }
+            double h = optics.ray(z0, h0, s0, z)[0];
+            if (!Double.isNaN(prev) && Math.signum(h) != Math.signum(prev) && h != 0) {
+                crossings++;
+            }
+            prev = h;
+        }
+        return crossings;
+    }
+}

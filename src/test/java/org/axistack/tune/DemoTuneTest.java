@@ -1,0 +1,39 @@
+package org.axistack.tune;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import org.axistack.field.BemSolver;
+import org.axistack.field.FieldSolution;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.BuiltInStacks;
+import org.axistack.model.Stack;
+import org.axistack.optics.ParaxialOptics;
+import org.junit.jupiter.api.Test;
+
+class DemoTuneTest {
+
+    @Test
+    void demoLensHasBothEinzelSolutionsForTheScreen() throws Exception {
+        Stack stack = BuiltInStacks.demo();
+        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE);
+        BiasTuner tuner = new BiasTuner(sol, stack);
+        TuneResult r = tuner.focus("focus", 0.035);
+        for (int i = 0; i < 5; i++) {
+            long t = System.nanoTime();
+            r = tuner.focus("focus", 0.035);
+            System.out.printf("tune: %.1f ms, %d evaluations%n", (System.nanoTime() - t) / 1e6, r.evaluations());
+        }
+        for (FocusSolution s : r.solutions()) {
+            System.out.printf("%s %.6f V image %.6f mm F2 %.6f mm Emax %.1f V/mm %s crossings %d%n", s.mode(), s.bias_V(),
+                    s.imageZ_m() * 1e3, s.cardinal().focalPointImageZ_m() * 1e3, s.maxSurfaceField_V_per_m() / 1e3,
+                    s.worstElectrode(), s.axisCrossings());
+        }
+        System.out.println(r.range() + " reflect " + r.reflectingFrom_V() + " .. " + r.reflectingTo_V());
+        assertThat(r.solutions()).hasSizeGreaterThanOrEqualTo(2);
+        for (FocusSolution s : r.solutions()) {
+            double[] b = s.biases_V();
+            double f2 = ParaxialOptics.of(sol.withBiases(b), stack).cardinal().focalPointImageZ_m();
+            assertThat(Math.abs(f2 - 0.035)).isLessThan(1e-9);
+        }
+    }
+}
