@@ -60,7 +60,8 @@ final class BenchCommand implements Callable<Integer> {
         BiasedField first = sol.biased();
         first.axial(0.5 * (stack.minZ_m() + stack.maxZ_m()), 0, new double[1]);
         double build = (System.nanoTime() - t0) * 1e-9;
-        row(out, "axial expansion build (once per solve), error " + String.format(Locale.ROOT, "%.1e", first.axialExpansionError()), build, Double.NaN);
+        row(out, "axial expansion build (once per solve), " + first.axialExpansionIntervals() + " intervals, error "
+                + String.format(Locale.ROOT, "%.1e", first.axialExpansionError()), build, Double.NaN);
         double[] biases = stack.biases_V();
         double[] rebias = new double[Math.max(repeat, 20)];
         double[] d = new double[7];

@@ -96,6 +96,11 @@ public final class BiasedField implements Field, AxialField {
         return o[0];
     }
 
+    /** Number of Chebyshev intervals of the axial expansion. */
+    public int axialExpansionIntervals() {
+        return solution.axialExpansion().intervals();
+    }
+
     /** Largest relative error of the axial expansion measured against the exact sum when it was built. */
     public double axialExpansionError() {
         return solution.axialExpansion().maxError();
@@ -113,17 +118,23 @@ public final class BiasedField implements Field, AxialField {
     }
 
     /**
-     * Distance from (z, r) to the nearest electrode surface, m (from panel bounding circles: a lower bound,
-     * exact to within a panel's sagitta). The near-axis series converges inside this distance.
+     * Distance from (z, r) to the nearest electrode surface, m (exact for straight and circular outline pieces).
+     * The near-axis series converges inside this distance.
      */
     public double clearance_m(double z_m, double r_m) {
         double best = Double.POSITIVE_INFINITY;
-        int panels = solution.mesh().panels().size();
-        for (int p = 0; p < panels; p++) {
+        List<Panel> panels = solution.mesh().panels();
+        for (int p = 0; p < panels.size(); p++) {
             PanelQuadrature.Bounds b = solution.bounds(p);
-            best = Math.min(best, Math.hypot(z_m - b.zc(), r_m - b.rc()) - b.radius());
+            double lower = Math.hypot(z_m - b.zc(), r_m - b.rc()) - b.radius();
+            if (lower >= best) {
+                continue;
+            }
+            Panel pan = panels.get(p);
+            var q = pan.at(pan.closestTau(z_m, r_m));
+            best = Math.min(best, Math.hypot(q.z_m() - z_m, q.r_m() - r_m));
         }
-        return Math.max(best, 0);
+        return best;
     }
 
     /** Charge on each electrode, C. */
