@@ -205,7 +205,11 @@ public final class Mesher {
         double midEnd = p.gradeEnd ? len - g : len;
         double mid = midEnd - s;
         if (mid > 1e-14 * len) {
-            int k = Math.max(1, (int) Math.ceil(mid / h - 1e-9));
+            // No panel longer than its distance from the axis (a quarter of the segment at least): the charge on a
+            // bore varies on the scale of the bore radius, and long panels would make every interaction "near".
+            double rMin = Math.min(p.segment.at(s / len).r_m(), p.segment.at(midEnd / len).r_m());
+            double cap = Math.max(rMin, 0.25 * len);
+            int k = Math.max(1, (int) Math.ceil(mid / Math.min(h, cap) - 1e-9));
             for (int i = 0; i < k; i++) {
                 pieces.add(new double[] {s + mid * i / k, s + mid * (i + 1) / k, 0, 1});
             }
