@@ -50,11 +50,11 @@ import picocli.CommandLine.Spec;
  * and bundles through the solved stack, a table of every ray at every plane, beam radius per plane.
  */
 @Command(name = "trace", mixinStandardHelpOptions = true,
-        description = {"Trace exact (relativistic Lorentz-force) rays through the stack's field: a bundle of rays",
-            "from the beam start to the screen, with the beam radius (rms and max) on chosen planes and,",
-            "with --table, every ray at every plane as CSV for bench alignment. Without STACK it uses the",
-            "built-in demo lens. Exit 1 if rays are lost (electrode hit, reflection, leaving the region)",
-            "unless --allow-losses."})
+        description = {"Trace exact (relativistic Lorentz-force) rays through the stack's field: a bundle of rays"
+            + " from the beam start to the screen, with the beam radius (rms and max) on chosen planes and, with"
+            + " --table, every ray at every plane as CSV for bench alignment. Without STACK it uses the built-in"
+            + " demo lens.", "Exit 1 if rays are lost (electrode hit, reflection, leaving the region) unless"
+            + " --allow-losses."})
 final class TraceCommand implements Callable<Integer> {
 
     /** Shapes of ray sets. */
@@ -73,10 +73,10 @@ final class TraceCommand implements Callable<Integer> {
     @Option(names = "--count", paramLabel = "N", description = "Number of rays (fan: angles per azimuth). Default 100 (fan 21).")
     Integer count;
 
-    @Option(names = "--radius", paramLabel = "MM", description = "Disk or ring radius, mm. Default 40 % of the narrowest bore.")
+    @Option(names = "--radius", paramLabel = "MM", description = "Disk or ring radius, mm. Default 40%% of the narrowest bore.")
     Double radiusMm;
 
-    @Option(names = "--sigma", paramLabel = "MM", description = "Gaussian beam standard deviation in x and y, mm. Default 15 % of the bore.")
+    @Option(names = "--sigma", paramLabel = "MM", description = "Gaussian beam standard deviation in x and y, mm. Default 15%% of the bore.")
     Double sigmaMm;
 
     @Option(names = "--cutoff", paramLabel = "MM", description = "Gaussian beam cut-off radius, mm. Default 3 sigma.")

@@ -48,11 +48,10 @@ final class TracedAberrationSection {
         row(w, "image focal length f2 (mm)", traced.focalLengthImage_m(), paraxial.focalLengthImage_m(), true);
         row(w, "spherical aberration Cs (mm)", traced.spherical_m(), integrals.sphericalImage_m(), false);
         row(w, "chromatic aberration Cc (mm)", traced.chromatic_m(), integrals.chromaticImage_m(), false);
-        w.println(String.format(Locale.ROOT, "  fit over rays up to %s mm (alpha up to %s mrad); Cs from half the heights %s mm;"
-                + " reference planes z = %s .. %s mm", TraceCommand.num(Units.mToMm(traced.maxHeight_m())),
-                TraceCommand.num(Units.radToMrad(traced.maxAngle_rad())),
-                TraceCommand.num(Units.mToMm(traced.sphericalHalfHeight_m())),
-                TraceCommand.num(Units.mToMm(traced.zStart_m())), TraceCommand.num(Units.mToMm(traced.zEnd_m()))));
+        w.println(String.format(Locale.ROOT, "  fit over rays up to %.4g mm (alpha up to %.4g mrad); Cs from half the heights"
+                + " %.7g mm; reference planes z = %.6g .. %.6g mm", Units.mToMm(traced.maxHeight_m()),
+                Units.radToMrad(traced.maxAngle_rad()), Units.mToMm(traced.sphericalHalfHeight_m()),
+                Units.mToMm(traced.zStart_m()), Units.mToMm(traced.zEnd_m())));
         if (budget.emittance_m_rad() > 0 || budget.relativeEnergySpread() > 0) {
             w.println("Spot budget (d_g = 2 eps/alpha, d_s = Cs alpha^3/2, d_c = Cc alpha dT/T, quadrature sum; an estimate):");
             w.println(String.format(Locale.ROOT, "  %10s %12s %12s %12s %12s", "alpha_mrad", "d_g_um", "d_s_um", "d_c_um",
