@@ -18,7 +18,6 @@ import org.axistack.io.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
 import org.axistack.report.SafetyNotice;
-import org.axistack.trace.AxialTable;
 import org.axistack.trace.BundleResult;
 import org.axistack.trace.BundleTracer;
 import org.axistack.trace.ElectrodeGeometry;
@@ -196,16 +195,15 @@ final class TraceCommand implements Callable<Integer> {
             }
             double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, screenZ) - 4 * step);
             double z1 = Math.min(geometry.regionZMax_m(), screenZ + 4 * step);
-            err.println("tabulating the axial potential and mapping the field ...");
-            AxialTable axial = new AxialTable(biased, z0 - 4 * step, z1 + 4 * step, Math.min(step, 0.1e-3));
-            FieldMap map = new FieldMap(biased, new NearAxisField(axial), geometry, z0, z1, bore, step,
+            err.println("mapping the field ...");
+            FieldMap map = new FieldMap(biased, new NearAxisField(biased), geometry, z0, z1, bore, step,
                     TraceProgress.none());
             field = map;
-            method = String.format(Locale.ROOT, "near-axis series of tabulated axial derivatives plus a %s mm map of the"
-                    + " remainder (measured map error: %s V, %s V/mm; max table error %s V); direct element sums near"
-                    + " electrodes and beyond r = %s mm", num(Units.mToMm(step)), sci(map.maxPotentialError_V()),
-                    sci(Units.vPerMToVPerMm(map.maxFieldError_V_per_m())), sci(axial.maxPotentialError_V()),
-                    num(Units.mToMm(bore)));
+            method = String.format(Locale.ROOT, "near-axis series of the axial potential's Chebyshev expansion (relative"
+                    + " error %s) plus a %s mm map of the remainder (measured map error: %s V, %s V/mm); direct element"
+                    + " sums near electrodes and beyond r = %s mm", sci(biased.axialExpansionError()),
+                    num(Units.mToMm(step)), sci(map.maxPotentialError_V()),
+                    sci(Units.vPerMToVPerMm(map.maxFieldError_V_per_m())), num(Units.mToMm(bore)));
         }
         tracer = new Tracer(field, geometry, TraceSettings.defaults().withRelativeTolerance(tolerance));
         int nThreads = threads != null ? threads : Runtime.getRuntime().availableProcessors();

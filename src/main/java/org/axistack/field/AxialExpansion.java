@@ -17,7 +17,7 @@ import java.util.stream.IntStream;
 final class AxialExpansion {
 
     /** Highest derivative order held in the expansion. */
-    static final int ORDER = 6;
+    static final int ORDER = 8;
     /** Chebyshev points (and coefficients) per interval. */
     static final int POINTS = 20;
     /**

@@ -2,6 +2,7 @@ package org.axistack.trace;
 
 import org.axistack.field.AxialField;
 import org.axistack.field.Field;
+import org.axistack.field.NearAxisSeries;
 
 /**
  * The field near the axis from the axial potential and its derivatives, by the classical power
@@ -44,15 +45,7 @@ public final class NearAxisField implements Field {
      * Potential (and field if fieldOut is not null) at radius r from the axial derivatives v[0..7].
      */
     static double series(double[] v, double r, double[] fieldOut) {
-        double r2 = r * r;
-        double a1 = r2 / 4, a2 = r2 * r2 / 64, a3 = r2 * r2 * r2 / 2304;
-        double phi = v[0] - a1 * v[2] + a2 * v[4] - a3 * v[6];
-        if (fieldOut != null) {
-            fieldOut[0] = -(v[1] - a1 * v[3] + a2 * v[5] - a3 * v[7]);
-            double r3 = r2 * r, r5 = r3 * r2;
-            fieldOut[1] = r / 2 * v[2] - r3 / 16 * v[4] + r5 / 384 * v[6];
-        }
-        return phi;
+        return NearAxisSeries.evaluate(v, 4, r, fieldOut == null ? new double[2] : fieldOut);
     }
 
     /** Magnitude of the first omitted potential term, (r/2)^8 / 576 |V^(8)|, V. */
