@@ -16,7 +16,7 @@ import org.hipparchus.special.BesselJ;
  * zeros j_n of J0 (separation of variables inside the tube; J0, J1 from Hipparchus BesselJ). The test
  * {@code TwoTubeBesselFieldTest} checks that both agree where both converge.
  */
-final class TwoTubeBesselField implements AxialField {
+public final class TwoTubeBesselField implements AxialField {
 
     private static final double[] GL_X = {
         -0.9815606342467192, -0.9041172563704749, -0.7699026741943047, -0.5873179542866175,
@@ -37,7 +37,7 @@ final class TwoTubeBesselField implements AxialField {
     private final double[] zeros;
     private final double[] coefficients; // 1 / (j_n J1(j_n))
 
-    TwoTubeBesselField(double radius_m, double v1_V, double v2_V) {
+    public TwoTubeBesselField(double radius_m, double v1_V, double v2_V) {
         this(radius_m, v1_V, v2_V, 0.75 * radius_m);
     }
 
