@@ -2,10 +2,7 @@ package org.axistack.tune;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import org.axistack.field.BemSolver;
 import org.axistack.field.FieldSolution;
-import org.axistack.field.SolveProgress;
-import org.axistack.io.BuiltInStacks;
 import org.axistack.model.Stack;
 import org.axistack.optics.ParaxialOptics;
 import org.junit.jupiter.api.Test;
@@ -13,9 +10,9 @@ import org.junit.jupiter.api.Test;
 class DemoTuneTest {
 
     @Test
-    void demoLensHasBothEinzelSolutionsForTheScreen() throws Exception {
-        Stack stack = BuiltInStacks.demo();
-        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE);
+    void demoLensHasBothEinzelSolutionsForTheScreen() {
+        Stack stack = SolvedDemo.STACK;
+        FieldSolution sol = SolvedDemo.SOLUTION;
         BiasTuner tuner = new BiasTuner(sol, stack);
         TuneResult r = tuner.focus("focus", 0.035);
         for (int i = 0; i < 5; i++) {
