@@ -97,7 +97,7 @@ public final class BiasTuner {
                 double m0 = prev.getValue().miss();
                 double m1 = p.miss();
                 if (m1 == 0) {
-                    solutions.add(describe(electrode, index, p, target));
+                    solutions.add(describe(stack, electrode, index, p, target));
                 } else if (m0 != 0 && Math.signum(m0) != Math.signum(m1)) {
                     try {
                         double root = solver.solve(200, v -> {
@@ -107,13 +107,13 @@ public final class BiasTuner {
                             }
                             return q.miss();
                         }, prev.getKey(), e.getKey(), AllowedSolution.ANY_SIDE);
-                        solutions.add(describe(electrode, index, eval.apply(root), target));
+                        solutions.add(describe(stack, electrode, index, eval.apply(root), target));
                     } catch (IllegalStateException | MathIllegalStateException ex) {
                         // a reflecting island inside the bracket: no clean root here
                     }
                 }
             } else if (prev == null && p.valid() && p.miss() == 0) {
-                solutions.add(describe(electrode, index, p, target));
+                solutions.add(describe(stack, electrode, index, p, target));
             }
             prev = e;
         }
@@ -195,7 +195,8 @@ public final class BiasTuner {
         }
     }
 
-    private FocusSolution describe(String electrode, int index, FocusProbe.Point p, FocusTarget target) {
+    /** Full description of an evaluated bias set as a solution (cardinal elements, surface fields, crossings). */
+    static FocusSolution describe(Stack stack, String electrode, int index, FocusProbe.Point p, FocusTarget target) {
         double bias = p.biases_V()[index];
         double sign = stack.beam().particle().chargeSign();
         FocusSolution.Mode mode = sign * bias > 0 ? FocusSolution.Mode.DECELERATING : FocusSolution.Mode.ACCELERATING;

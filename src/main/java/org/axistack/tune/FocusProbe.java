@@ -5,6 +5,7 @@ import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
+import org.axistack.optics.StartPlaneException;
 import org.axistack.optics.TransferMatrix;
 
 /**
@@ -54,7 +55,8 @@ final class FocusProbe {
         ParaxialOptics optics;
         try {
             optics = ParaxialOptics.of(field, stack);
-        } catch (ReflectionException e) {
+        } catch (ReflectionException | StartPlaneException e) {
+            // a mirror, or reference planes that no longer enclose the beam start: no optics at these biases
             return new Point(biases_V, field, null, Double.NaN, Double.NaN);
         }
         double z = target.imageZ_m();
