@@ -106,7 +106,21 @@ public enum StackMessage {
     SET_BAD_NUMBER("--set {name}={value}: '{value}' is not a finite number of volts",
             "write a plain number of volts such as --set {name}=-1400"),
     SET_TWICE("--set gives electrode '{name}' two biases",
-            "give each electrode at most one --set");
+            "give each electrode at most one --set"),
+    REQ_NO_TABLE("the requirements file has no [{table}] table",
+            "add a [{table}] table; lens-library/requirements/ has a complete example"),
+    REQ_UNKNOWN_FAMILY("unknown lens family '{family}'{suggestion}",
+            "use one of: {allowed}"),
+    REQ_UNKNOWN_OBJECTIVE("unknown objective '{objective}'{suggestion}",
+            "use one of: {allowed}"),
+    REQ_RANGE_SHAPE("expected a size in mm or a range [min, max] in mm, found {found}",
+            "write {key} = [3.0, 8.0] to let the sizer vary it, or {key} = 4.0 to fix it"),
+    REQ_RANGE_ORDER("the range [{min}, {max}] mm has its lower end above its upper end",
+            "write the smaller value first"),
+    REQ_TARGET("the target gives {detail}",
+            "give image_z_mm (with object_z_mm for a finite object, without it for a parallel beam), or focal_length_mm alone"),
+    REQ_IMAGE_ORDER("image_z_mm ({image} mm) must lie after object_z_mm ({object} mm)",
+            "rays travel toward +z and the lens centre is at z = 0: put the object at negative z and the image at positive z");
 
     private static final Pattern PLACEHOLDER = Pattern.compile("\\{([a-zA-Z]+)}");
 

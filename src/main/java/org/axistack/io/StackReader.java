@@ -120,6 +120,42 @@ public final class StackReader {
 
     /** Parses the text of a stack file. */
     public static Stack parse(String text, String source) throws StackInputException {
+        TomlParseResult toml = toml(text, source);
+        return map(toml, source, text);
+    }
+
+    /** Reads a file's text with the size and UTF-8 checks of stack files. */
+    static String readText(Path file, String shownAs) throws StackInputException {
+        byte[] bytes;
+        try {
+            if (!Files.exists(file)) {
+                throw new StackInputException(StackMessage.FILE_NOT_FOUND, shownAs, 0, null, null, Map.of());
+            }
+            if (!Files.isRegularFile(file)) {
+                throw new StackInputException(StackMessage.FILE_UNREADABLE, shownAs, 0, null, null,
+                        Map.of("reason", "it is not a regular file"));
+            }
+            long size = Files.size(file);
+            if (size > Limits.MAX_FILE_BYTES) {
+                throw tooLarge(shownAs, size);
+            }
+            try (InputStream in = Files.newInputStream(file)) {
+                bytes = in.readNBytes((int) Limits.MAX_FILE_BYTES + 1);
+            }
+        } catch (NoSuchFileException e) {
+            throw new StackInputException(StackMessage.FILE_NOT_FOUND, shownAs, 0, null, null, Map.of());
+        } catch (IOException e) {
+            throw new StackInputException(StackMessage.FILE_UNREADABLE, shownAs, 0, null, null,
+                    Map.of("reason", String.valueOf(e.getMessage())));
+        }
+        if (bytes.length > Limits.MAX_FILE_BYTES) {
+            throw tooLarge(shownAs, bytes.length);
+        }
+        return decode(bytes, shownAs);
+    }
+
+    /** Checks and parses TOML text into a table, every problem a one-paragraph message. */
+    static TomlParseResult toml(String text, String source) throws StackInputException {
         if (text.length() > Limits.MAX_FILE_BYTES) {
             throw tooLarge(source, text.length());
         }
@@ -146,7 +182,7 @@ public final class StackReader {
         if (toml.isEmpty()) {
             throw new StackInputException(StackMessage.EMPTY_FILE, source, 0, null, null, Map.of());
         }
-        return map(toml, source, text);
+        return toml;
     }
 
     /** Cheap checks before the TOML parser, whose time grows faster than the input in some shapes. */
@@ -175,7 +211,7 @@ public final class StackReader {
         return msg == null ? "syntax error" : msg.replaceAll("\\s*\\(line \\d+, column \\d+\\)\\s*$", "");
     }
 
-    private static int lineOf(TomlTable t, String key) {
+    static int lineOf(TomlTable t, String key) {
         TomlPosition p = t.inputPositionOf(List.of(key));
         return p == null ? 0 : p.line();
     }
@@ -218,7 +254,7 @@ public final class StackReader {
         return new Stack(title == null ? "" : title, beam, electrodes, screen, mesh, limits);
     }
 
-    private static TomlTable table(TableFields top, String key, boolean required, String label)
+    static TomlTable table(TableFields top, String key, boolean required, String label)
             throws StackInputException {
         Object v = top.table().get(List.of(key));
         if (v == null) {
@@ -232,7 +268,12 @@ public final class StackReader {
     }
 
     private static Beam beam(TableFields b) throws StackInputException {
-        b.rejectUnknown(BEAM_KEYS);
+        return beam(b, BEAM_KEYS);
+    }
+
+    /** The [beam] table with the given allowed keys (requirements files allow fewer than stack files). */
+    static Beam beam(TableFields b, List<String> allowed) throws StackInputException {
+        b.rejectUnknown(allowed);
         String particle = b.requireString("particle", "\"electron\"");
         if (!PARTICLES.contains(particle)) {
             throw b.error(StackMessage.UNKNOWN_PARTICLE, "particle",

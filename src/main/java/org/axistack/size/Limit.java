@@ -1,0 +1,27 @@
+package org.axistack.size;
+
+/** The limits a design must respect, as named in output. */
+public enum Limit {
+    BIAS("supply (max_bias_V)", "V"),
+    SURFACE_FIELD("surface field (max_surface_field_V_per_mm)", "V/mm"),
+    LENGTH("overall length (max_length_mm)", "mm"),
+    BORE("bore (min_bore_radius_mm)", "mm"),
+    PLACEMENT("room between object and image (the stack must lie between them)", "mm");
+
+    private final String label;
+    private final String unit;
+
+    Limit(String label, String unit) {
+        this.label = label;
+        this.unit = unit;
+    }
+
+    public String label() {
+        return label;
+    }
+
+    /** Unit of the value and limit as shown to the user. */
+    public String unit() {
+        return unit;
+    }
+}
