@@ -79,7 +79,7 @@ public final class DesignEvaluator {
             return new Candidate(p, List.of(), "mesh: " + e.getMessage());
         }
         int biased = stack.indexOf(family.biasedElectrodes().get(0));
-        double[] biases = finder.focusingBiases(sol, stack, biased, FocusTarget.of(req), req.maxBias_V());
+        double[] biases = finder.focusingBiases(sol, stack, biased, FocusCondition.of(req), req.maxBias_V());
         if (nearBias != null && biases.length > 0) {
             double best = biases[0];
             for (double b : biases) {

@@ -18,5 +18,5 @@ public interface FocusFinder {
      * @param maxBias_V      biases are searched in [-maxBias, +maxBias]
      * @return every bias found, V, in increasing order (empty when none focuses)
      */
-    double[] focusingBiases(FieldSolution solution, Stack stack, int electrode, FocusTarget target, double maxBias_V);
+    double[] focusingBiases(FieldSolution solution, Stack stack, int electrode, FocusCondition target, double maxBias_V);
 }

@@ -12,7 +12,7 @@ import org.hipparchus.analysis.solvers.BrentSolver;
 import org.hipparchus.exception.MathRuntimeException;
 
 /**
- * Focusing biases by bracketing and refinement: the continuous residual of {@link FocusTarget} is sampled at
+ * Focusing biases by bracketing and refinement: the continuous residual of {@link FocusCondition} is sampled at
  * evenly spaced biases on each side of zero (biases that reflect the beam are skipped), and each sign change is
  * refined with Brent's method (R. P. Brent, Algorithms for Minimization without Derivatives, 1973; Hipparchus
  * implementation). A root narrower than the sample spacing can be missed; the sample count is a setting.
@@ -29,7 +29,7 @@ public final class ScanFocusFinder implements FocusFinder {
     }
 
     @Override
-    public double[] focusingBiases(FieldSolution solution, Stack stack, int electrode, FocusTarget target,
+    public double[] focusingBiases(FieldSolution solution, Stack stack, int electrode, FocusCondition target,
             double maxBias_V) {
         List<Double> roots = new ArrayList<>();
         for (int sign : new int[] {-1, 1}) {
@@ -50,7 +50,7 @@ public final class ScanFocusFinder implements FocusFinder {
         return roots.stream().mapToDouble(Double::doubleValue).sorted().toArray();
     }
 
-    private double refine(FieldSolution sol, Stack stack, int electrode, FocusTarget target, double b0, double b1) {
+    private double refine(FieldSolution sol, Stack stack, int electrode, FocusCondition target, double b0, double b1) {
         BrentSolver brent = new BrentSolver(1e-15, 1e-9 * Math.max(Math.abs(b0), Math.abs(b1)), 1e-13);
         try {
             return brent.solve(80, b -> {
@@ -66,7 +66,7 @@ public final class ScanFocusFinder implements FocusFinder {
     }
 
     /** The residual at one bias of the chosen electrode, NaN when the beam is reflected or the optics fail. */
-    static double residual(FieldSolution sol, Stack stack, int electrode, FocusTarget target, double bias_V) {
+    static double residual(FieldSolution sol, Stack stack, int electrode, FocusCondition target, double bias_V) {
         double[] b = stack.biases_V();
         b[electrode] = bias_V;
         try {

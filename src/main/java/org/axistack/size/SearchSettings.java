@@ -18,7 +18,7 @@ public record SearchSettings(int evaluations, int meshElements, int finalElement
     }
 
     public static SearchSettings defaults() {
-        return new SearchSettings(80, 500, 1200, 33, Runtime.getRuntime().availableProcessors());
+        return new SearchSettings(30, 250, 600, 16, Runtime.getRuntime().availableProcessors());
     }
 
     public SearchSettings withEvaluations(int n) {

@@ -16,10 +16,10 @@ import org.axistack.optics.TransferMatrix;
  * @param imageZ_m      image plane, m (empty when a focal length is asked for)
  * @param focalLength_m image-side focal length asked for, m (empty when an image plane is given)
  */
-public record FocusTarget(OptionalDouble objectZ_m, OptionalDouble imageZ_m, OptionalDouble focalLength_m) {
+public record FocusCondition(OptionalDouble objectZ_m, OptionalDouble imageZ_m, OptionalDouble focalLength_m) {
 
-    public static FocusTarget of(Requirements r) {
-        return new FocusTarget(r.objectZ_m(), r.imageZ_m(), r.focalLength_m());
+    public static FocusCondition of(Requirements r) {
+        return new FocusCondition(r.objectZ_m(), r.imageZ_m(), r.focalLength_m());
     }
 
     /** The residual for a lens; zero when the condition is met. */
