@@ -47,6 +47,7 @@ class StackMessageCatalogueTest {
         Set<StackMessage> covered = MalformedStacks.cases().stream().map(MalformedStacks.Case::id)
                 .collect(Collectors.toCollection(() -> EnumSet.noneOf(StackMessage.class)));
         covered.addAll(BiasOverridesTest.COVERED);
+        covered.addAll(RequirementsReaderTest.COVERED);
         // FILE_NOT_FOUND and FILE_UNREADABLE are covered by MalformedStackTest.missingFileAndFolderGiveExitTwo;
         // MODEL_REJECTED is the safety net for model checks the reader does not repeat.
         covered.addAll(EnumSet.of(StackMessage.FILE_NOT_FOUND, StackMessage.FILE_UNREADABLE, StackMessage.MODEL_REJECTED));
