@@ -1,5 +1,6 @@
 package org.axistack.beam;
 
+import org.axistack.verify.Erfi;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 

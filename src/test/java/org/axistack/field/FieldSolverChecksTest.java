@@ -11,7 +11,7 @@ import org.axistack.model.Electrode;
 import org.axistack.model.MeshSettings;
 import org.axistack.model.Segment;
 import org.axistack.model.ZR;
-import org.axistack.reference.TwoTubeBesselPotential;
+import org.axistack.verify.TwoTubeBesselPotential;
 import org.junit.jupiter.api.Test;
 
 /** The boundary-element solver against classical closed forms. */
@@ -77,7 +77,7 @@ class FieldSolverChecksTest {
     @Test
     void twoTubeSmallGapMatchesBesselIntegral() {
         double radius = 0.005, gap = 0.00002;
-        TwoTubeBesselPotential ref = new TwoTubeBesselPotential(-300, 700, radius, gap);
+        TwoTubeBesselPotential ref = new TwoTubeBesselPotential(radius, -300, 700, gap);
         BiasedField f = solve(twoTubes(radius, 0.06, gap, -300, 700), 900, 12).biased();
         for (double z = -2 * radius; z <= 2 * radius + 1e-12; z += radius / 8) {
             assertThat(Math.abs(f.axialPotential_V(z) - ref.derivative(z, 0))).isLessThan(1e-5 * 1000);
@@ -92,7 +92,7 @@ class FieldSolverChecksTest {
     @Test
     void convergenceAgainstZeroGapBesselIntegral() {
         double radius = 0.005, g1 = 0.00004, g2 = 0.00002;
-        TwoTubeBesselPotential ref = new TwoTubeBesselPotential(0, 1, radius, 0);
+        TwoTubeBesselPotential ref = new TwoTubeBesselPotential(radius, 0, 1);
         double previous = Double.POSITIVE_INFINITY;
         System.out.println("unknowns, max axial error / (V2-V1) over |z| <= 2R (zero-gap extrapolated)");
         for (int n : new int[] {300, 600, 1200}) {

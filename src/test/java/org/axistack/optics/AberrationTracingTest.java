@@ -1,5 +1,6 @@
 package org.axistack.optics;
 
+import org.axistack.verify.TwoTubeBesselPotential;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
@@ -31,8 +32,8 @@ class AberrationTracingTest {
                 Arguments.of("decelerating immersion, proton 10 keV", AnalyticAxialField.tanhStep(0, 6000, 3e-3), p, 10000.0),
                 Arguments.of("strong accelerating bump, proton 1 keV (real focus inside the field)",
                         AnalyticAxialField.gaussian(-6000, 4e-3), p, 1000.0),
-                Arguments.of("zero-gap two-tube lens R 5 mm 1:5, electron 5 keV", new TwoTubeBesselField(5e-3, 0, 20000), e, 5000.0),
-                Arguments.of("zero-gap two-tube lens R 5 mm 5:1, proton 25 keV", new TwoTubeBesselField(5e-3, 0, 20000), p, 25000.0));
+                Arguments.of("zero-gap two-tube lens R 5 mm 1:5, electron 5 keV", new TwoTubeBesselPotential(5e-3, 0, 20000), e, 5000.0),
+                Arguments.of("zero-gap two-tube lens R 5 mm 5:1, proton 25 keV", new TwoTubeBesselPotential(5e-3, 0, 20000), p, 25000.0));
     }
 
     @ParameterizedTest(name = "{0}")

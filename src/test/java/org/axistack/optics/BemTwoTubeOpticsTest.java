@@ -1,5 +1,6 @@
 package org.axistack.optics;
 
+import org.axistack.verify.TwoTubeBesselPotential;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
@@ -17,7 +18,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Issue 4: focal properties of a small-gap two-tube lens computed by the project from its boundary-element field,
  * against the same properties computed from the zero-gap Bessel-integral axial potential
- * ({@link TwoTubeBesselField}, classical solution), within 1e-4 relative. The 0.02 mm gap changes the axial
+ * ({@link TwoTubeBesselPotential}, classical solution), within 1e-4 relative. The 0.02 mm gap changes the axial
  * potential by about 1e-6 of V2 - V1 (field package measurement), far below the tolerance.
  */
 class BemTwoTubeOpticsTest {
@@ -37,7 +38,7 @@ class BemTwoTubeOpticsTest {
         ParaxialOptics fromBem = ParaxialOptics.of(bem, stack);
         CardinalElements b = fromBem.cardinal();
         // the same planes for the reference (both fields are field-free there to ~1e-10)
-        ParaxialOptics fromBessel = ParaxialOptics.of(new TwoTubeBesselField(R, 0, v2), beam,
+        ParaxialOptics fromBessel = ParaxialOptics.of(new TwoTubeBesselPotential(R, 0, v2), beam,
                 fromBem.zStart_m(), fromBem.zEnd_m());
         CardinalElements ref = fromBessel.cardinal();
         System.out.printf("BEM two-tube: planes %.3f..%.3f mm, f1 %.6f mm (ref %.6f), f2 %.6f mm (ref %.6f),"

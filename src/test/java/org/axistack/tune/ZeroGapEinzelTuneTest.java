@@ -15,7 +15,7 @@ import org.axistack.model.Particle;
 import org.axistack.model.Stack;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.ParaxialOptics;
-import org.axistack.optics.TwoTubeBesselField;
+import org.axistack.verify.TwoTubeBesselPotential;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -24,7 +24,7 @@ import org.junit.jupiter.api.Test;
  * project's boundary-element field, against an independent computation of where the found bias images the
  * object: the zero-gap axial potential of the same lens as the superposition of two two-tube Bessel-integral
  * steps (0 to V at the first gap, 0 to -V at the second; classical solution, E. Harting and F. H. Read,
- * Electrostatic Lenses, 1976, from memory; reference implementation {@link TwoTubeBesselField}, itself checked
+ * Electrostatic Lenses, 1976, from memory; reference implementation {@link TwoTubeBesselPotential}, itself checked
  * against the eigenfunction series), traced by the paraxial optics between the same planes. Superposition is exact
  * for equal-radius tubes (the wall potential is the sum of the two steps' wall potentials). The 0.02 mm gaps change
  * the axial potential by about 1e-6 of the bias (optics package measurement), far below the 1e-4 tolerance.
@@ -53,8 +53,8 @@ class ZeroGapEinzelTuneTest {
 
     /** Reference axial potential of the zero-gap lens with the centre tube at bias_V. */
     private static AxialField reference(double bias_V) {
-        TwoTubeBesselField up = new TwoTubeBesselField(R, 0, bias_V);
-        TwoTubeBesselField down = new TwoTubeBesselField(R, 0, -bias_V);
+        TwoTubeBesselPotential up = new TwoTubeBesselPotential(R, 0, bias_V);
+        TwoTubeBesselPotential down = new TwoTubeBesselPotential(R, 0, -bias_V);
         double[] tmp = new double[8];
         return (z, order, out) -> {
             up.axial(z + CENTRE / 2, order, out);

@@ -1,4 +1,4 @@
-package org.axistack.beam;
+package org.axistack.verify;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;

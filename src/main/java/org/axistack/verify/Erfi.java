@@ -1,16 +1,16 @@
-package org.axistack.beam;
+package org.axistack.verify;
 
 /**
  * Imaginary error function erfi(x) = -i erf(ix) = (2/sqrt(pi)) sum_n x^(2n+1) / (n! (2n+1)), the
  * Maclaurin series of erf (Abramowitz and Stegun, Handbook of Mathematical Functions, eq. 7.1.5) with
  * z = ix. All terms are positive, so the sum has no cancellation; it is checked against direct
- * quadrature of (2/sqrt(pi)) Integral_0^x exp(t^2) dt in {@link ErfiTest}.
+ * quadrature of (2/sqrt(pi)) Integral_0^x exp(t^2) dt in the tests (ErfiTest).
  */
-final class Erfi {
+public final class Erfi {
     private Erfi() {
     }
 
-    static double erfi(double x) {
+    public static double erfi(double x) {
         double x2 = x * x;
         double term = x; // x^(2n+1)/n!
         double sum = 0;
