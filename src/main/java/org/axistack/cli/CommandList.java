@@ -18,6 +18,7 @@ final class CommandList {
                 new TraceCommand(),
                 new EnvelopeCommand(),
                 new SizeCommand(),
-                new BenchCommand());
+                new BenchCommand(),
+                new CheckCommand());
     }
 }

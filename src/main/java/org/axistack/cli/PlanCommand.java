@@ -6,17 +6,15 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackInputException;
 import org.axistack.io.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
 import org.axistack.model.Stack;
-import org.axistack.report.ChartFiles;
-import org.axistack.report.GeometryChart;
+import org.axistack.report.HtmlReport;
+import org.axistack.report.LensPlan;
 import org.axistack.report.SafetyNotice;
-import org.jfree.chart.JFreeChart;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -24,13 +22,20 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
-/** {@code plan [STACK] [--out DIR]}: the main job. So far: load, validate, summarise, draw the geometry. */
+/**
+ * {@code plan [STACK] [--out DIR]}: the main job. Solves the field once, then the paraxial optics, aberrations,
+ * spot-size budget, surface fields, a ray fan, the envelope, the focusing bias and the verification cases; prints a
+ * summary and writes the HTML report with figures and CSV tables to DIR. Exit 1 when the beam is reflected or the
+ * lens has no real focus (the report is still written).
+ */
 @Command(name = "plan", mixinStandardHelpOptions = true,
-        description = {"The main job: check a lens stack, summarise it, draw its geometry.",
+        description = {"The main job: a complete lens plan with its own verification.",
             "",
-            "Loads and validates STACK (the built-in demo lens when omitted), prints the beam, the electrodes "
-                    + "and the largest voltage per gap length, and the high-voltage cautions. With --out it "
-                    + "writes the meridian cross-section to DIR/geometry.png and DIR/geometry.svg."})
+            "Solves STACK (the built-in demo lens when omitted) and reports the cardinal elements, the image of the",
+            "stack's object, Cs and Cc, a spot-size budget, the bias of the strongest electrode that focuses on the",
+            "screen, electrode surface fields against the limits, the beam envelope and warnings; runs the built-in",
+            "verification cases; writes DIR/report.html with figures (PNG, SVG) and CSV tables beside it.",
+            "Exit 1 when the beam is reflected or the lens does not focus (the report is still written)."})
 final class PlanCommand implements Callable<Integer> {
 
     @Spec
@@ -39,40 +44,70 @@ final class PlanCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
-    @Option(names = "--out", paramLabel = "DIR", description = "Folder for the output files (created if missing).")
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "plan-out",
+            description = "Folder for the report and its files (created if missing; default ${DEFAULT-VALUE}).")
     Path out;
+
+    @Option(names = "--energy-spread", paramLabel = "EV", defaultValue = "1",
+            description = "Full energy spread of the beam for the chromatic disc, eV (default ${DEFAULT-VALUE}).")
+    double energySpread_eV;
+
+    @Option(names = "--current", paramLabel = "A", defaultValue = "1e-5",
+            description = "Beam current for the envelope, A (default ${DEFAULT-VALUE}).")
+    double current_A;
+
+    @Option(names = "--emittance", paramLabel = "MM_MRAD", defaultValue = "1",
+            description = "Edge emittance for the envelope, mm mrad, geometric at the start (default ${DEFAULT-VALUE}).")
+    double emittance_mm_mrad;
+
+    @Option(names = "--tune", paramLabel = "NAME",
+            description = "Electrode whose bias is tuned to focus on the screen (default: the one with the largest |bias|).")
+    String tune;
+
+    @Option(names = "--no-check", description = "Skip the built-in verification cases (faster; the report says so).")
+    boolean noCheck;
+
+    @Option(names = {"-q", "--quiet"}, description = "No progress lines on the error stream.")
+    boolean quiet;
 
     @Override
     public Integer call() throws StackInputException {
         Stack stack = input.loadOrDemo();
-        PrintWriter w = spec.commandLine().getOut();
-        summary(w, stack, input.shownAs());
-        if (out != null) {
-            writeGeometry(stack, w);
+        CommandLine cl = spec.commandLine();
+        if (!(energySpread_eV >= 0) || !(current_A >= 0) || !(emittance_mm_mrad >= 0) || !Double.isFinite(
+                energySpread_eV + current_A + emittance_mm_mrad)) {
+            throw new CommandLine.ParameterException(cl, "--energy-spread, --current and --emittance must be finite "
+                    + "and >= 0");
         }
-        w.println();
-        w.println(SafetyNotice.text());
-        return 0;
-    }
-
-    private void writeGeometry(Stack stack, PrintWriter w) {
+        if (tune != null && stack.indexOf(tune) < 0) {
+            throw new CommandLine.ParameterException(cl, "--tune " + tune + ": no electrode of that name; the stack has "
+                    + String.join(", ", stack.names()));
+        }
+        if (Files.exists(out) && !Files.isDirectory(out)) {
+            throw new CommandLine.ParameterException(cl, "--out " + out + " exists and is not a folder; choose a folder");
+        }
+        PrintWriter w = cl.getOut();
+        LensPlan plan = PlanAnalysis.run(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV, current_A,
+                emittance_mm_mrad * 1e-6, tune, !noCheck), cl.getErr(), quiet);
+        summary(w, stack, input.shownAs());
+        PlanSummary.print(w, plan);
+        Path html;
         try {
-            if (Files.exists(out) && !Files.isDirectory(out)) {
-                throw new IOException("it exists and is not a folder");
-            }
-            Files.createDirectories(out);
-            JFreeChart chart = GeometryChart.create(stack);
-            int[] size = GeometryChart.preferredSize(stack);
-            Path png = AtomicFiles.inside(out, "geometry.png");
-            Path svg = AtomicFiles.inside(out, "geometry.svg");
-            ChartFiles.writePng(chart, size[0], size[1], png);
-            ChartFiles.writeSvg(chart, size[0], size[1], svg);
-            w.println();
-            w.println("Geometry picture: " + png + " and " + svg);
-        } catch (IOException e) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
+            html = HtmlReport.write(plan, out);
+        } catch (IOException | java.io.UncheckedIOException e) {
+            throw new CommandLine.ParameterException(cl,
                     "--out " + out + ": cannot write there (" + e.getMessage() + "); choose a folder you can write to");
         }
+        w.println();
+        w.println("Report: " + html.toAbsolutePath().normalize() + " (figures and CSV tables beside it)");
+        w.println();
+        w.println(SafetyNotice.text());
+        if (plan.needsAction()) {
+            throw new OutcomeException(plan.reflection().isPresent()
+                    ? "the beam is reflected (see the report): lower the retarding bias or raise the beam energy"
+                    : "the lens does not focus: change the biases (e.g. with --set) to get a real focus");
+        }
+        return 0;
     }
 
     static void summary(PrintWriter w, Stack s, String source) {

@@ -41,6 +41,7 @@ public final class GeometryChart {
     private static final Color GROUND = new Color(0x8C8C8C);
     private static final Color POSITIVE = new Color(0xC0502A);
     private static final Color NEGATIVE = new Color(0x2F6DB0);
+    private static final Color RAY = new Color(0x3A7D44);
     private static final Font LABEL_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
 
     private GeometryChart() {
@@ -101,6 +102,35 @@ public final class GeometryChart {
         String title = stack.title().isBlank() ? "Electrode stack" : stack.title();
         chart.addSubtitle(new TextTitle(title + ": meridian section (mirrored about the axis)",
                 new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        return chart;
+    }
+
+    /**
+     * The stack's chart with traced ray paths drawn over it (z, x in the meridian plane; each path as a list of
+     * {z_m, x_m} points). Rays are drawn in one dark colour, thin, under the electrode outlines.
+     */
+    public static JFreeChart withRays(Stack stack, List<List<double[]>> paths, String caption) {
+        JFreeChart chart = create(stack);
+        XYPlot plot = chart.getXYPlot();
+        XYSeriesCollection rays = new XYSeriesCollection();
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
+        int k = 0;
+        for (List<double[]> path : paths) {
+            XYSeries s = new XYSeries("ray " + k, false);
+            for (double[] p : path) {
+                s.add(Units.mToMm(p[0]), Units.mToMm(p[1]));
+            }
+            rays.addSeries(s);
+            r.setSeriesPaint(k, RAY);
+            r.setSeriesStroke(k, new BasicStroke(0.9f));
+            k++;
+        }
+        r.setDefaultSeriesVisibleInLegend(false);
+        plot.setDataset(1, rays);
+        plot.setRenderer(1, r);
+        if (caption != null && !caption.isBlank()) {
+            chart.addSubtitle(new TextTitle(caption, LABEL_FONT));
+        }
         return chart;
     }
 

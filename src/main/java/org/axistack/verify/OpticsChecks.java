@@ -58,7 +58,7 @@ final class OpticsChecks {
         double expected = r0 + s0 * Math.sqrt(uStar0) * integral;
         return new CheckResult("uniform-field paraxial ray",
                 "ray height after 0.5 m of a 200 kV/m field, 2 keV electron (relativistic)", "mm", ray[0] * 1e3,
-                expected * 1e3, Math.abs(ray[0] - expected) / Math.abs(r0), 1e-8, "relative to the start height",
+                expected * 1e3, Math.abs(ray[0] - expected) / Math.abs(r0), 1e-10, "relative to the start height",
                 "closed form: sqrt(U*) r' conserved, elementary integral (e.g. Hawkes and Kasper, Principles of "
                         + "Electron Optics, vol. 1, ch. 15, from memory)",
                 "paraxial ray equation, relative tolerance " + optics.settings().relativeTolerance(), FieldChecks.seconds(t0));
@@ -81,7 +81,7 @@ final class OpticsChecks {
         return new CheckResult("Helmholtz-Lagrange f2/f1",
                 String.format(Locale.ROOT, "f2/f1 of a 1:5 accelerating two-tube lens (f1 = %.2f mm, f2 = %.2f mm)",
                         c.focalLengthObject_m() * 1e3, c.focalLengthImage_m() * 1e3),
-                "1", ratio, expected, Math.abs(ratio - expected) / expected, 1e-6, "relative",
+                "1", ratio, expected, Math.abs(ratio - expected) / expected, 1e-8, "relative",
                 "f2/f1 = sqrt(U2*/U1*), Helmholtz-Lagrange (physics brief; Hawkes and Kasper, ch. 16, from memory)",
                 "boundary elements (" + s.unknowns() + " unknowns), principal rays of the paraxial equation",
                 FieldChecks.seconds(t0));
@@ -115,7 +115,7 @@ final class OpticsChecks {
         }
         return new CheckResult("universal beam-spread curve",
                 String.format(Locale.ROOT, "z where the envelope reaches R = %.3f mm (10 keV protons, 1 mA, R0 1 mm, "
-                        + "perveance %.3g)", worstR * 1e3, k), "mm", worstZ * 1e3, worstRef * 1e3, worst, 1e-5,
+                        + "perveance %.3g)", worstR * 1e3, k), "mm", worstZ * 1e3, worstRef * 1e3, worst, 1e-8,
                 "max over the curve beyond 50 mm, relative",
                 "z = R0 sqrt(pi/(2K)) erfi(sqrt(ln(R/R0))), classical (M. Reiser, Theory and Design of Charged "
                         + "Particle Beams, 2nd ed., sec. 4.2, from memory)",

@@ -18,7 +18,7 @@ class VerificationSuiteTest {
                     r.name(), r.computed(), r.reference(), r.error(), r.tolerance(), r.seconds());
         }
         System.out.printf(java.util.Locale.ROOT, "suite %.2f s%n", (System.nanoTime() - t0) * 1e-9);
-        assertThat(results).hasSize(8);
+        assertThat(results).hasSize(7);
         assertThat(results).allSatisfy(r -> {
             assertThat(r.passed()).as(r.name() + " error " + r.error()).isTrue();
             assertThat(r.source()).isNotBlank();

@@ -1,0 +1,124 @@
+package org.axistack.cli;
+
+import java.io.PrintWriter;
+import java.util.Locale;
+
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.optics.Aberrations;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.Imaging;
+import org.axistack.optics.SpotSizeBudget;
+import org.axistack.report.LensPlan;
+import org.axistack.tune.FocusSolution;
+import org.axistack.tune.SurfaceFieldCheck;
+import org.axistack.tune.TuneResult;
+import org.axistack.verify.CheckResult;
+
+/** The plan's console summary after the stack summary: optics, spot budget, tuning, surface fields, warnings. */
+final class PlanSummary {
+    private PlanSummary() {
+    }
+
+    static void print(PrintWriter w, LensPlan p) {
+        w.println();
+        w.println(String.format(Locale.ROOT, "Field: %d unknowns, collocation residual %.1e, axial expansion error %.1e",
+                p.solution().unknowns(), p.solution().residual(), p.field().axialExpansionError()));
+        if (p.reflection().isPresent()) {
+            w.println("REFLECTED: " + p.reflection().get());
+        }
+        p.cardinal().ifPresent(c -> cardinal(w, c, p));
+        p.imaging().ifPresent(im -> imaging(w, im));
+        p.aberrations().ifPresent(a -> aberrations(w, a));
+        spot(w, p);
+        tuning(w, p);
+        surfaceFields(w, p);
+        if (!p.checks().isEmpty()) {
+            long passed = p.checks().stream().filter(CheckResult::passed).count();
+            w.println("Verification: " + passed + " of " + p.checks().size() + " closed-form cases within tolerance"
+                    + " (table in the report; 'check' prints it)");
+        }
+        w.println(p.warnings().isEmpty() ? "Warnings: none" : "Warnings:");
+        for (String s : p.warnings()) {
+            w.println("  ! " + s);
+        }
+    }
+
+    private static void cardinal(PrintWriter w, CardinalElements c, LensPlan p) {
+        w.println("Cardinal elements (lens " + c.kind().name().toLowerCase(Locale.ROOT) + "; mm, stack z coordinates):");
+        w.println("                          object side    image side");
+        row(w, "focal length f1, f2", c.focalLengthObject_m(), c.focalLengthImage_m());
+        row(w, "focal point F1, F2", c.focalPointObjectZ_m(), c.focalPointImageZ_m());
+        row(w, "principal plane H1, H2", c.principalPlaneObjectZ_m(), c.principalPlaneImageZ_m());
+        row(w, "real axis crossing", c.realFocusObjectZ_m().orElse(Double.NaN), c.realFocusImageZ_m().orElse(Double.NaN));
+        w.println("  " + p.optics());
+    }
+
+    private static void row(PrintWriter w, String label, double a, double b) {
+        w.println(String.format(Locale.ROOT, "  %-22s %13s %13s", label, g(Units.mToMm(a)), g(Units.mToMm(b))));
+    }
+
+    private static void imaging(PrintWriter w, Imaging im) {
+        w.println(String.format(Locale.ROOT, "Image of the object at z = %s mm: z = %s mm, lateral magnification %s",
+                g(Units.mToMm(im.objectZ_m())), g(Units.mToMm(im.imageZ_m())), g(im.lateralMagnification())));
+    }
+
+    private static void aberrations(PrintWriter w, Aberrations a) {
+        w.println(String.format(Locale.ROOT, "Aberrations: Cs = %s mm, Cc = %s mm (image side, object at infinity)",
+                g(Units.mToMm(a.sphericalImage_m())), g(Units.mToMm(a.chromaticImage_m()))));
+        if (a.objectZ_m().isPresent()) {
+            w.println(String.format(Locale.ROOT, "  object side: Cs_o = %s mm, Cc_o = %s mm",
+                    g(Units.mToMm(a.sphericalObject_m().getAsDouble())), g(Units.mToMm(a.chromaticObject_m().getAsDouble()))));
+        }
+        w.println("  convention: " + a.convention());
+    }
+
+    private static void spot(PrintWriter w, LensPlan p) {
+        if (p.spotInputs().isEmpty()) {
+            return;
+        }
+        w.println(String.format(Locale.ROOT, "Spot-size budget at the focus (diameters, um; dT/T = %.3g, point source):",
+                p.spotInputs().get().energySpread()));
+        w.println("  alpha_mrad   spherical   chromatic       total");
+        for (SpotSizeBudget.Row r : p.spotRows()) {
+            w.println(String.format(Locale.ROOT, "  %10s %11s %11s %11s", g(Units.radToMrad(r.alpha_rad())),
+                    g(r.spherical_m() * 1e6), g(r.chromatic_m() * 1e6), g(r.total_m() * 1e6)));
+        }
+    }
+
+    private static void tuning(PrintWriter w, LensPlan p) {
+        w.println("Focusing bias: " + p.tuneNote());
+        if (p.tune().isEmpty()) {
+            return;
+        }
+        TuneResult t = p.tune().get();
+        for (FocusSolution f : t.solutions()) {
+            w.println(String.format(Locale.ROOT, "  %s = %s V (%s): image at %s mm, magnification %s, max surface field "
+                    + "%s V/mm on %s%s", f.electrode(), g(f.bias_V()), f.mode().name().toLowerCase(Locale.ROOT),
+                    g(Units.mToMm(f.imageZ_m())), f.magnification() == 0 || !Double.isFinite(f.magnification()) ? "- (object at infinity)" : g(f.magnification()), g(Units.vPerMToVPerMm(f.maxSurfaceField_V_per_m())),
+                    f.worstElectrode(), f.surfaceFieldCheck().warning() ? " (above the " + (f.surfaceFieldCheck()
+                            == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort") + " limit)" : ""));
+        }
+        if (!t.found()) {
+            w.println("  none in range" + t.nearest().map(n -> String.format(Locale.ROOT,
+                    "; closest: %s V puts the image at %s mm", g(n.bias_V()), g(Units.mToMm(n.imageZ_m())))).orElse(""));
+        }
+    }
+
+    private static void surfaceFields(PrintWriter w, LensPlan p) {
+        Stack s = p.stack();
+        double[] max = p.field().maxSurfaceFieldPerElectrode_V_per_m();
+        w.println(String.format(Locale.ROOT, "Surface fields (limits: comfort %s V/mm, aggressive %s V/mm):",
+                g(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())), g(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))));
+        for (int i = 0; i < max.length; i++) {
+            SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], s.limits());
+            w.println(String.format(Locale.ROOT, "  %-14s %12s V/mm  %5.1f%% of comfort  %s", s.electrodes().get(i).name(),
+                    g(Units.vPerMToVPerMm(max[i])), 100 * max[i] / s.limits().comfort_V_per_m(),
+                    c.name().toLowerCase(Locale.ROOT).replace('_', ' ')));
+        }
+    }
+
+    private static String g(double x) {
+        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.6g", x) : "-";
+    }
+}

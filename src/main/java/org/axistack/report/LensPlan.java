@@ -1,0 +1,61 @@
+package org.axistack.report;
+
+import java.util.List;
+import java.util.Optional;
+
+import org.axistack.beam.EnvelopeStudyResult;
+import org.axistack.field.BiasedField;
+import org.axistack.field.FieldSolution;
+import org.axistack.model.Stack;
+import org.axistack.optics.Aberrations;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.Imaging;
+import org.axistack.optics.SpotSizeBudget;
+import org.axistack.trace.Trajectory;
+import org.axistack.tune.TuneResult;
+import org.axistack.verify.CheckResult;
+
+/**
+ * Everything a lens plan computed, for the console summary and the HTML report. Parts that could not be computed
+ * are empty and the reason is in {@code notes} or {@code warnings}; nothing is filled with a stand-in.
+ *
+ * @param stack        the stack as planned (biases after --set)
+ * @param source       how the stack was named (file or built-in demo)
+ * @param solution     the field solution (one per geometry)
+ * @param field        the solution at the stack's biases
+ * @param reflection   the reflection message when the beam turns back on the axis
+ * @param cardinal     cardinal elements (empty when reflected)
+ * @param optics       reference planes, integrator and aberration convention in words
+ * @param imaging      the image of the stack's object point, if it has one
+ * @param aberrations  Cs and Cc (empty for an afocal lens or when reflected)
+ * @param spotInputs   the spot-size budget inputs (empty without aberrations)
+ * @param spotRows     the spot-size budget against aperture half-angle
+ * @param rays         traced meridional rays with their paths (for the geometry picture)
+ * @param rayNote      what the rays are and how they ended
+ * @param envelope     the envelope study with the documented default beam
+ * @param envelopeNote what beam the envelope assumes
+ * @param tune         the biases of one electrode that focus on the screen, if asked for and possible
+ * @param tuneNote     what was tuned, or why not
+ * @param checks       the built-in verification cases
+ * @param warnings     things the user must look at
+ * @param seconds      wall time of the whole plan, s
+ */
+public record LensPlan(Stack stack, String source, FieldSolution solution, BiasedField field,
+        Optional<String> reflection, Optional<CardinalElements> cardinal, String optics, Optional<Imaging> imaging,
+        Optional<Aberrations> aberrations, Optional<SpotSizeBudget.Inputs> spotInputs, List<SpotSizeBudget.Row> spotRows,
+        List<Trajectory> rays, String rayNote, Optional<EnvelopeStudyResult> envelope, String envelopeNote,
+        Optional<TuneResult> tune, String tuneNote, List<CheckResult> checks, List<String> warnings, double seconds) {
+
+    public LensPlan {
+        spotRows = List.copyOf(spotRows);
+        rays = List.copyOf(rays);
+        checks = List.copyOf(checks);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** True when the plan has an outcome the user must act on (reflection or no real focus). */
+    public boolean needsAction() {
+        return reflection.isPresent() || cardinal.map(c -> c.kind() != CardinalElements.Kind.CONVERGING
+                && c.realFocusImageZ_m().isEmpty()).orElse(true);
+    }
+}

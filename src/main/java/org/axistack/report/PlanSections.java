@@ -1,0 +1,176 @@
+package org.axistack.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.axistack.field.FieldSolution;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.optics.Aberrations;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.Imaging;
+import org.axistack.optics.SpotSizeBudget;
+import org.axistack.tune.FocusSolution;
+import org.axistack.tune.SurfaceFieldCheck;
+import org.axistack.tune.TuneResult;
+
+/** The report's table sections (optics, spot budget, tuning, surface fields, capacitance, method). */
+final class PlanSections {
+    private PlanSections() {
+    }
+
+    static void optics(StringBuilder b, LensPlan plan) {
+        b.append("<h2>Cardinal elements</h2>\n");
+        if (plan.reflection().isPresent()) {
+            b.append("<p class=\"warn\">").append(Html.esc(plan.reflection().get())).append("</p>\n");
+            return;
+        }
+        if (plan.cardinal().isEmpty()) {
+            b.append("<p class=\"warn\">").append(Html.esc(plan.optics())).append("</p>\n");
+            return;
+        }
+        CardinalElements c = plan.cardinal().get();
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(List.of("focal length f1, f2 (mm)", HtmlReport.mm(c.focalLengthObject_m()), HtmlReport.mm(c.focalLengthImage_m())));
+        rows.add(List.of("focal point F1, F2 (z, mm)", HtmlReport.mm(c.focalPointObjectZ_m()), HtmlReport.mm(c.focalPointImageZ_m())));
+        rows.add(List.of("principal plane H1, H2 (z, mm)", HtmlReport.mm(c.principalPlaneObjectZ_m()),
+                HtmlReport.mm(c.principalPlaneImageZ_m())));
+        rows.add(List.of("real axis crossing (z, mm)", c.realFocusObjectZ_m().isPresent()
+                ? HtmlReport.mm(c.realFocusObjectZ_m().getAsDouble()) : "-", c.realFocusImageZ_m().isPresent()
+                ? HtmlReport.mm(c.realFocusImageZ_m().getAsDouble()) : "-"));
+        rows.add(List.of("acceleration potential U (V)", Html.g(c.uObject_V()), Html.g(c.uImage_V())));
+        b.append("<p>Lens ").append(c.kind().name().toLowerCase(Locale.ROOT)).append(" (asymptotic cardinal elements "
+                + "in the stack's z coordinates; focal lengths positive when converging).</p>\n");
+        b.append(Html.table(List.of("", "object side", "image side"), rows));
+        if (plan.imaging().isPresent()) {
+            Imaging im = plan.imaging().get();
+            b.append(Html.table(List.of("object z (mm)", "image z (mm)", "lateral magnification", "angular magnification"),
+                    List.of(List.of(HtmlReport.mm(im.objectZ_m()), HtmlReport.mm(im.imageZ_m()),
+                            Html.g(im.lateralMagnification()), Html.g(im.angularMagnification())))));
+        } else {
+            b.append("<p class=\"note\">Object at infinity (parallel beam): the image is the focal point F2.</p>\n");
+        }
+        b.append("<h2>Aberrations</h2>\n");
+        if (plan.aberrations().isEmpty()) {
+            b.append("<p class=\"note\">Undefined for an afocal lens.</p>\n");
+            return;
+        }
+        Aberrations a = plan.aberrations().get();
+        List<List<String>> ab = new ArrayList<>();
+        ab.add(List.of("spherical Cs (mm)", HtmlReport.mm(a.sphericalImage_m()),
+                a.sphericalObject_m().isPresent() ? HtmlReport.mm(a.sphericalObject_m().getAsDouble()) : "-"));
+        ab.add(List.of("chromatic Cc (mm)", HtmlReport.mm(a.chromaticImage_m()),
+                a.chromaticObject_m().isPresent() ? HtmlReport.mm(a.chromaticObject_m().getAsDouble()) : "-"));
+        b.append(Html.table(List.of("", "image side (object at infinity)", "object side (finite object)"), ab));
+        b.append("<p class=\"note\">Convention: ").append(Html.esc(a.convention()))
+                .append(String.format(Locale.ROOT, ". Quadrature change at the last refinement %.1e.", a.quadratureChange()))
+                .append("</p>\n");
+    }
+
+    static void spot(StringBuilder b, LensPlan plan) {
+        if (plan.spotInputs().isEmpty()) {
+            return;
+        }
+        SpotSizeBudget.Inputs in = plan.spotInputs().get();
+        b.append("<h2>Spot-size budget</h2>\n");
+        List<List<String>> rows = new ArrayList<>();
+        for (SpotSizeBudget.Row r : plan.spotRows()) {
+            rows.add(List.of(Html.g(Units.radToMrad(r.alpha_rad())), um(r.spherical_m()), um(r.chromatic_m()),
+                    um(r.total_m())));
+        }
+        b.append(Html.table(List.of("half-angle alpha (mrad)", "spherical disc Cs a^3/2 (um)",
+                "chromatic disc Cc a dT/T (um)", "total, in quadrature (um)"), rows));
+        b.append(String.format(Locale.ROOT, "<p class=\"note\">Diameters at the image focus, image-side coefficients, "
+                + "full relative energy spread dT/T = %.3g (set with --energy-spread); the source image is not included "
+                + "(a point source); contributions added in quadrature, an approximation (common practice). Diffraction "
+                + "is not included.</p>%n", in.energySpread()));
+    }
+
+    private static String um(double m) {
+        return Html.g(m * 1e6);
+    }
+
+    static void tuning(StringBuilder b, LensPlan plan) {
+        b.append("<h2>Focusing bias</h2>\n<p class=\"note\">").append(Html.esc(plan.tuneNote())).append("</p>\n");
+        if (plan.tune().isEmpty()) {
+            return;
+        }
+        TuneResult t = plan.tune().get();
+        if (!t.found()) {
+            b.append("<p class=\"warn\">No bias in the searched range focuses on the screen");
+            t.nearest().ifPresent(n -> b.append(String.format(Locale.ROOT, "; closest: %s V puts the image at %s mm",
+                    HtmlReport.num(n.bias_V()), HtmlReport.mm(n.imageZ_m()))));
+            b.append(".</p>\n");
+            return;
+        }
+        List<List<String>> rows = new ArrayList<>();
+        for (FocusSolution f : t.solutions()) {
+            rows.add(List.of(Html.g(f.bias_V()), f.mode().name().toLowerCase(Locale.ROOT), HtmlReport.mm(f.imageZ_m()),
+                    Html.g(f.magnification()), HtmlReport.field(f.maxSurfaceField_V_per_m(), f.surfaceFieldCheck()),
+                    f.worstElectrode(), String.valueOf(f.axisCrossings())));
+        }
+        b.append(Html.table(List.of("bias (V)", "mode", "image z (mm)", "magnification", "max surface field (V/mm)",
+                "on electrode", "crossovers before the image"), rows));
+    }
+
+    static void surfaceFields(StringBuilder b, LensPlan plan) {
+        Stack s = plan.stack();
+        double[] max = plan.field().maxSurfaceFieldPerElectrode_V_per_m();
+        double[] q = plan.field().charges_C();
+        List<List<String>> rows = new ArrayList<>();
+        for (int i = 0; i < max.length; i++) {
+            SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], s.limits());
+            rows.add(List.of(s.electrodes().get(i).name(), HtmlReport.num(s.electrodes().get(i).bias_V()),
+                    HtmlReport.field(max[i], c), Html.g(max[i] / s.limits().comfort_V_per_m() * 100),
+                    c.name().toLowerCase(Locale.ROOT).replace('_', ' '), Html.g(q[i] * 1e12)));
+        }
+        b.append("<h2>Electrode surface fields</h2>\n");
+        b.append(Html.table(List.of("electrode", "bias (V)", "largest surface field (V/mm)", "% of comfort limit",
+                "against the limits", "charge (pC)"), rows));
+        b.append(String.format(Locale.ROOT, "<p class=\"note\">Surface field sigma/eps0 from the solved charge density, "
+                + "largest over each electrode's elements (sheets: per face). Limits from the stack: comfort %s V/mm, "
+                + "aggressive %s V/mm (common practice for polished electrodes in good vacuum, no single source; large "
+                + "gaps hold less per mm). Sharp edges are resolved only to the mesh: refine edge_levels to see the "
+                + "field grow at a truly sharp edge.</p>%n", HtmlReport.num(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())),
+                HtmlReport.num(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))));
+    }
+
+    static void capacitance(StringBuilder b, LensPlan plan) {
+        double[][] c = plan.solution().capacitanceMatrix_F();
+        List<String> head = new ArrayList<>();
+        head.add("charge on \\ per volt on");
+        for (var e : plan.stack().electrodes()) {
+            head.add(e.name());
+        }
+        List<List<String>> rows = new ArrayList<>();
+        for (int i = 0; i < c.length; i++) {
+            List<String> r = new ArrayList<>();
+            r.add(plan.stack().electrodes().get(i).name());
+            for (double x : c[i]) {
+                r.add(Html.g(x * 1e12));
+            }
+            rows.add(r);
+        }
+        b.append("<h2>Capacitance matrix (pF)</h2>\n").append(Html.table(head, rows))
+                .append("<p class=\"note\">Maxwell capacitance coefficients of the electrodes in open space (potential 0 V "
+                        + "at infinity), from the unit-bias solutions.</p>\n");
+    }
+
+    static void method(StringBuilder b, LensPlan plan) {
+        FieldSolution sol = plan.solution();
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(List.of("field", String.format(Locale.ROOT, "boundary elements (surface-charge method), %d unknowns, "
+                + "graded toward edges (%d levels); collocation residual %s; solve %.2f s", sol.unknowns(),
+                plan.stack().mesh().edgeLevels(), Html.sci(sol.residual()), sol.solveSeconds()),
+                "verification: thin disk, sphere and two-tube cases below"));
+        rows.add(List.of("axial potential", "piecewise Chebyshev expansion of the exact element sums (V, V', V'' ...)",
+                "largest relative error against the exact sums: " + Html.sci(plan.field().axialExpansionError())));
+        rows.add(List.of("paraxial optics", plan.optics(), "Helmholtz-Lagrange and uniform-field cases below"));
+        rows.add(List.of("aberrations", "third-order aberration integrals over the paraxial rays",
+                plan.aberrations().map(a -> "quadrature change " + Html.sci(a.quadratureChange())).orElse("-")));
+        rows.add(List.of("rays", plan.rayNote(), "energy conservation per ray in the trace command"));
+        rows.add(List.of("envelope", "round-beam envelope equation with emittance and space charge", "beam-spread case below"));
+        b.append("<h2>Method and stated accuracy</h2>\n").append(Html.table(List.of("step", "method", "accuracy"), rows));
+    }
+}
