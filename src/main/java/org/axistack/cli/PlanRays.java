@@ -10,7 +10,6 @@ import org.axistack.field.BiasedField;
 import org.axistack.io.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
-import org.axistack.trace.AxialTable;
 import org.axistack.trace.BundleResult;
 import org.axistack.trace.BundleTracer;
 import org.axistack.trace.ElectrodeGeometry;
@@ -74,8 +73,7 @@ final class PlanRays {
         double step = bore / 40;
         double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, screenZ) - 4 * step);
         double z1 = Math.min(geometry.regionZMax_m(), screenZ + 4 * step);
-        AxialTable axial = new AxialTable(biased, z0 - 4 * step, z1 + 4 * step, Math.min(step, 0.1e-3));
-        FieldMap map = new FieldMap(biased, new NearAxisField(axial), geometry, z0, z1, bore, step, TraceProgress.none());
+        FieldMap map = new FieldMap(biased, new NearAxisField(biased), geometry, z0, z1, bore, step, TraceProgress.none());
         Tracer tracer = new Tracer(map, geometry, TraceSettings.defaults().withRecordPath(true));
         BundleResult res = BundleTracer.perCore(tracer).trace(RaySets.of(beam.particle(), starts, what), targets,
                 TraceProgress.none());
