@@ -26,7 +26,7 @@ import org.axistack.trace.Trajectory;
 /**
  * A small meridional fan of exact rays for the plan's geometry picture: parallel rays at 10..50% of the smallest
  * bore (object at infinity) or a fan from the object point filling about half the bore at the lens, traced from
- * the beam start to the screen (else the stack's right end) in the same field model as the trace command.
+ * the beam start to the stack's right end in the same field model as the trace command.
  */
 final class PlanRays {
 
@@ -41,8 +41,8 @@ final class PlanRays {
         ElectrodeGeometry geometry = ElectrodeGeometry.of(stack);
         double bore = stack.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(r -> r > 0).min()
                 .orElse(1e-3);
-        double screenZ = stack.screenZ_m().orElse(stack.maxZ_m());
-        boolean fromObject = beam.objectZ_m().isPresent() && beam.objectZ_m().getAsDouble() < screenZ;
+        double endZ = stack.maxZ_m(); // the stack's right end, so the picture shows a focus beyond the screen too
+        boolean fromObject = beam.objectZ_m().isPresent() && beam.objectZ_m().getAsDouble() < endZ;
         double startZ = fromObject ? beam.objectZ_m().getAsDouble() : beam.startZ_m().orElse(stack.minZ_m());
         List<RayStart> starts = new ArrayList<>();
         int id = 0;
@@ -65,14 +65,14 @@ final class PlanRays {
             what = String.format(Locale.ROOT, "10 rays parallel to the axis at +-10..50%% of the smallest bore (%s mm), "
                     + "from z = %s mm", PlanCommand.num(Units.mToMm(bore)), PlanCommand.num(Units.mToMm(startZ)));
         }
-        TraceTargets targets = new TraceTargets(List.of(screenZ), screenZ);
+        TraceTargets targets = new TraceTargets(List.of(endZ), endZ);
         Tracer.checkTargets(geometry, targets);
         for (RayStart r : starts) {
             Tracer.checkPlacement(geometry, r, targets);
         }
         double step = bore / 40;
-        double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, screenZ) - 4 * step);
-        double z1 = Math.min(geometry.regionZMax_m(), screenZ + 4 * step);
+        double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, endZ) - 4 * step);
+        double z1 = Math.min(geometry.regionZMax_m(), endZ + 4 * step);
         FieldMap map = new FieldMap(biased, new NearAxisField(biased), geometry, z0, z1, bore, step, TraceProgress.none());
         Tracer tracer = new Tracer(map, geometry, TraceSettings.defaults().withRecordPath(true));
         BundleResult res = BundleTracer.perCore(tracer).trace(RaySets.of(beam.particle(), starts, what), targets,

@@ -146,8 +146,8 @@ public final class HtmlReport {
 
     private static void warnings(StringBuilder b, LensPlan plan) {
         if (plan.warnings().isEmpty()) {
-            b.append("<p class=\"ok\">No warnings: the beam passes, the lens focuses and every surface field is within "
-                    + "the comfort limit.</p>\n");
+            b.append("<p class=\"ok\">No warnings: the beam is not reflected, the lens has a real focus, the envelope "
+                    + "clears the bores and every surface field is within the comfort limit.</p>\n");
             return;
         }
         b.append("<div class=\"warn\"><b>Look at these first:</b><ul>\n");
