@@ -31,7 +31,7 @@ import org.jfree.data.xy.XYSeriesCollection;
  * The stack's meridian cross-section: z across, r up, mirrored below the axis, each electrode drawn
  * from its contour (closed outlines filled, thin sheets as thick lines) and labelled with its name
  * and bias. Electrode colour shows the bias: grey at 0 V, warm for positive, cool for negative,
- * stronger for larger |bias|. One factory for files (headless) and, later, the desktop window.
+ * stronger for larger |bias|. One factory for files (headless) and the desktop window ({@link LensChart}).
  */
 public final class GeometryChart {
 
@@ -49,11 +49,21 @@ public final class GeometryChart {
 
     /** Chart of the stack's electrodes. */
     public static JFreeChart create(Stack stack) {
+        JFreeChart chart = new JFreeChart(null, JFreeChart.DEFAULT_TITLE_FONT, plot(stack), false);
+        chart.setBackgroundPaint(Color.WHITE);
+        String title = stack.title().isBlank() ? "Electrode stack" : stack.title();
+        chart.addSubtitle(new TextTitle(title + ": meridian section (mirrored about the axis)",
+                new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        return chart;
+    }
+
+    /**
+     * The cross-section plot alone (z across in mm, r up in mm, mirrored), for charts that add layers to it
+     * (the desktop window's lens view, {@link LensChart}). Dataset 0 is the dash-dotted axis line.
+     */
+    public static XYPlot plot(Stack stack) {
         double z0 = Units.mToMm(stack.minZ_m()), z1 = Units.mToMm(stack.maxZ_m());
-        double rMax = 0;
-        for (Electrode e : stack.electrodes()) {
-            rMax = Math.max(rMax, Units.mToMm(e.contour().maxR_m()));
-        }
+        double rMax = maxRadius_mm(stack);
         double padZ = 0.04 * (z1 - z0);
         double labelRoom = 0.45 * rMax;
 
@@ -76,7 +86,16 @@ public final class GeometryChart {
         plot.setRangeGridlinePaint(GRID);
         plot.setOutlinePaint(AXIS_LINE);
         plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
+        drawElectrodes(plot, stack);
+        return plot;
+    }
 
+    /**
+     * Replaces the plot's annotations by the stack's electrodes (filled or sheet outlines, coloured by bias)
+     * and their name-and-bias labels: called again when the biases change.
+     */
+    public static void drawElectrodes(XYPlot plot, Stack stack) {
+        plot.clearAnnotations();
         double maxBias = 0;
         for (Electrode e : stack.electrodes()) {
             maxBias = Math.max(maxBias, Math.abs(e.bias_V()));
@@ -89,20 +108,22 @@ public final class GeometryChart {
                 Path2D path = path(c, mirror);
                 if (sheet) {
                     plot.addAnnotation(new XYShapeAnnotation(path, new BasicStroke(3.5f, BasicStroke.CAP_BUTT,
-                            BasicStroke.JOIN_ROUND), paint, null));
+                            BasicStroke.JOIN_ROUND), paint, null), false);
                 } else {
-                    plot.addAnnotation(new XYShapeAnnotation(path, new BasicStroke(1f), darker(paint), paint));
+                    plot.addAnnotation(new XYShapeAnnotation(path, new BasicStroke(1f), darker(paint), paint), false);
                 }
             }
         }
-        labels(plot, stack, rMax);
+        labels(plot, stack, maxRadius_mm(stack));
+    }
 
-        JFreeChart chart = new JFreeChart(null, JFreeChart.DEFAULT_TITLE_FONT, plot, false);
-        chart.setBackgroundPaint(Color.WHITE);
-        String title = stack.title().isBlank() ? "Electrode stack" : stack.title();
-        chart.addSubtitle(new TextTitle(title + ": meridian section (mirrored about the axis)",
-                new Font(Font.SANS_SERIF, Font.BOLD, 14)));
-        return chart;
+    /** Largest electrode radius, mm. */
+    static double maxRadius_mm(Stack stack) {
+        double rMax = 0;
+        for (Electrode e : stack.electrodes()) {
+            rMax = Math.max(rMax, Units.mToMm(e.contour().maxR_m()));
+        }
+        return rMax;
     }
 
     /**
@@ -166,10 +187,10 @@ public final class GeometryChart {
             a.setFont(LABEL_FONT);
             a.setPaint(Color.DARK_GRAY);
             a.setTextAnchor(TextAnchor.CENTER);
-            plot.addAnnotation(a);
+            plot.addAnnotation(a, false);
             double top = Units.mToMm(e.contour().maxR_m());
             plot.addAnnotation(new org.jfree.chart.annotations.XYLineAnnotation(zc, top, zc,
-                    y - 0.35 * rowHeight, new BasicStroke(0.6f), GRID.darker()));
+                    y - 0.35 * rowHeight, new BasicStroke(0.6f), GRID.darker()), false);
         }
     }
 

@@ -1,0 +1,68 @@
+package org.axistack.ui;
+
+import java.util.Locale;
+import java.util.OptionalDouble;
+
+import org.axistack.beam.Emittance;
+import org.axistack.beam.EnvelopeCurve;
+import org.axistack.beam.EnvelopePoint;
+import org.axistack.beam.EnvelopeRequest;
+import org.axistack.beam.EnvelopeStart;
+import org.axistack.beam.EnvelopeStudy;
+import org.axistack.beam.EnvelopeStudyResult;
+import org.axistack.field.AxialField;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.report.LensChart;
+
+/**
+ * The beam envelope layer: the round-beam envelope with emittance and space charge of the beam package
+ * ({@link EnvelopeStudy}), drawn mirrored. About a tenth of a second per envelope, so the window computes
+ * it after the live redraw, off the event thread.
+ *
+ * @param current_A   beam current, A (0 for none)
+ * @param emittance_m_rad edge emittance at the start, m rad (geometric)
+ * @param radiusFraction  start edge radius as a fraction of the narrowest bore
+ */
+public record EnvelopeLayer(double current_A, double emittance_m_rad, double radiusFraction) {
+
+    public EnvelopeLayer {
+        if (!(current_A >= 0) || !(emittance_m_rad >= 0) || !(radiusFraction > 0 && radiusFraction < 1)) {
+            throw new IllegalArgumentException("envelope needs current >= 0 A, emittance >= 0 mm mrad and a start"
+                    + " radius between 0 and the bore");
+        }
+    }
+
+    /** The window's starting values: no current, 1 mm mrad, a quarter of the bore. */
+    public static EnvelopeLayer defaults() {
+        return new EnvelopeLayer(0, 1e-6, 0.25);
+    }
+
+    /** The request for a stack: parallel start at the beam's start plane. */
+    public EnvelopeRequest request(Stack stack) {
+        return new EnvelopeRequest(current_A, new EnvelopeStart.RadiusSlope(radiusFraction * LiveRays.bore_m(stack),
+                0, new Emittance(emittance_m_rad, Emittance.Measure.EDGE, Emittance.Frame.GEOMETRIC_AT_START)),
+                OptionalDouble.empty(), OptionalDouble.empty());
+    }
+
+    /** Runs the envelope study and returns its full-case curve as mirrored lines, mm. */
+    public LensChart.Lines lines(Stack stack, AxialField field) {
+        EnvelopeStudyResult r = new EnvelopeStudy().run(stack, field, request(stack));
+        EnvelopeCurve c = r.full();
+        LensChart.LinesBuilder b = new LensChart.LinesBuilder();
+        for (double sign : new double[] {1, -1}) {
+            for (EnvelopePoint p : c.points()) {
+                b.add(Units.mToMm(p.z_m()), sign * Units.mToMm(p.radius_m()));
+            }
+            b.breakLine();
+        }
+        return b.build();
+    }
+
+    /** A short description for the status line. */
+    public String describe() {
+        return String.format(Locale.ROOT, "envelope: %s uA, %s mm mrad edge emittance, start radius %s of the bore",
+                UiFormat.num(current_A * 1e6), UiFormat.num(emittance_m_rad * 1e6),
+                Math.round(radiusFraction * 100) + " %");
+    }
+}

@@ -1,0 +1,121 @@
+package org.axistack.ui;
+
+import java.util.Locale;
+import java.util.concurrent.CancellationException;
+
+import org.axistack.field.BemSolver;
+import org.axistack.field.BiasedField;
+import org.axistack.field.FieldSolution;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.report.GeometryChart;
+import org.axistack.report.LensChart;
+
+/**
+ * One geometry in the window: the stack as loaded, its boundary-element solution and the unit-bias
+ * potential grid. Both are made once ({@link #open}, the expensive step, run off the event thread); every
+ * bias change after that re-biases the stored solution ({@link FieldSolution#withBiases}) and the stored
+ * grid, and never solves again. Immutable and thread-safe.
+ */
+public final class LensSession {
+
+    /** Grid columns along z and rows along r of the equipotential map. */
+    static final int GRID_NZ = 181;
+    static final int GRID_NR = 49;
+    /** Points of the axial potential curve. */
+    static final int AXIS_POINTS = 400;
+    /** About this many equipotential levels are drawn. */
+    static final int LEVELS = 16;
+
+    private final Stack stack;
+    private final FieldSolution solution;
+    private final PotentialGrid grid;
+    private final double zMin_m;
+    private final double zMax_m;
+
+    private LensSession(Stack stack, FieldSolution solution, PotentialGrid grid, double zMin_m, double zMax_m) {
+        this.stack = stack;
+        this.solution = solution;
+        this.grid = grid;
+        this.zMin_m = zMin_m;
+        this.zMax_m = zMax_m;
+    }
+
+    /**
+     * Solves the stack's field and maps the unit potentials. Progress goes 0..0.7 for the solve and 0.7..1
+     * for the map; return false from it to cancel.
+     *
+     * @throws CancellationException when cancelled
+     */
+    public static LensSession open(Stack stack, SolveProgress progress) {
+        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(),
+                (stage, f) -> progress.update("field solve: " + stage, 0.7 * f));
+        double z0 = stack.minZ_m(), z1 = stack.maxZ_m();
+        double pad = 0.04 * (z1 - z0);
+        double rTop = Units.mmToM(1.08 * maxRadius_mm(stack));
+        PotentialGrid grid = PotentialGrid.compute(sol, z0 - pad, z1 + pad, rTop, GRID_NZ, GRID_NR,
+                f -> progress.update("equipotential map", 0.7 + 0.3 * f));
+        BiasedField first = sol.biased();
+        first.axial(0.5 * (z0 + z1), 0, new double[1]); // builds the axial expansion once, here, not on the first move
+        return new LensSession(stack, sol, grid, z0 - pad, z1 + pad);
+    }
+
+    private static double maxRadius_mm(Stack stack) {
+        return stack.electrodes().stream().mapToDouble(e -> Units.mToMm(e.contour().maxR_m())).max().orElse(1);
+    }
+
+    /** The stack as opened (its own biases). */
+    public Stack stack() {
+        return stack;
+    }
+
+    public FieldSolution solution() {
+        return solution;
+    }
+
+    /**
+     * Everything drawn and listed for these biases (volts, electrode order): re-biased field, equipotentials,
+     * live rays, axial potential, properties. Costs milliseconds (no solve). The envelope is not included
+     * (see {@link EnvelopeLayer}).
+     */
+    public LensView view(double[] biases_V) {
+        long t0 = System.nanoTime();
+        java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+        long c0 = mx.getCurrentThreadCpuTime();
+        Stack biased = stack.withBiases(biases_V);
+        BiasedField field = solution.withBiases(biases_V);
+        double[][] v = grid.combine(biases_V);
+        double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+        for (double[] row : v) {
+            for (double x : row) {
+                lo = Math.min(lo, x);
+                hi = Math.max(hi, x);
+            }
+        }
+        double[] levels = Isolines.levels(lo, hi, LEVELS);
+        LensChart.Lines iso = Isolines.trace(grid, v, levels);
+        String levelsNote = levels.length < 2 ? "no equipotentials (all electrodes at one potential)"
+                : String.format(Locale.ROOT, "equipotentials every %s V", UiFormat.num(levels[1] - levels[0]));
+        LensChart.LinesBuilder axis = new LensChart.LinesBuilder();
+        double[] out = new double[1];
+        for (int i = 0; i < AXIS_POINTS; i++) {
+            double z = zMin_m + (zMax_m - zMin_m) * i / (AXIS_POINTS - 1);
+            field.axial(z, 0, out);
+            axis.add(Units.mToMm(z), out[0]);
+        }
+        LiveRays.Result rays = LiveRays.trace(biased, field);
+        PropertySheet props = PropertySheet.of(biased, field);
+        LensChart.Layers layers = new LensChart.Layers(biased, iso, levelsNote, rays.kept(), rays.lost(),
+                rays.note(), LensChart.Lines.none(), axis.build(), props.marks());
+        double ms = (System.nanoTime() - t0) / 1e6;
+        double cpuMs = (mx.getCurrentThreadCpuTime() - c0) / 1e6;
+        return new LensView(biased, field, layers, props, rays, ms, cpuMs);
+    }
+
+    /** Recommended chart size in pixels for this stack. */
+    public int[] chartSize() {
+        int[] s = GeometryChart.preferredSize(stack);
+        return new int[] {s[0], s[1] + 260};
+    }
+}

@@ -1,0 +1,99 @@
+package org.axistack.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.nio.file.Path;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.StackReader;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.ParaxialOptics;
+import org.axistack.trace.TraceStatus;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The window's view model without a display: re-biasing the stored solution gives the same properties as the
+ * optics package computed from a fresh field at the new biases, the potential grid is the superposition the
+ * field evaluator gives, and the live rays of an einzel lens cross the axis near its paraxial focus.
+ */
+class LensSessionTest {
+
+    static LensSession session;
+    static Stack stack;
+
+    @BeforeAll
+    static void open() throws Exception {
+        stack = StackReader.read(Path.of("lens-library/electron-flood-einzel.toml"));
+        session = LensSession.open(stack, SolveProgress.NONE);
+    }
+
+    @Test
+    void rebiasedPropertiesEqualTheOpticsOfTheFieldAtThoseBiases() {
+        double[] b = stack.biases_V();
+        int focus = stack.indexOf("focus");
+        b[focus] = b[focus] * 1.3;
+        LensView v = session.view(b);
+        // reference: the optics package on the stored solution at the same biases (its own API)
+        CardinalElements ref = ParaxialOptics.of(session.solution().withBiases(b), stack.withBiases(b)).cardinal();
+        assertThat(v.properties().cardinal()).isPresent();
+        assertThat(v.properties().cardinal().get().focalLengthImage_m())
+                .isCloseTo(ref.focalLengthImage_m(), within(1e-12));
+        assertThat(v.properties().value(PropertySheet.FOCAL_LENGTH_IMAGE))
+                .contains(UiFormat.num(Units.mToMm(ref.focalLengthImage_m())));
+        // a stronger middle electrode shortens the focal length of an einzel lens (common practice, no source)
+        LensView v0 = session.view(stack.biases_V());
+        assertThat(v.properties().cardinal().get().focalLengthImage_m())
+                .isLessThan(v0.properties().cardinal().get().focalLengthImage_m());
+        assertThat(v.stack().electrodes().get(focus).bias_V()).isEqualTo(b[focus]);
+        LensView again = session.view(b);
+        System.out.printf("view compute: %.1f ms (first), %.1f ms wall, %.1f ms cpu%n", v0.compute_ms(),
+                again.compute_ms(), again.cpu_ms());
+    }
+
+    @Test
+    void potentialGridIsTheSuperpositionOfTheFieldAtTheNodes() {
+        double[] b = stack.biases_V();
+        PotentialGrid g = PotentialGrid.compute(session.solution(), stack.minZ_m(), stack.maxZ_m(), 2e-3, 5, 3,
+                PotentialGrid.Progress.NONE);
+        double[][] v = g.combine(b);
+        var field = session.solution().withBiases(b);
+        for (int i = 0; i < g.nz(); i++) {
+            for (int j = 0; j < g.nr(); j++) {
+                // linearity of Laplace's equation: sum of unit solutions equals the biased evaluation
+                assertThat(v[i][j]).isCloseTo(field.potential_V(g.z_m(i), g.r_m(j)), within(1e-9 * 200));
+            }
+        }
+    }
+
+    @Test
+    void parallelLiveRaysCrossTheAxisNearTheParaxialRealFocus() {
+        LensView v = session.view(stack.biases_V());
+        CardinalElements c = v.properties().cardinal().orElseThrow();
+        assertThat(v.rays().trajectories()).isNotEmpty();
+        // the innermost ray (12 % of the bore) is nearly paraxial: where it crosses the axis after the lens it
+        // should agree with the paraxial focus within a fraction of f (third-order aberration moves it toward
+        // the lens; tolerance 5 % of f2 is generous for h/bore = 0.12)
+        var inner = v.rays().trajectories().get(0);
+        assertThat(inner.status()).isEqualTo(TraceStatus.SCREEN);
+        double zCross = Double.NaN;
+        var path = inner.path();
+        for (int i = 1; i < path.size(); i++) {
+            if (path.get(i - 1).x_m() > 0 && path.get(i).x_m() <= 0) {
+                zCross = path.get(i - 1).z_m() + (path.get(i).z_m() - path.get(i - 1).z_m())
+                        * path.get(i - 1).x_m() / (path.get(i - 1).x_m() - path.get(i).x_m());
+                break;
+            }
+        }
+        if (Double.isNaN(zCross)) { // beyond the screen: follow the straight drift from the end point
+            var end = inner.end();
+            zCross = end.z_m() - end.x_m() / end.slopeX();
+        }
+        double focus = c.realFocusImageZ_m().orElse(c.focalPointImageZ_m());
+        System.out.printf("inner ray crosses at %.3f mm, paraxial %.3f mm, f2 %.3f mm%n", zCross * 1e3, focus * 1e3,
+                c.focalLengthImage_m() * 1e3);
+        assertThat(zCross).isCloseTo(focus, within(0.05 * Math.abs(c.focalLengthImage_m())));
+    }
+}
