@@ -14,6 +14,7 @@ import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.Field;
 import org.axistack.io.StackInputException;
+import org.axistack.io.TraceTableCsv;
 import org.axistack.io.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
@@ -441,13 +442,7 @@ final class TraceCommand implements Callable<Integer> {
     }
 
     static String num(double x) {
-        if (!Double.isFinite(x)) {
-            return "";
-        }
-        if (x == 0) {
-            return "0";
-        }
-        return new java.math.BigDecimal(x).round(new java.math.MathContext(10)).stripTrailingZeros().toPlainString();
+        return TraceTableCsv.num(x);
     }
 
     private static String sci(double x) {

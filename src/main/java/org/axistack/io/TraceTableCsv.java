@@ -1,4 +1,4 @@
-package org.axistack.cli;
+package org.axistack.io;
 
 import java.io.IOException;
 import java.io.OutputStreamWriter;
@@ -10,25 +10,24 @@ import java.util.List;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
-import org.axistack.io.AtomicFiles;
-import org.axistack.io.Units;
 import org.axistack.trace.BundleResult;
 import org.axistack.trace.RayPoint;
 import org.axistack.trace.TableRow;
 
 /**
  * The trajectory table of {@code trace --table}: every ray at every plane, RFC 4180 CSV (Commons CSV)
- * with a header whose names carry units, written atomically (temporary file, then move).
+ * with a header whose names carry units, written atomically (temporary file, then move). Shared by the
+ * trace command and the desktop window.
  */
-final class TraceTableCsv {
+public final class TraceTableCsv {
 
-    static final String[] HEADER = {"ray_id", "z_mm", "x_mm", "y_mm", "r_mm", "slope_mrad", "kinetic_energy_eV",
+    public static final String[] HEADER = {"ray_id", "z_mm", "x_mm", "y_mm", "r_mm", "slope_mrad", "kinetic_energy_eV",
         "time_ns", "status", "slope_x_mrad", "slope_y_mrad"};
 
     private TraceTableCsv() {
     }
 
-    static void write(Path file, BundleResult res) throws IOException {
+    public static void write(Path file, BundleResult res) throws IOException {
         AtomicFiles.write(file, os -> {
             Writer w = new OutputStreamWriter(os, StandardCharsets.UTF_8);
             try (CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(HEADER).get())) {
@@ -42,18 +41,18 @@ final class TraceTableCsv {
     private static List<String> cells(TableRow row) {
         List<String> cells = new ArrayList<>();
         cells.add(Integer.toString(row.rayId()));
-        cells.add(TraceCommand.num(Units.mToMm(row.z_m())));
+        cells.add(num(Units.mToMm(row.z_m())));
         if (row.point().isPresent()) {
             RayPoint p = row.point().get();
-            cells.add(TraceCommand.num(Units.mToMm(p.x_m())));
-            cells.add(TraceCommand.num(Units.mToMm(p.y_m())));
-            cells.add(TraceCommand.num(Units.mToMm(p.r_m())));
-            cells.add(TraceCommand.num(Units.radToMrad(p.radialSlope())));
-            cells.add(TraceCommand.num(p.kineticEnergy_eV()));
-            cells.add(TraceCommand.num(p.time_s() * 1e9));
+            cells.add(num(Units.mToMm(p.x_m())));
+            cells.add(num(Units.mToMm(p.y_m())));
+            cells.add(num(Units.mToMm(p.r_m())));
+            cells.add(num(Units.radToMrad(p.radialSlope())));
+            cells.add(num(p.kineticEnergy_eV()));
+            cells.add(num(p.time_s() * 1e9));
             cells.add(row.status());
-            cells.add(TraceCommand.num(Units.radToMrad(p.slopeX())));
-            cells.add(TraceCommand.num(Units.radToMrad(p.slopeY())));
+            cells.add(num(Units.radToMrad(p.slopeX())));
+            cells.add(num(Units.radToMrad(p.slopeY())));
         } else {
             for (int i = 0; i < 6; i++) {
                 cells.add("");
@@ -63,5 +62,16 @@ final class TraceTableCsv {
             cells.add("");
         }
         return cells;
+    }
+
+    /** A table number: ten significant digits, plain notation, empty for a non-finite value. */
+    public static String num(double x) {
+        if (!Double.isFinite(x)) {
+            return "";
+        }
+        if (x == 0) {
+            return "0";
+        }
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(10)).stripTrailingZeros().toPlainString();
     }
 }
