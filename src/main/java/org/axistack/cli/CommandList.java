@@ -19,6 +19,7 @@ final class CommandList {
                 new EnvelopeCommand(),
                 new SizeCommand(),
                 new BenchCommand(),
-                new CheckCommand());
+                new CheckCommand(),
+                new GuiCommand());
     }
 }

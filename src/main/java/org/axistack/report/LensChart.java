@@ -22,7 +22,9 @@ import org.jfree.data.xy.DefaultXYDataset;
  * The lens view: the meridian cross-section of {@link GeometryChart} with equipotential lines, rays and the
  * beam envelope drawn over it, and the axial potential below on the same z axis (a JFreeChart
  * {@link CombinedDomainXYPlot}); cardinal points are vertical markers through both. The same chart draws to
- * PNG/SVG ({@link ChartFiles}) and inside the desktop window. Layers are replaced in one batch by
+ * PNG/SVG ({@link ChartFiles}) and inside the desktop window. Principal-plane labels sit at the top, the
+ * others at the bottom; of two marks with the same letter the one further left is labelled on the left of its
+ * line, so crossed principal planes stay readable. Layers are replaced in one batch by
  * {@link #show(Layers)}, which redraws once.
  */
 public final class LensChart {
@@ -139,7 +141,7 @@ public final class LensChart {
     private LensChart(Stack stack) {
         section = GeometryChart.plot(stack);
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
-        r.setDrawSeriesLineAsPath(false);
+        r.setDrawSeriesLineAsPath(true); // one path per series; NaN points break it into pieces
         r.setSeriesPaint(0, EQUIPOTENTIAL);
         r.setSeriesStroke(0, new BasicStroke(0.8f));
         r.setSeriesPaint(1, ENVELOPE);
@@ -218,8 +220,10 @@ public final class LensChart {
                 if (!Double.isFinite(m.z_mm())) {
                     continue;
                 }
-                section.addDomainMarker(marker(m, true), Layer.FOREGROUND);
-                potential.addDomainMarker(marker(m, false), Layer.FOREGROUND);
+                boolean left = l.marks().stream().anyMatch(o -> o != m && o.label().charAt(0) == m.label().charAt(0)
+                        && o.z_mm() > m.z_mm());
+                section.addDomainMarker(marker(m, true, left), Layer.FOREGROUND);
+                potential.addDomainMarker(marker(m, false, false), Layer.FOREGROUND);
             }
             List<String> parts = new ArrayList<>();
             if (!l.levelsNote().isBlank()) {
@@ -238,15 +242,18 @@ public final class LensChart {
         d.addSeries(key, new double[][] {lines.z_mm(), lines.r_mm()});
     }
 
-    private static ValueMarker marker(Mark m, boolean labelled) {
+    private static ValueMarker marker(Mark m, boolean labelled, boolean left) {
         ValueMarker v = new ValueMarker(m.z_mm(), MARKER, new BasicStroke(0.9f, BasicStroke.CAP_BUTT,
                 BasicStroke.JOIN_MITER, 10f, new float[] {4f, 3f}, 0f));
         if (labelled) {
             v.setLabel(m.label());
             v.setLabelFont(new Font(Font.SANS_SERIF, Font.BOLD, 11));
             v.setLabelPaint(MARKER);
-            v.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
-            v.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+            boolean top = m.label().startsWith("H");
+            v.setLabelAnchor(top ? (left ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT)
+                    : (left ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.BOTTOM_RIGHT));
+            v.setLabelTextAnchor(top ? (left ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT)
+                    : (left ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT));
         }
         return v;
     }

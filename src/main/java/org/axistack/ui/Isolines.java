@@ -26,7 +26,7 @@ public final class Isolines {
         if (!(max > min) || wanted < 1 || !Double.isFinite(min) || !Double.isFinite(max)) {
             return new double[0];
         }
-        double step = roundStep((max - min) / (wanted + 1));
+        double step = nearestRoundStep((max - min) / (wanted + 1));
         List<Double> out = new ArrayList<>();
         for (double v = Math.floor(min / step) * step; v < max; v += step) {
             double rounded = Math.rint(v / step) * step;
@@ -35,6 +35,18 @@ public final class Isolines {
             }
         }
         return out.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+
+    /** The round step (1, 2 or 5 times a power of ten) nearest to raw on a logarithmic scale. */
+    public static double nearestRoundStep(double raw) {
+        double p = Math.pow(10, Math.floor(Math.log10(raw)));
+        double best = p;
+        for (double m : new double[] {1, 2, 5, 10}) {
+            if (Math.abs(Math.log(m * p / raw)) < Math.abs(Math.log(best / raw))) {
+                best = m * p;
+            }
+        }
+        return best;
     }
 
     /** The round step (1, 2 or 5 times a power of ten) at or just above raw. */

@@ -54,7 +54,11 @@ public final class LensSession {
         double z0 = stack.minZ_m(), z1 = stack.maxZ_m();
         double pad = 0.04 * (z1 - z0);
         double rTop = Units.mmToM(1.08 * maxRadius_mm(stack));
-        PotentialGrid grid = PotentialGrid.compute(sol, z0 - pad, z1 + pad, rTop, GRID_NZ, GRID_NR,
+        org.axistack.trace.ElectrodeGeometry geometry = org.axistack.trace.ElectrodeGeometry.of(stack);
+        double near = 0.5 * rTop / (GRID_NR - 1);
+        PotentialGrid.Inside inside = (z, r) -> geometry.insideElectrode(z, r)
+                .or(() -> geometry.onSurface(z, r, near)).map(stack::indexOf).orElse(-1);
+        PotentialGrid grid = PotentialGrid.compute(sol, z0 - pad, z1 + pad, rTop, GRID_NZ, GRID_NR, inside,
                 f -> progress.update("equipotential map", 0.7 + 0.3 * f));
         BiasedField first = sol.biased();
         first.axial(0.5 * (z0 + z1), 0, new double[1]); // builds the axial expansion once, here, not on the first move
@@ -93,10 +97,11 @@ public final class LensSession {
                 hi = Math.max(hi, x);
             }
         }
-        double[] levels = Isolines.levels(lo, hi, LEVELS);
+        double[] levels = withoutBiases(Isolines.levels(lo, hi, LEVELS), biases_V, 1e-3 * (hi - lo));
         LensChart.Lines iso = Isolines.trace(grid, v, levels);
-        String levelsNote = levels.length < 2 ? "no equipotentials (all electrodes at one potential)"
-                : String.format(Locale.ROOT, "equipotentials every %s V", UiFormat.num(levels[1] - levels[0]));
+        double spacing = !(hi > lo) ? 0 : Isolines.nearestRoundStep((hi - lo) / (LEVELS + 1));
+        String levelsNote = levels.length < 1 ? "no equipotentials (all electrodes at one potential)"
+                : String.format(Locale.ROOT, "equipotentials every %s V", UiFormat.num(spacing));
         LensChart.LinesBuilder axis = new LensChart.LinesBuilder();
         double[] out = new double[1];
         for (int i = 0; i < AXIS_POINTS; i++) {
@@ -111,6 +116,16 @@ public final class LensSession {
         double ms = (System.nanoTime() - t0) / 1e6;
         double cpuMs = (mx.getCurrentThreadCpuTime() - c0) / 1e6;
         return new LensView(biased, field, layers, props, rays, ms, cpuMs);
+    }
+
+    /**
+     * Drops levels at an electrode's own potential: that equipotential is the electrode surface, and tracing
+     * it through the grid only draws round-off (loops where the tiny field beside a wall changes sign).
+     */
+    static double[] withoutBiases(double[] levels, double[] biases_V, double tolerance_V) {
+        return java.util.Arrays.stream(levels)
+                .filter(l -> java.util.Arrays.stream(biases_V).noneMatch(b -> Math.abs(l - b) <= tolerance_V))
+                .toArray();
     }
 
     /** Recommended chart size in pixels for this stack. */

@@ -24,6 +24,17 @@ public final class PotentialGrid {
         Progress NONE = f -> true;
     }
 
+    /**
+     * Which electrode a node belongs to (inside its solid, or so close to its surface that the surface sums
+     * are not trusted there): its index, or -1 elsewhere.
+     */
+    @FunctionalInterface
+    public interface Inside {
+        int electrodeAt(double z_m, double r_m);
+
+        Inside NOWHERE = (z, r) -> -1;
+    }
+
     private final double z0_m;
     private final double z1_m;
     private final double r1_m;
@@ -43,12 +54,14 @@ public final class PotentialGrid {
 
     /**
      * Evaluates the unit-bias potentials (boundary-element sums of {@link BiasedField#potential_V}) on nz x nr
-     * nodes spanning [z0, z1] x [0, r1], in parallel over z columns.
+     * nodes spanning [z0, z1] x [0, r1], in parallel over z columns. Nodes inside an electrode's solid or within
+     * half a grid step of its surface take that electrode's potential exactly (1 V on its own unit grid, 0 V on
+     * the others) instead of the surface sums, which lose accuracy right at the surface.
      *
      * @throws CancellationException when progress returns false
      */
     public static PotentialGrid compute(FieldSolution solution, double z0_m, double z1_m, double r1_m, int nz, int nr,
-            Progress progress) {
+            Inside inside, Progress progress) {
         if (!(z1_m > z0_m) || !(r1_m > 0) || nz < 2 || nr < 2) {
             throw new IllegalArgumentException("grid needs z1 > z0, r1 > 0 and at least 2 x 2 nodes");
         }
@@ -71,8 +84,9 @@ public final class PotentialGrid {
             double z = z0_m + iz * dz;
             for (int ir = 0; ir < nr; ir++) {
                 double r = ir * dr;
+                int in = inside.electrodeAt(z, r);
                 for (int e = 0; e < ne; e++) {
-                    unit[e][iz * nr + ir] = fields[e].potential_V(z, r);
+                    unit[e][iz * nr + ir] = in >= 0 ? (e == in ? 1 : 0) : fields[e].potential_V(z, r);
                 }
             }
             if (!progress.update((double) done.incrementAndGet() / nz)) {
@@ -83,6 +97,11 @@ public final class PotentialGrid {
             throw new CancellationException("potential map cancelled");
         }
         return new PotentialGrid(z0_m, z1_m, r1_m, nz, nr, unit);
+    }
+
+    /** An empty grid with these nodes (no unit potentials): for drawing values computed elsewhere. */
+    static PotentialGrid geometry(double z0_m, double z1_m, double r1_m, int nz, int nr) {
+        return new PotentialGrid(z0_m, z1_m, r1_m, nz, nr, new double[0][]);
     }
 
     /** The potential at every node for these biases (volts, electrode order): [iz][ir]. */

@@ -19,19 +19,22 @@ public final class UiFormat {
         if (a != 0 && (a < 1e-3 || a >= 1e6)) {
             return String.format(Locale.ROOT, "%.4g", v);
         }
-        String s = String.format(Locale.ROOT, "%.4g", v);
-        if (s.contains("e")) {
-            return s;
+        if (v == 0) {
+            return "0";
         }
-        if (s.contains(".")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
-        return s.equals("-0") ? "0" : s;
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
     }
 
-    /** A bias in volts as typed back into the number field (full precision, no exponent). */
+    /**
+     * A bias in volts as typed back into the number field: ten significant digits (far below any supply's
+     * resolution, and free of binary round-off such as -161.28000000000003), no exponent.
+     */
     public static String volts(double v) {
-        String s = new java.math.BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
+        if (v == 0) {
+            return "0";
+        }
+        String s = new java.math.BigDecimal(v).round(new java.math.MathContext(10)).stripTrailingZeros()
+                .toPlainString();
         return s.equals("-0") ? "0" : s;
     }
 }

@@ -57,6 +57,7 @@ class LensSessionTest {
     void potentialGridIsTheSuperpositionOfTheFieldAtTheNodes() {
         double[] b = stack.biases_V();
         PotentialGrid g = PotentialGrid.compute(session.solution(), stack.minZ_m(), stack.maxZ_m(), 2e-3, 5, 3,
+                PotentialGrid.Inside.NOWHERE,
                 PotentialGrid.Progress.NONE);
         double[][] v = g.combine(b);
         var field = session.solution().withBiases(b);

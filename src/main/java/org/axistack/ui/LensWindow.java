@@ -1,0 +1,394 @@
+package org.axistack.ui;
+
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.Font;
+import java.awt.event.KeyEvent;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicReference;
+import javax.swing.BorderFactory;
+import javax.swing.Box;
+import javax.swing.BoxLayout;
+import javax.swing.JButton;
+import javax.swing.JFrame;
+import javax.swing.JLabel;
+import javax.swing.JOptionPane;
+import javax.swing.JPanel;
+import javax.swing.JProgressBar;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTabbedPane;
+import javax.swing.JTextArea;
+import javax.swing.JTextField;
+import javax.swing.SwingUtilities;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+
+import org.axistack.io.BuiltInStacks;
+import org.axistack.io.StackInputException;
+import org.axistack.model.Stack;
+import org.axistack.report.LensChart;
+import org.jfree.chart.ChartPanel;
+
+/**
+ * The desktop window: the lens view (cross-section with equipotentials, rays, envelope and cardinal points over
+ * the axial potential), bias controls, the property table and the stack text. Field solves, potential maps,
+ * envelopes and bundles run off the event thread; a bias change re-biases the stored solution on a worker
+ * and the newest change wins. File handling and exports live in {@link WindowActions}.
+ */
+public final class LensWindow extends JFrame {
+
+    final RecentFiles recent;
+    StackDocument doc;
+    /** The stack of the open session (geometry as solved, biases as loaded). */
+    Stack solvedStack;
+    LensSession session;
+    LensView current;
+    LensChart lensChart;
+    BiasPanel biasPanel;
+    EnvelopeLayer envelope = EnvelopeLayer.defaults();
+
+    final TimedChartPanel chartPanel = new TimedChartPanel();
+    final PropertiesTable properties = new PropertiesTable();
+    final JTextArea editor = new JTextArea();
+    final JLabel status = new JLabel(" ");
+    final JLabel readout = new JLabel(" ");
+    final JLabel timing = new JLabel(" ");
+    final JProgressBar progress = new JProgressBar(0, 1000);
+    final JButton cancel = new JButton("Cancel");
+    final JPanel biasHolder = new JPanel(new BorderLayout());
+    final JTextField currentField = new JTextField("0", 6);
+    final JTextField emittanceField = new JTextField("1", 6);
+    private final WindowActions actions;
+    private final ExecutorService live = Executors.newSingleThreadExecutor(daemon("axistack-live"));
+    private final ExecutorService slow = Executors.newSingleThreadExecutor(daemon("axistack-envelope"));
+    private final AtomicReference<double[]> pending = new AtomicReference<>();
+    private boolean editorUpdating;
+
+    public LensWindow(RecentFiles recent) {
+        super("Axistack lens bench");
+        this.recent = recent;
+        this.actions = new WindowActions(this);
+        setDefaultCloseOperation(DO_NOTHING_ON_CLOSE);
+        addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowClosing(WindowEvent e) {
+                actions.closeWindow();
+            }
+        });
+        setJMenuBar(actions.menuBar());
+        layoutWindow();
+        setSize(new Dimension(1360, 860));
+        setLocationByPlatform(true);
+    }
+
+    private void layoutWindow() {
+        chartPanel.setMouseWheelEnabled(true);
+        chartPanel.afterPaint(() -> {
+            List<Double> t = chartPanel.times();
+            timing.setText(String.format(java.util.Locale.ROOT, "change to redraw %.0f ms (views computed in %.0f ms)",
+                    t.get(t.size() - 1), chartPanel.computeMs));
+        });
+        chartPanel.addChartMouseListener(new CursorReadout(this));
+        JPanel right = new JPanel(new BorderLayout());
+        JTabbedPane tabs = new JTabbedPane();
+        JPanel tune = new JPanel();
+        tune.setLayout(new BoxLayout(tune, BoxLayout.Y_AXIS));
+        tune.add(biasHolder);
+        tune.add(envelopePanel());
+        JScrollPane propScroll = new JScrollPane(properties);
+        propScroll.setBorder(BorderFactory.createTitledBorder("Optical properties (paraxial, asymptotic; stack z)"));
+        JPanel tuneTab = new JPanel(new BorderLayout());
+        tuneTab.add(tune, BorderLayout.NORTH);
+        tuneTab.add(propScroll, BorderLayout.CENTER);
+        tabs.addTab("Tune", tuneTab);
+        tabs.addTab("Stack text", editorPanel());
+        right.add(tabs, BorderLayout.CENTER);
+        right.setPreferredSize(new Dimension(540, 600));
+
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, chartPanel, right);
+        split.setResizeWeight(1.0);
+        getContentPane().add(split, BorderLayout.CENTER);
+
+        JPanel bar = new JPanel();
+        bar.setLayout(new BoxLayout(bar, BoxLayout.X_AXIS));
+        bar.setBorder(BorderFactory.createEmptyBorder(3, 6, 3, 6));
+        readout.setFont(readout.getFont().deriveFont(Font.PLAIN));
+        bar.add(readout);
+        bar.add(Box.createHorizontalGlue());
+        bar.add(status);
+        bar.add(Box.createHorizontalStrut(12));
+        bar.add(timing);
+        bar.add(Box.createHorizontalStrut(12));
+        progress.setMaximumSize(new Dimension(200, 18));
+        progress.setVisible(false);
+        progress.setStringPainted(true);
+        cancel.setVisible(false);
+        cancel.setName("cancel");
+        bar.add(progress);
+        bar.add(cancel);
+        getContentPane().add(bar, BorderLayout.SOUTH);
+    }
+
+    private JPanel envelopePanel() {
+        JPanel p = new JPanel(new java.awt.GridLayout(2, 2, 6, 2));
+        p.setBorder(BorderFactory.createTitledBorder("Beam envelope (parallel start, radius 25 % of the bore)"));
+        p.add(new JLabel("beam current (uA), Enter to apply"));
+        p.add(currentField);
+        p.add(new JLabel("edge emittance (mm mrad)"));
+        p.add(emittanceField);
+        currentField.setName("envelope-current");
+        emittanceField.setName("envelope-emittance");
+        currentField.addActionListener(e -> envelopeChanged());
+        emittanceField.addActionListener(e -> envelopeChanged());
+        return p;
+    }
+
+    private void envelopeChanged() {
+        try {
+            double i = Double.parseDouble(currentField.getText().trim()) * 1e-6;
+            double eps = Double.parseDouble(emittanceField.getText().trim()) * 1e-6;
+            envelope = new EnvelopeLayer(i, eps, envelope.radiusFraction());
+            if (current != null) {
+                startEnvelope(current);
+            }
+        } catch (IllegalArgumentException ex) {
+            status("envelope: type a current >= 0 in microamperes and an emittance >= 0 in mm mrad");
+        }
+    }
+
+    private JPanel editorPanel() {
+        JPanel p = new JPanel(new BorderLayout());
+        editor.setFont(new Font(Font.MONOSPACED, Font.PLAIN, 12));
+        editor.setName("stack-text");
+        editor.getDocument().addDocumentListener(new DocumentListener() {
+            @Override
+            public void insertUpdate(DocumentEvent e) {
+                edited();
+            }
+
+            @Override
+            public void removeUpdate(DocumentEvent e) {
+                edited();
+            }
+
+            @Override
+            public void changedUpdate(DocumentEvent e) {
+                edited();
+            }
+        });
+        p.add(new JScrollPane(editor), BorderLayout.CENTER);
+        JPanel buttons = new JPanel();
+        JButton check = new JButton("Check");
+        check.setMnemonic(KeyEvent.VK_C);
+        check.addActionListener(e -> actions.checkText());
+        JButton apply = new JButton("Apply and solve");
+        apply.setMnemonic(KeyEvent.VK_A);
+        apply.addActionListener(e -> actions.applyText());
+        buttons.add(check);
+        buttons.add(apply);
+        p.add(buttons, BorderLayout.SOUTH);
+        return p;
+    }
+
+    private void edited() {
+        if (!editorUpdating && doc != null) {
+            doc = doc.withText(editor.getText());
+            updateTitle();
+        }
+    }
+
+    /** Shows a document's text in the editor without marking it edited. */
+    void showText(StackDocument d) {
+        doc = d;
+        editorUpdating = true;
+        try {
+            editor.setText(d.text());
+            editor.setCaretPosition(0);
+        } finally {
+            editorUpdating = false;
+        }
+        updateTitle();
+    }
+
+    /** Whether anything would be lost on close: edited text or biases moved since the last save. */
+    boolean unsaved() {
+        if (doc == null) {
+            return false;
+        }
+        if (doc.modified() && doc.path().isPresent()) {
+            return true;
+        }
+        return biasPanel != null && solvedStack != null
+                && !Arrays.equals(biasPanel.biases(), textBiases().orElse(solvedStack.biases_V()));
+    }
+
+    private Optional<double[]> textBiases() {
+        try {
+            return Optional.of(doc.parse().biases_V());
+        } catch (StackInputException e) {
+            return Optional.empty();
+        }
+    }
+
+    void updateTitle() {
+        String name = doc == null ? "" : doc.shownAs();
+        setTitle("Axistack lens bench" + (name.isEmpty() ? "" : " - " + name) + (unsaved() ? " (unsaved)" : ""));
+    }
+
+    void status(String text) {
+        status.setText(text);
+    }
+
+    /** Installs a freshly solved session: new chart, new bias controls, first view. */
+    void install(LensSession s) {
+        session = s;
+        solvedStack = s.stack();
+        lensChart = LensChart.create(s.stack());
+        chartPanel.setChart(lensChart.chart());
+        chartPanel.setDomainZoomable(true);
+        chartPanel.setRangeZoomable(true);
+        lensChart.section().setDomainPannable(true);
+        lensChart.section().setRangePannable(true);
+        biasPanel = new BiasPanel(s.stack(), this::biasesChanged, this::status);
+        biasHolder.removeAll();
+        biasHolder.add(biasPanel, BorderLayout.CENTER);
+        biasHolder.revalidate();
+        status(String.format(java.util.Locale.ROOT, "field solved: %d unknowns in %.2f s (once per geometry)",
+                s.solution().unknowns(), s.solution().solveSeconds()));
+        biasesChanged(s.stack().biases_V());
+    }
+
+    /** A bias moved: compute the view on the live worker (newest change wins) and redraw. */
+    void biasesChanged(double[] biases) {
+        if (session == null) {
+            return;
+        }
+        chartPanel.markChange(System.nanoTime());
+        pending.set(biases);
+        LensSession s = session;
+        live.submit(() -> {
+            double[] b = pending.getAndSet(null);
+            if (b == null) {
+                return;
+            }
+            try {
+                LensView v = s.view(b);
+                SwingUtilities.invokeLater(() -> apply(s, v));
+            } catch (RuntimeException ex) {
+                SwingUtilities.invokeLater(() -> status("could not redraw: " + ex.getMessage()));
+            }
+        });
+        updateTitle();
+    }
+
+    private void apply(LensSession s, LensView v) {
+        if (s != session) {
+            return;
+        }
+        current = v;
+        lensChart.show(v.layers());
+        properties.show(v.properties());
+        chartPanel.computeMs = v.compute_ms();
+        startEnvelope(v);
+    }
+
+    private void startEnvelope(LensView v) {
+        EnvelopeLayer env = envelope;
+        slow.submit(() -> {
+            if (current != v) {
+                return;
+            }
+            try {
+                LensChart.Lines lines = env.lines(v.stack(), v.field());
+                SwingUtilities.invokeLater(() -> {
+                    if (current == v) {
+                        current = v.withEnvelope(lines);
+                        lensChart.show(current.layers());
+                    }
+                });
+            } catch (RuntimeException ex) {
+                SwingUtilities.invokeLater(() -> status("envelope not drawn: " + ex.getMessage()));
+            }
+        });
+    }
+
+    /** The chart panel that records the time from a bias change to the end of the next paint. */
+    static final class TimedChartPanel extends ChartPanel {
+        private volatile long changeNanos;
+        volatile double computeMs;
+        /** Processor time of the last paint on the event thread, ms. */
+        volatile double lastPaintCpuMs;
+        private final List<Double> times = Collections.synchronizedList(new ArrayList<>());
+        private Runnable afterPaint = () -> { };
+
+        TimedChartPanel() {
+            super(null, 900, 600, 300, 200, 2400, 1800, true, true, true, true, true, false);
+            setName("lens-view");
+            // no per-item entities (thousands of line pieces): the read-out only needs the plot areas
+            getChartRenderingInfo().setEntityCollection(null);
+        }
+
+        void markChange(long nanos) {
+            changeNanos = nanos;
+        }
+
+        void afterPaint(Runnable r) {
+            afterPaint = r;
+        }
+
+        @Override
+        public void paintComponent(java.awt.Graphics g) {
+            java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+            long cpu0 = mx.getCurrentThreadCpuTime();
+            super.paintComponent(g);
+            lastPaintCpuMs = (mx.getCurrentThreadCpuTime() - cpu0) / 1e6;
+            long c = changeNanos;
+            if (c != 0 && getChart() != null && computeMs > 0) {
+                changeNanos = 0;
+                double ms = (System.nanoTime() - c) / 1e6;
+                times.add(ms);
+                afterPaint.run();
+            }
+        }
+
+        List<Double> times() {
+            return times;
+        }
+    }
+
+    /** Opens the built-in demo lens. */
+    void openDemo() throws StackInputException {
+        StackDocument d = StackDocument.unsaved("built-in demo (" + BuiltInStacks.DEMO_FILE + ")",
+                BuiltInStacks.demoText());
+        showText(d);
+        actions.solve(d.parse());
+    }
+
+    WindowActions actions() {
+        return actions;
+    }
+
+    /** Stops the workers (the window is closing). */
+    void shutdown() {
+        live.shutdownNow();
+        slow.shutdownNow();
+    }
+
+    private static java.util.concurrent.ThreadFactory daemon(String name) {
+        return r -> {
+            Thread t = new Thread(r, name);
+            t.setDaemon(true);
+            return t;
+        };
+    }
+}
