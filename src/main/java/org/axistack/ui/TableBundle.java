@@ -5,7 +5,6 @@ import java.util.List;
 
 import org.axistack.field.BiasedField;
 import org.axistack.model.Stack;
-import org.axistack.trace.AxialTable;
 import org.axistack.trace.BundleResult;
 import org.axistack.trace.BundleTracer;
 import org.axistack.trace.ElectrodeGeometry;
@@ -21,7 +20,7 @@ import org.axistack.trace.Tracer;
 /**
  * The bundle behind the window's trajectory table: the same field and tracer as {@code trace} with its
  * defaults (a uniform disk of 100 parallel rays over 40 % of the narrowest bore from the beam start; near-axis
- * series plus a field map of the remainder with its measured error; tolerance 1e-11), observed at the lens
+ * series of the solver's axial expansion plus a field map of the remainder with its measured error; tolerance 1e-11), observed at the lens
  * centre and at the screen.
  */
 public final class TableBundle {
@@ -49,8 +48,7 @@ public final class TableBundle {
         double step = bore / 40;
         double z0 = Math.max(geometry.regionZMin_m(), Math.min(start, screen) - 4 * step);
         double z1 = Math.min(geometry.regionZMax_m(), screen + 4 * step);
-        AxialTable axial = new AxialTable(field, z0 - 4 * step, z1 + 4 * step, Math.min(step, 0.1e-3));
-        FieldMap map = new FieldMap(field, new NearAxisField(axial), geometry, z0, z1, bore, step, progress);
+        FieldMap map = new FieldMap(field, new NearAxisField(field), geometry, z0, z1, bore, step, progress);
         Tracer tracer = new Tracer(map, geometry, TraceSettings.defaults());
         return BundleTracer.perCore(tracer).trace(rays, targets, progress);
     }
