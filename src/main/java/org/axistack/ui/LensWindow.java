@@ -225,19 +225,27 @@ public final class LensWindow extends JFrame {
         if (doc == null) {
             return false;
         }
-        if (doc.modified() && doc.path().isPresent()) {
+        if (doc.modified()) {
             return true;
         }
         return biasPanel != null && solvedStack != null
                 && !Arrays.equals(biasPanel.biases(), textBiases().orElse(solvedStack.biases_V()));
     }
 
+    private String parsedText;
+    private Optional<double[]> parsedBiases = Optional.empty();
+
+    /** The biases written in the text (read once per text, not on every bias change). */
     private Optional<double[]> textBiases() {
-        try {
-            return Optional.of(doc.parse().biases_V());
-        } catch (StackInputException e) {
-            return Optional.empty();
+        if (!doc.text().equals(parsedText)) {
+            parsedText = doc.text();
+            try {
+                parsedBiases = Optional.of(doc.parse().biases_V());
+            } catch (StackInputException e) {
+                parsedBiases = Optional.empty();
+            }
         }
+        return parsedBiases;
     }
 
     void updateTitle() {

@@ -40,7 +40,7 @@ public record StackDocument(Optional<Path> path, String shownAs, String savedTex
 
     /** A document for text that has no file yet (the built-in demo). */
     public static StackDocument unsaved(String name, String text) {
-        return new StackDocument(Optional.empty(), name, "", text);
+        return new StackDocument(Optional.empty(), name, text, text);
     }
 
     /** Whether the text differs from what is on disk. */

@@ -31,7 +31,11 @@ public final class TableBundle {
     private TableBundle() {
     }
 
-    /** Traces the bundle; progress may cancel (then the result holds the rays finished so far). */
+    /**
+     * Traces the bundle.
+     *
+     * @throws java.util.concurrent.CancellationException when progress asks to stop
+     */
     public static BundleResult trace(Stack stack, BiasedField field, TraceProgress progress) {
         ElectrodeGeometry geometry = ElectrodeGeometry.of(stack);
         double bore = LiveRays.bore_m(stack);

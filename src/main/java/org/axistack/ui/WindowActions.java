@@ -111,6 +111,10 @@ final class WindowActions {
         view.add(help);
         bar.add(view);
 
+        JMenu tuneMenu = new JMenu("Tune");
+        tuneMenu.add(item("Focus on a plane...", KeyEvent.VK_T, e -> new FocusAction(w).run()));
+        bar.add(tuneMenu);
+
         JMenu helpMenu = new JMenu("Help");
         helpMenu.add(item("High-voltage cautions", 0, e -> showCautions()));
         bar.add(helpMenu);
@@ -334,7 +338,7 @@ final class WindowActions {
                     }
                 });
                 if (cancelRequested) {
-                    return "trajectory table cancelled; nothing was written";
+                    throw new CancellationException("cancelled");
                 }
                 TraceTableCsv.write(p, r);
                 return String.format(Locale.ROOT, "wrote %s: %d rays, %d lost", p, r.trajectories().size(), r.lost());
@@ -348,7 +352,11 @@ final class WindowActions {
                     done.accept(get());
                 } catch (InterruptedException | ExecutionException e) {
                     Throwable c = e.getCause() == null ? e : e.getCause();
-                    error(p.toString(), "the trajectory table was not written: " + c.getMessage());
+                    if (c instanceof CancellationException) {
+                        done.accept("trajectory table cancelled; nothing was written");
+                    } else {
+                        error(p.toString(), "the trajectory table was not written: " + c.getMessage());
+                    }
                 }
             }
         }.execute();

@@ -54,6 +54,31 @@ class LensSessionTest {
     }
 
     @Test
+    void trajectoryTableHasEveryRayAtEveryPlaneAndCancelWritesNothing(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws Exception {
+        var field = session.solution().biased();
+        var res = TableBundle.trace(stack, field, org.axistack.trace.TraceProgress.none());
+        assertThat(res.trajectories()).hasSize(TableBundle.RAYS);
+        Path csv = dir.resolve("rays.csv");
+        org.axistack.io.TraceTableCsv.write(csv, res);
+        var lines = java.nio.file.Files.readAllLines(csv);
+        assertThat(lines.get(0)).startsWith("ray_id,z_mm,x_mm,y_mm,r_mm,slope_mrad");
+        assertThat(lines).hasSize(1 + TableBundle.RAYS * res.targets().planes_m().size());
+        // a bundle cancelled from the start stops with CancellationException (the window then writes nothing)
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> TableBundle.trace(stack, field,
+                new org.axistack.trace.TraceProgress() {
+            @Override
+            public void raysDone(int done, int total) {
+            }
+
+            @Override
+            public boolean isCancelled() {
+                return true;
+            }
+        })).isInstanceOf(java.util.concurrent.CancellationException.class);
+    }
+
+    @Test
     void potentialGridIsTheSuperpositionOfTheFieldAtTheNodes() {
         double[] b = stack.biases_V();
         PotentialGrid g = PotentialGrid.compute(session.solution(), stack.minZ_m(), stack.maxZ_m(), 2e-3, 5, 3,
