@@ -35,6 +35,13 @@ final class BenchCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    /** The example requirements the sizing row runs by default (a three-parameter einzel sizing). */
+    static final String SIZING_EXAMPLE = "lens-library/requirements/argon-einzel-sizing.toml";
+
+    @Option(names = "--sizing", arity = "0..1", paramLabel = "REQUIREMENTS", fallbackValue = SIZING_EXAMPLE,
+            description = "Also time one sizing study (default: " + SIZING_EXAMPLE + "; target <= 60 s on 2 cores).")
+    java.nio.file.Path sizing;
+
     @Option(names = "--repeat", paramLabel = "N", defaultValue = "7", description = "Repetitions per measurement (default 7).")
     int repeat;
 
@@ -91,6 +98,14 @@ final class BenchCommand implements Callable<Integer> {
             cardinal[i] = (System.nanoTime() - t) * 1e-9;
         }
         row(out, "cardinal elements for a new bias set", median(cardinal), 0.005);
+        if (sizing != null) {
+            org.axistack.size.Requirements req = org.axistack.io.RequirementsReader.read(sizing);
+            long t = System.nanoTime();
+            org.axistack.size.SizingResult r = org.axistack.size.SizingStudy.run(req,
+                    new org.axistack.size.TunerFocusFinder(req.search().biasSamples() / 2), null);
+            row(out, String.format(Locale.ROOT, "sizing, %d varied parameters, %d geometries (%s)", req.varied().length,
+                    r.candidates().size(), sizing.getFileName()), (System.nanoTime() - t) * 1e-9, 60);
+        }
         out.flush();
         return 0;
     }

@@ -124,12 +124,32 @@ public final class DesignEvaluator {
                 cs = ab.sphericalImage_m();
                 cc = ab.chromaticImage_m();
             }
+            if (!meetsCondition(imageZ, card.focalLengthImage_m())) {
+                return null;
+            }
             double maxField = Arrays.stream(field.maxSurfaceFieldPerElectrode_V_per_m()).max().orElse(0);
             return new Design(req.family(), p, dims, s.electrodes(), bias, imageZ, card.focalLengthImage_m(), mag, cs,
                     cc, maxField, s.maxZ_m() - s.minZ_m(), checks(s, bias, maxField), sol.unknowns());
         } catch (ReflectionException | IllegalArgumentException | ArithmeticException e) {
             return null;
         }
+    }
+
+    /** Relative accuracy a focusing bias must reach (of the object-image distance, or of the focal length). */
+    static final double FOCUS_TOLERANCE = 1e-6;
+
+    /**
+     * Whether the design really meets the focusing condition: a finder's root is re-checked on the design's own
+     * optics (a root reported at the edge of a reflecting range, for example, is dropped).
+     */
+    private boolean meetsCondition(double imageZ, double f2) {
+        if (req.focalLength_m().isPresent()) {
+            double f = req.focalLength_m().getAsDouble();
+            return Math.abs(f2 - f) <= FOCUS_TOLERANCE * f;
+        }
+        double zi = req.imageZ_m().getAsDouble();
+        double scale = req.objectZ_m().isPresent() ? zi - req.objectZ_m().getAsDouble() : Math.abs(f2);
+        return Math.abs(imageZ - zi) <= FOCUS_TOLERANCE * scale;
     }
 
     private List<Violation> checks(Stack s, double bias, double maxField) {
