@@ -77,6 +77,7 @@ public final class SizingFrontChart {
         x.setAutoRangeIncludesZero(true);
         LogAxis y = new LogAxis("spherical aberration Cs (mm)");
         y.setSmallestValue(1e-6);
+        y.setNumberFormatOverride(new java.text.DecimalFormat("0.##E0"));
         XYPlot plot = new XYPlot(data, x, y, r);
         plot.setBackgroundPaint(BACKGROUND);
         plot.setDomainGridlinePaint(GRID);

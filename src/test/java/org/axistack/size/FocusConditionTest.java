@@ -1,6 +1,7 @@
 package org.axistack.size;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
@@ -36,6 +37,21 @@ class FocusConditionTest {
             // the residual is solved to ~1e-13; 1e-6 of f leaves room for the re-evaluation of the optics
             assertThat(d.focalLength_m()).isCloseTo(0.05, within(5e-8));
         }
+    }
+
+    /** Returning false from the progress callback stops the search with a CancellationException. */
+    @Test
+    void theSearchCanBeCancelled() {
+        Requirements r = immersion(OptionalDouble.of(0.08), OptionalDouble.empty());
+        List<Parameter> varied = List.of(new Parameter("bore_radius", 0.003, 0.005), new Parameter("gap", 0.002, 0.002),
+                new Parameter("tube_length", 0.03, 0.03), new Parameter("wall", 0.001, 0.001));
+        Requirements v = new Requirements(r.title(), r.beam(), r.objectZ_m(), r.imageZ_m(), r.focalLength_m(),
+                r.minBore_m(), r.maxLength_m(), r.maxBias_V(), r.maxSurfaceField_V_per_m(), r.family(), varied,
+                r.objective(), new SearchSettings(20, 100, 100, 16, 1));
+        int[] calls = {0};
+        assertThatThrownBy(() -> SizingStudy.run(v, new TunerFocusFinder(8), (stage, done, budget, best) -> ++calls[0] < 2))
+                .isInstanceOf(java.util.concurrent.CancellationException.class);
+        assertThat(calls[0]).isEqualTo(2);
     }
 
     @Test
