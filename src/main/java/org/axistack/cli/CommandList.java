@@ -17,6 +17,7 @@ final class CommandList {
                 new OpticsCommand(),
                 new TraceCommand(),
                 new EnvelopeCommand(),
+                new TuneCommand(),
                 new SizeCommand(),
                 new BenchCommand(),
                 new CheckCommand(),

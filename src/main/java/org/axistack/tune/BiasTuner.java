@@ -5,6 +5,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.DoubleFunction;
+import java.util.stream.IntStream;
 
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
@@ -17,18 +20,20 @@ import org.hipparchus.exception.MathIllegalStateException;
  * Finds every bias of one electrode, within a range, at which the lens images an object onto a given plane.
  *
  * <p>Method: a bracket scan of the continuous focusing condition of {@link FocusProbe} (height at the image plane
- * of the paraxial ray from the object) on {@value #SCAN_POINTS} equally spaced biases, refined by bisection near
- * the edge of any reflecting part of the range and around every dip of |height| that does not change sign (so
- * close pairs of roots are not missed); each sign change is then solved by the bracketing n-th order Brent
- * method (Hipparchus {@code BracketingNthOrderBrentSolver}; R. P. Brent, Algorithms for Minimization without
- * Derivatives, 1973, with inverse polynomial interpolation of order 5). Einzel lenses give two roots, one
+ * of the paraxial ray from the object) on {@value #SCAN_POINTS} equally spaced biases (in parallel, with a looser
+ * integration tolerance, {@link FocusProbe#scanSettings()}), refined by bisection near the edge of any reflecting
+ * part of the range and around every dip of |height| that does not change sign (so close pairs of roots are not
+ * missed); each sign change is solved by the bracketing n-th order Brent method (Hipparchus
+ * {@code BracketingNthOrderBrentSolver}; R. P. Brent, Algorithms for Minimization without Derivatives, 1973, with
+ * inverse polynomial interpolation of order 5) and polished by secant steps on the condition computed with the
+ * {@code optics} command's own settings, so a tuned bias reproduces the image plane in an {@code optics} run. Einzel lenses give two roots, one
  * decelerating and one accelerating. Each bias set is applied by superposition of the stored unit solutions;
  * the field is never solved again. Thread-safe (immutable).
  */
 public final class BiasTuner {
 
     /** Equally spaced biases of the first scan. */
-    public static final int SCAN_POINTS = 33;
+    public static final int SCAN_POINTS = 25;
     /** Upper bound on optics evaluations per tune (scan, refinement and roots). */
     static final int MAX_EVALUATIONS = 400;
     private static final int EDGE_BISECTIONS = 10;
@@ -64,26 +69,28 @@ public final class BiasTuner {
         if (index < 0) {
             throw new IllegalArgumentException("no electrode named '" + electrode + "'");
         }
-        FocusProbe probe = new FocusProbe(solution, stack, target);
+        FocusProbe coarse = new FocusProbe(solution, stack, target, FocusProbe.scanSettings());
+        FocusProbe fine = new FocusProbe(solution, stack, target);
         double[] base = stack.biases_V();
+        AtomicInteger count = new AtomicInteger();
+        DoubleFunction<FocusProbe.Point> scanEval = v -> coarse.at(with(base, index, v, count));
+        DoubleFunction<FocusProbe.Point> fineEval = v -> fine.at(with(base, index, v, count));
         TreeMap<Double, FocusProbe.Point> scan = new TreeMap<>();
-        int[] count = {0};
-        java.util.function.DoubleFunction<FocusProbe.Point> eval = v -> {
-            double[] b = base.clone();
-            b[index] = v;
-            count[0]++;
-            return probe.at(b);
-        };
+        double[] grid = new double[SCAN_POINTS];
         for (int i = 0; i < SCAN_POINTS; i++) {
-            double v = range.from_V() + range.width_V() * i / (SCAN_POINTS - 1);
-            scan.put(v, eval.apply(v));
+            grid[i] = range.from_V() + range.width_V() * i / (SCAN_POINTS - 1);
         }
-        refineEdges(scan, eval, range, count);
-        refineDips(scan, eval, range, count);
+        FocusProbe.Point[] first = new FocusProbe.Point[SCAN_POINTS];
+        IntStream.range(0, SCAN_POINTS).parallel().forEach(i -> first[i] = scanEval.apply(grid[i]));
+        for (int i = 0; i < SCAN_POINTS; i++) {
+            scan.put(grid[i], first[i]);
+        }
+        refineEdges(scan, scanEval, range, count);
+        refineDips(scan, scanEval, range, count);
 
         List<FocusSolution> solutions = new ArrayList<>();
-        double absAcc = 1e-10 * Math.max(range.width_V(), Math.max(Math.abs(range.from_V()), Math.abs(range.to_V())));
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-14, absAcc, 1e-15, 5);
+        double scale = Math.max(range.width_V(), Math.max(Math.abs(range.from_V()), Math.abs(range.to_V())));
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, 1e-8 * scale, 1e-12, 5);
         Map.Entry<Double, FocusProbe.Point> prev = null;
         double reflectFrom = Double.NaN;
         double reflectTo = Double.NaN;
@@ -93,27 +100,26 @@ public final class BiasTuner {
                 reflectFrom = Double.isNaN(reflectFrom) ? e.getKey() : Math.min(reflectFrom, e.getKey());
                 reflectTo = Double.isNaN(reflectTo) ? e.getKey() : Math.max(reflectTo, e.getKey());
             }
-            if (prev != null && prev.getValue().valid() && p.valid()) {
-                double m0 = prev.getValue().miss();
-                double m1 = p.miss();
-                if (m1 == 0) {
-                    solutions.add(describe(stack, electrode, index, p, target));
-                } else if (m0 != 0 && Math.signum(m0) != Math.signum(m1)) {
-                    try {
-                        double root = solver.solve(200, v -> {
-                            FocusProbe.Point q = eval.apply(v);
-                            if (!q.valid()) {
-                                throw new IllegalStateException("reflection inside a bracket");
-                            }
-                            return q.miss();
-                        }, prev.getKey(), e.getKey(), AllowedSolution.ANY_SIDE);
-                        solutions.add(describe(stack, electrode, index, eval.apply(root), target));
-                    } catch (IllegalStateException | MathIllegalStateException ex) {
-                        // a reflecting island inside the bracket: no clean root here
+            boolean bracket = prev != null && prev.getValue().valid() && p.valid()
+                    && (p.miss() == 0 || prev.getValue().miss() != 0 && Math.signum(prev.getValue().miss()) != Math.signum(p.miss()));
+            if (bracket || prev == null && p.valid() && p.miss() == 0) {
+                double lo = prev == null ? e.getKey() : prev.getKey();
+                double hi = e.getKey();
+                try {
+                    double approx = lo == hi ? lo : solver.solve(200, v -> {
+                        FocusProbe.Point q = scanEval.apply(v);
+                        if (!q.valid()) {
+                            throw new IllegalStateException("reflection inside a bracket");
+                        }
+                        return q.miss();
+                    }, lo, hi, AllowedSolution.ANY_SIDE);
+                    FocusProbe.Point root = polish(fineEval, approx, lo, hi, 1e-12 * scale);
+                    if (root != null) {
+                        solutions.add(describe(stack, electrode, index, root, target));
                     }
+                } catch (IllegalStateException | MathIllegalStateException ex) {
+                    // a reflecting island inside the bracket: no clean root here
                 }
-            } else if (prev == null && p.valid() && p.miss() == 0) {
-                solutions.add(describe(stack, electrode, index, p, target));
             }
             prev = e;
         }
@@ -131,13 +137,62 @@ public final class BiasTuner {
                         best.imageZ_m() - target.imageZ_m()));
             }
         }
-        return new TuneResult(electrode, target, range, solutions, nearest, count[0], reflectFrom, reflectTo);
+        return new TuneResult(electrode, target, range, solutions, nearest, count.get(), reflectFrom, reflectTo);
+    }
+
+    /** Evaluates new scan points in parallel (independent optics runs). */
+    private static void putAll(TreeMap<Double, FocusProbe.Point> scan, List<Double> add,
+            DoubleFunction<FocusProbe.Point> eval) {
+        List<Double> distinct = add.stream().distinct().toList();
+        FocusProbe.Point[] pts = new FocusProbe.Point[distinct.size()];
+        IntStream.range(0, pts.length).parallel().forEach(i -> pts[i] = eval.apply(distinct.get(i)));
+        for (int i = 0; i < pts.length; i++) {
+            scan.put(distinct.get(i), pts[i]);
+        }
+    }
+
+    private static double[] with(double[] base, int index, double v, AtomicInteger count) {
+        count.incrementAndGet();
+        double[] b = base.clone();
+        b[index] = v;
+        return b;
+    }
+
+    /**
+     * Secant steps on the full-accuracy condition from the scan-accuracy root (they differ by the looser
+     * integration tolerance only), kept inside the bracket; null if the full-accuracy probe reflects there.
+     */
+    private static FocusProbe.Point polish(DoubleFunction<FocusProbe.Point> fine, double x0, double lo, double hi,
+            double tol) {
+        FocusProbe.Point p0 = fine.apply(x0);
+        if (!p0.valid()) {
+            return null;
+        }
+        double step = Math.max(1e-7 * (hi - lo), 10 * tol);
+        double x1 = x0 + step <= hi ? x0 + step : x0 - step;
+        FocusProbe.Point p1 = fine.apply(x1);
+        for (int it = 0; it < 6 && p1.valid() && p1.miss() != 0; it++) {
+            double slope = (p1.miss() - p0.miss()) / (x1 - x0);
+            double x2 = x1 - p1.miss() / slope;
+            if (!(x2 >= lo && x2 <= hi) || !Double.isFinite(x2)) {
+                break;
+            }
+            boolean done = Math.abs(x2 - x1) <= tol;
+            x0 = x1;
+            p0 = p1;
+            x1 = x2;
+            p1 = fine.apply(x2);
+            if (done) {
+                break;
+            }
+        }
+        return p1.valid() && Math.abs(p1.miss()) <= Math.abs(p0.miss()) ? p1 : p0;
     }
 
     /** Bisect every interval between a reflecting and a transmitting bias, so roots near the edge are bracketed. */
     private static void refineEdges(TreeMap<Double, FocusProbe.Point> scan,
-            java.util.function.DoubleFunction<FocusProbe.Point> eval, BiasRange range, int[] count) {
-        for (int pass = 0; pass < EDGE_BISECTIONS && count[0] < MAX_EVALUATIONS; pass++) {
+            DoubleFunction<FocusProbe.Point> eval, BiasRange range, AtomicInteger count) {
+        for (int pass = 0; pass < EDGE_BISECTIONS && count.get() < MAX_EVALUATIONS; pass++) {
             List<Double> add = new ArrayList<>();
             Map.Entry<Double, FocusProbe.Point> prev = null;
             for (Map.Entry<Double, FocusProbe.Point> e : scan.entrySet()) {
@@ -150,9 +205,7 @@ public final class BiasTuner {
             if (add.isEmpty()) {
                 return;
             }
-            for (double v : add) {
-                scan.put(v, eval.apply(v));
-            }
+            putAll(scan, add, eval);
         }
     }
 
@@ -161,8 +214,8 @@ public final class BiasTuner {
      * small compared with its change to the neighbours: a pair of roots may hide there.
      */
     private static void refineDips(TreeMap<Double, FocusProbe.Point> scan,
-            java.util.function.DoubleFunction<FocusProbe.Point> eval, BiasRange range, int[] count) {
-        for (int pass = 0; pass < DIP_BISECTIONS && count[0] < MAX_EVALUATIONS; pass++) {
+            DoubleFunction<FocusProbe.Point> eval, BiasRange range, AtomicInteger count) {
+        for (int pass = 0; pass < DIP_BISECTIONS && count.get() < MAX_EVALUATIONS; pass++) {
             List<Double> add = new ArrayList<>();
             List<Map.Entry<Double, FocusProbe.Point>> list = new ArrayList<>(scan.entrySet());
             for (int i = 1; i + 1 < list.size(); i++) {
@@ -186,12 +239,8 @@ public final class BiasTuner {
             if (add.isEmpty()) {
                 return;
             }
-            for (double v : add) {
-                if (count[0] >= MAX_EVALUATIONS) {
-                    return;
-                }
-                scan.putIfAbsent(v, eval.apply(v));
-            }
+            add.removeIf(scan::containsKey);
+            putAll(scan, add, eval);
         }
     }
 

@@ -3,7 +3,9 @@ package org.axistack.tune;
 import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
+import org.axistack.optics.AccelerationPotential;
 import org.axistack.optics.ParaxialOptics;
+import org.axistack.optics.ParaxialSettings;
 import org.axistack.optics.ReflectionException;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.optics.TransferMatrix;
@@ -23,11 +25,26 @@ final class FocusProbe {
     private final FieldSolution solution;
     private final Stack stack;
     private final FocusTarget target;
+    private final ParaxialSettings settings;
+    private final double[] searchRange;
 
+    /** A probe with the optics command's default settings (the results agree with {@code optics} runs). */
     FocusProbe(FieldSolution solution, Stack stack, FocusTarget target) {
+        this(solution, stack, target, ParaxialSettings.defaults());
+    }
+
+    /** A probe with other numerical settings (e.g. a looser tolerance for a bracket scan). */
+    FocusProbe(FieldSolution solution, Stack stack, FocusTarget target, ParaxialSettings settings) {
         this.solution = solution;
         this.stack = stack;
         this.target = target;
+        this.settings = settings;
+        this.searchRange = ParaxialOptics.searchRange_m(stack);
+    }
+
+    /** Looser settings for scanning: relative tolerance 1e-9 and 200 axis samples (the plane search is unchanged in kind). */
+    static ParaxialSettings scanSettings() {
+        return ParaxialSettings.defaults().withRelativeTolerance(1e-9).withScanPoints(200);
     }
 
     FocusTarget target() {
@@ -54,7 +71,8 @@ final class FocusProbe {
         BiasedField field = solution.withBiases(biases_V);
         ParaxialOptics optics;
         try {
-            optics = ParaxialOptics.of(field, stack);
+            optics = ParaxialOptics.auto(new AccelerationPotential(field, stack.beam()), searchRange[0], searchRange[1],
+                    stack.beam().startZ_m(), settings);
         } catch (ReflectionException | StartPlaneException e) {
             // a mirror, or reference planes that no longer enclose the beam start: no optics at these biases
             return new Point(biases_V, field, null, Double.NaN, Double.NaN);
