@@ -18,6 +18,7 @@ final class CommandList {
                 new TraceCommand(),
                 new EnvelopeCommand(),
                 new TuneCommand(),
+                new SweepCommand(),
                 new SizeCommand(),
                 new BenchCommand(),
                 new CheckCommand(),
