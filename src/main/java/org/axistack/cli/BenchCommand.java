@@ -98,6 +98,7 @@ final class BenchCommand implements Callable<Integer> {
             cardinal[i] = (System.nanoTime() - t) * 1e-9;
         }
         row(out, "cardinal elements for a new bias set", median(cardinal), 0.005);
+        tuneRows(out, stack, sol);
         if (sizing != null) {
             org.axistack.size.Requirements req = org.axistack.io.RequirementsReader.read(sizing);
             long t = System.nanoTime();
@@ -108,6 +109,35 @@ final class BenchCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /** tune and sweep on the stack's electrode with the largest |bias| (the demo's focus tube). */
+    private void tuneRows(PrintWriter out, Stack stack, FieldSolution sol) {
+        double[] b = stack.biases_V();
+        int k = 0;
+        for (int i = 1; i < b.length; i++) {
+            if (Math.abs(b[i]) > Math.abs(b[k])) {
+                k = i;
+            }
+        }
+        String name = stack.electrodes().get(k).name();
+        double image = stack.screenZ_m().orElse(stack.maxZ_m());
+        org.axistack.tune.BiasTuner tuner = new org.axistack.tune.BiasTuner(sol, stack);
+        tuner.focus(name, image); // warm-up
+        double[] tune = new double[repeat];
+        int found = 0;
+        for (int i = 0; i < repeat; i++) {
+            long t = System.nanoTime();
+            found = tuner.focus(name, image).solutions().size();
+            tune[i] = (System.nanoTime() - t) * 1e-9;
+        }
+        row(out, "tune '" + name + "' after the field solve (" + found + " solutions)", median(tune), 0.050);
+        double from = -1.5 * Math.abs(stack.beam().energyPerCharge_V());
+        double to = 3 * Math.abs(stack.beam().energyPerCharge_V());
+        long t = System.nanoTime();
+        org.axistack.tune.BiasSweep.run(sol, stack, name, from, to, 999, stack.beam().objectZ_m(),
+                org.axistack.tune.BiasSweep.Progress.NONE);
+        row(out, "1000-point sweep of '" + name + "' (once)", (System.nanoTime() - t) * 1e-9, 5.0);
     }
 
     private static void row(PrintWriter out, String what, double seconds, double target) {
