@@ -79,8 +79,9 @@ final class PlanAnalysis {
                     PlanCommand.num(Units.mToMm(c.zStart_m())), PlanCommand.num(Units.mToMm(c.zEnd_m())),
                     c.planeSensitivity());
             if (c.planeSensitivity() > 1e-4) {
-                warnings.add(String.format(Locale.ROOT, "the reference planes are not field-free (plane sensitivity "
-                        + "%.1e): lengthen the outer electrodes or move the beam start outward", c.planeSensitivity()));
+                warnings.add(String.format(Locale.ROOT, "the reference planes are not quite field-free: the cardinal "
+                        + "elements carry a relative error of about %.1e; lengthen the outer electrodes or move the beam "
+                        + "start outward for better", c.planeSensitivity()));
             }
             OptionalDouble obj = stack.beam().objectZ_m();
             if (obj.isPresent() && obj.getAsDouble() < optics.zEnd_m()) {
