@@ -52,7 +52,7 @@ public final class LensWindow extends JFrame {
     /** The stack of the open session (geometry as solved, biases as loaded). */
     Stack solvedStack;
     LensSession session;
-    LensView current;
+    volatile LensView current;
     LensChart lensChart;
     BiasPanel biasPanel;
     EnvelopeLayer envelope = EnvelopeLayer.defaults();

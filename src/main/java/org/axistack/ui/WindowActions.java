@@ -177,7 +177,7 @@ final class WindowActions {
     /** Solves a stack's field and maps its potential on a worker, then installs the session. */
     void solve(Stack s) {
         if (running != null && !running.isDone()) {
-            cancelRequested = true;
+            running.cancel(true); // its result is ignored; the new solve starts at once
         }
         cancelRequested = false;
         w.progress.setValue(0);
@@ -193,12 +193,15 @@ final class WindowActions {
                         w.progress.setValue(v);
                         w.progress.setString(stage);
                     });
-                    return !cancelRequested;
+                    return !cancelRequested && !isCancelled();
                 });
             }
 
             @Override
             protected void done() {
+                if (running != this) {
+                    return; // a newer solve replaced this one
+                }
                 w.progress.setVisible(false);
                 w.cancel.setVisible(false);
                 try {
