@@ -113,6 +113,43 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         return new Stack(title, beam, electrodes, z, mesh, limits);
     }
 
+    /**
+     * The stack with every length multiplied by k (&gt; 0): electrodes, beam start and object points, screen.
+     * Mesh settings (element counts and edge levels) are kept, so the mesh scales with the geometry.
+     */
+    public Stack scaled(double k) {
+        if (!(k > 0) || !Double.isFinite(k)) {
+            throw new IllegalArgumentException("scale factor must be positive and finite: " + k);
+        }
+        return transformed(e -> e.scaled(k), z -> z * k);
+    }
+
+    /** The stack with every z (electrodes, beam start and object points, screen) shifted by dz_m. */
+    public Stack shifted(double dz_m) {
+        if (!Double.isFinite(dz_m)) {
+            throw new IllegalArgumentException("shift must be finite: " + dz_m);
+        }
+        return transformed(e -> e.shifted(dz_m), z -> z + dz_m);
+    }
+
+    /**
+     * The stack reflected z -&gt; -z, electrode order kept. The beam's start and object points are reflected
+     * too (a beam still travels toward +z, so a stack with either set usually needs them chosen anew).
+     */
+    public Stack mirrored() {
+        return transformed(Electrode::mirrored, z -> -z);
+    }
+
+    private Stack transformed(java.util.function.UnaryOperator<Electrode> e, java.util.function.DoubleUnaryOperator z) {
+        List<Electrode> list = electrodes.stream().map(e).toList();
+        Beam b = new Beam(beam.particle(), beam.energy_eV(), map(beam.startZ_m(), z), map(beam.objectZ_m(), z));
+        return new Stack(title, b, list, map(screenZ_m, z), mesh, limits);
+    }
+
+    private static OptionalDouble map(OptionalDouble v, java.util.function.DoubleUnaryOperator f) {
+        return v.isPresent() ? OptionalDouble.of(f.applyAsDouble(v.getAsDouble())) : v;
+    }
+
     /** Leftmost z of any electrode, m. */
     public double minZ_m() {
         return electrodes.stream().mapToDouble(e -> e.contour().minZ_m()).min().orElseThrow();
