@@ -28,8 +28,11 @@ import org.axistack.optics.SpotSizeBudget;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.report.LensPlan;
 import org.axistack.trace.Trajectory;
+import org.axistack.tune.BiasRange;
+import org.axistack.tune.BiasSweep;
 import org.axistack.tune.BiasTuner;
 import org.axistack.tune.SurfaceFieldCheck;
+import org.axistack.tune.SweepPoint;
 import org.axistack.tune.TuneResult;
 import org.axistack.verify.CheckResult;
 import org.axistack.verify.VerificationSuite;
@@ -38,6 +41,9 @@ import org.axistack.verify.VerificationSuite;
 final class PlanAnalysis {
 
     /** Aperture half-angles of the spot-size budget table, rad. */
+    /** Intervals of the focus-bias sweep in the report. */
+    static final int SWEEP_STEPS = 80;
+
     static final double[] SPOT_ANGLES_RAD = {0.5e-3, 1e-3, 2e-3, 5e-3, 10e-3, 20e-3};
 
     /**
@@ -172,6 +178,15 @@ final class PlanAnalysis {
             }
         }
 
+        List<SweepPoint> sweep = List.of();
+        if (name != null) {
+            BiasRange range = tune.map(TuneResult::range).orElse(BiasRange.supplyDefault(stack.beam()));
+            stage(err, quiet, "sweeping the bias of " + name + " over " + PlanCommand.num(range.from_V()) + " .. "
+                    + PlanCommand.num(range.to_V()) + " V");
+            sweep = BiasSweep.run(solution, stack, name, range.from_V(), range.to_V(), SWEEP_STEPS,
+                    stack.beam().objectZ_m(), BiasSweep.Progress.NONE);
+        }
+
         List<CheckResult> checks = List.of();
         if (s.runChecks()) {
             checks = VerificationSuite.run((i, n, caseName) -> {
@@ -183,7 +198,7 @@ final class PlanAnalysis {
             }
         }
         return new LensPlan(stack, source, solution, field, reflection, cardinal, opticsNote, imaging, aberrations,
-                spotInputs, spotRows, rays, rayNote, envelope, envNote, tune, tuneNote, checks, warnings,
+                spotInputs, spotRows, rays, rayNote, envelope, envNote, tune, tuneNote, Optional.ofNullable(name), sweep, checks, warnings,
                 (System.nanoTime() - t0) * 1e-9);
     }
 

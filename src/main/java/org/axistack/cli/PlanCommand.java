@@ -93,7 +93,8 @@ final class PlanCommand implements Callable<Integer> {
         PlanSummary.print(w, plan);
         Path html;
         try {
-            html = HtmlReport.write(plan, out);
+            html = HtmlReport.write(plan, out, plan.sweep().isEmpty() ? java.util.Map.of()
+                    : java.util.Map.of("sweep.csv", SweepCommand.csv(plan.sweep())));
         } catch (IOException | java.io.UncheckedIOException e) {
             throw new CommandLine.ParameterException(cl,
                     "--out " + out + ": cannot write there (" + e.getMessage() + "); choose a folder you can write to");

@@ -32,6 +32,11 @@ final class PlanSummary {
         p.aberrations().ifPresent(a -> aberrations(w, a));
         spot(w, p);
         tuning(w, p);
+        if (!p.sweep().isEmpty() && p.sweepElectrode().isPresent()) {
+            w.println("Focus-bias sweep: optics at " + p.sweep().size() + " biases of " + p.sweepElectrode().get() + " from "
+                    + g(p.sweep().get(0).bias_V()) + " to " + g(p.sweep().get(p.sweep().size() - 1).bias_V())
+                    + " V, " + p.sweep().stream().filter(x -> x.ok()).count() + " usable (sweep.png, sweep.csv)");
+        }
         surfaceFields(w, p);
         if (!p.checks().isEmpty()) {
             long passed = p.checks().stream().filter(CheckResult::passed).count();

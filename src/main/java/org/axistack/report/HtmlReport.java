@@ -8,6 +8,7 @@ import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackWriter;
@@ -44,7 +45,7 @@ public final class HtmlReport {
     }
 
     /** Writes the report and its figures and tables into {@code dir} (created if missing); returns the HTML path. */
-    public static Path write(LensPlan plan, Path dir) throws IOException {
+    public static Path write(LensPlan plan, Path dir, Map<String, String> extraTables) throws IOException {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
             throw new IOException(dir + " exists and is not a folder");
         }
@@ -69,7 +70,15 @@ public final class HtmlReport {
         if (plan.envelope().isPresent()) {
             figure(EnvelopeChart.envelope(stack, plan.envelope().get()), 1200, 520, dir, "envelope", files);
         }
+        if (!plan.sweep().isEmpty() && plan.sweepElectrode().isPresent()) {
+            figure(SweepChart.of(stack, plan.sweepElectrode().get(), plan.sweep(), "Optics against the bias of "
+                    + plan.sweepElectrode().get()), 1200, 760, dir, "sweep", files);
+        }
         // tables
+        for (var t : extraTables.entrySet()) {
+            AtomicFiles.writeString(AtomicFiles.inside(dir, t.getKey()), t.getValue());
+            files.add(t.getKey());
+        }
         for (var t : PlanTables.csvTables(plan, axial).entrySet()) {
             AtomicFiles.writeString(AtomicFiles.inside(dir, t.getKey()), t.getValue());
             files.add(t.getKey());
@@ -112,6 +121,15 @@ public final class HtmlReport {
         PlanSections.optics(b, plan);
         PlanSections.spot(b, plan);
         PlanSections.tuning(b, plan);
+        if (!plan.sweep().isEmpty() && plan.sweepElectrode().isPresent()) {
+            long ok = plan.sweep().stream().filter(p -> p.ok()).count();
+            b.append("<h2>Focus-bias sweep</h2>\n<img src=\"sweep.png\" alt=\"optics against the bias\">\n")
+                    .append("<p class=\"note\">Paraxial optics at ").append(plan.sweep().size())
+                    .append(" biases of electrode ").append(Html.esc(plan.sweepElectrode().get()))
+                    .append(" (other biases as given; one field solution, re-biased), ").append(ok)
+                    .append(" with usable optics; the rest reflect the beam or leave no field-free reference planes. "
+                            + "Table: sweep.csv.</p>\n");
+        }
         PlanSections.surfaceFields(b, plan);
         PlanSections.capacitance(b, plan);
         b.append("<h2>Axial potential</h2>\n<img src=\"axial.png\" alt=\"V, V' and V'' on the axis\">\n");

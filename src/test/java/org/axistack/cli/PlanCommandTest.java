@@ -27,7 +27,7 @@ class PlanCommandTest {
         assertThat(r.err()).contains("field solve: done, 100%", "plan: beam envelope");
         for (String f : new String[] {"report.html", "geometry.png", "geometry.svg", "axial.png", "axial.svg",
             "envelope.png", "axial.csv", "cardinal.csv", "surface_fields.csv", "capacitance.csv", "spot_budget.csv",
-            "focus_biases.csv", "stack.toml"}) {
+            "focus_biases.csv", "sweep.csv", "sweep.png", "stack.toml"}) {
             assertThat(out.resolve(f)).as(f).isNotEmptyFile();
         }
         var png = javax.imageio.ImageIO.read(out.resolve("geometry.png").toFile());
@@ -37,7 +37,7 @@ class PlanCommandTest {
         String html = Files.readString(out.resolve("report.html"));
         assertThat(html).contains("<h2>Cardinal elements</h2>", "<h2>Electrode surface fields</h2>",
                 "<h2>Capacitance matrix (pF)</h2>", "<h2>Method and stated accuracy</h2>", "<h2>Inputs</h2>",
-                "[[electrode]]", SafetyNotice.TITLE, "Not run (plan --no-check)");
+                "[[electrode]]", SafetyNotice.TITLE, "<h2>Focus-bias sweep</h2>", "Not run (plan --no-check)");
         assertThat(html).doesNotContain("http://", "https://", "<script");
         assertThat(Files.readAllLines(out.resolve("axial.csv")).get(0))
                 .isEqualTo("z_mm,potential_V,dV_dz_V_per_mm,d2V_dz2_V_per_mm2");
