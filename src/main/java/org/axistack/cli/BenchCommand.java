@@ -25,8 +25,8 @@ import picocli.CommandLine.Spec;
  * medians against the project's speed targets. Wall-clock times on whatever else this machine is doing.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Times the field solve, re-biasing with the axial potential, and cardinal elements",
-            "on the built-in demo lens (or STACK); prints medians against the speed targets."})
+        description = "Times the field solve, re-biasing with the axial potential, cardinal elements, tuning, a sweep"
+                + " and a 1000-ray bundle on the built-in demo lens (or STACK); prints medians against the speed targets.")
 final class BenchCommand implements Callable<Integer> {
 
     @Spec
@@ -99,6 +99,7 @@ final class BenchCommand implements Callable<Integer> {
         }
         row(out, "cardinal elements for a new bias set", median(cardinal), 0.005);
         tuneRows(out, stack, sol);
+        bundleRow(out, stack, sol);
         if (sizing != null) {
             org.axistack.size.Requirements req = org.axistack.io.RequirementsReader.read(sizing);
             long t = System.nanoTime();
@@ -109,6 +110,39 @@ final class BenchCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /**
+     * 1000 exact rays (uniform disk of 40 % of the narrowest bore) from the beam's start to the screen, in the
+     * field the trace command uses (near-axis series of the axial expansion plus the remainder map); the map is
+     * built once, outside the timing.
+     */
+    private void bundleRow(PrintWriter out, Stack stack, FieldSolution sol) {
+        if (stack.beam().startZ_m().isEmpty() || stack.screenZ_m().isEmpty()) {
+            out.println("  (no 1000-ray bundle row: the stack needs [beam] start_z_mm and [screen] z_mm)");
+            return;
+        }
+        double z0 = stack.beam().startZ_m().getAsDouble();
+        double z1 = stack.screenZ_m().getAsDouble();
+        double bore = stack.minBore_m();
+        BiasedField field = sol.withBiases(stack.biases_V());
+        org.axistack.trace.ElectrodeGeometry geometry = org.axistack.trace.ElectrodeGeometry.of(stack);
+        org.axistack.trace.FieldMap map = new org.axistack.trace.FieldMap(field, new org.axistack.trace.NearAxisField(field),
+                geometry, z0 - 1e-3, z1 + 1e-3, bore, bore / 40, org.axistack.trace.TraceProgress.none());
+        org.axistack.trace.Tracer tracer = new org.axistack.trace.Tracer(map, geometry,
+                org.axistack.trace.TraceSettings.defaults());
+        org.axistack.trace.RaySet rays = org.axistack.trace.RaySets.uniformDisk(stack.beam().particle(),
+                stack.beam().energy_eV(), z0, 0.4 * bore, 1000, 42);
+        org.axistack.trace.TraceTargets targets = org.axistack.trace.TraceTargets.screenOnly(z1);
+        int cores = Runtime.getRuntime().availableProcessors();
+        new org.axistack.trace.BundleTracer(tracer, cores).trace(rays, targets, org.axistack.trace.TraceProgress.none());
+        double[] t = new double[Math.max(3, Math.min(repeat, 7))];
+        for (int i = 0; i < t.length; i++) {
+            long t0 = System.nanoTime();
+            new org.axistack.trace.BundleTracer(tracer, cores).trace(rays, targets, org.axistack.trace.TraceProgress.none());
+            t[i] = (System.nanoTime() - t0) * 1e-9;
+        }
+        row(out, "1000-ray bundle to the screen, " + cores + " threads", median(t), 1.0);
     }
 
     /** tune and sweep on the stack's electrode with the largest |bias| (the demo's focus tube). */
