@@ -81,10 +81,10 @@ final class AxialExpansion {
         for (int pass = 0; pass < 4 && !work.isEmpty(); pass++) {
             List<double[]> current = work;
             double[][][][] fitted = new double[current.size()][][][];
-            IntStream.range(0, current.size()).parallel().forEach(i -> {
+            inOwnPool(() -> IntStream.range(0, current.size()).parallel().forEach(i -> {
                 double[] iv = current.get(i);
                 fitted[i] = fit(unit, iv[0], iv[1]);
-            });
+            }));
             if (scale == null) {
                 // Global scale of every (electrode, order) over the whole range: the error is measured against it,
                 // since far from the lens high derivatives are tiny and made of round-off.
@@ -133,6 +133,29 @@ final class AxialExpansion {
         breaks[idx.length] = zMax;
         return new AxialExpansion(breaks, coef, worst);
 
+    }
+
+    /**
+     * Runs the parallel fits in a pool of their own: the expansion is built under the solution's lock on first
+     * use, possibly from a task of the common pool while other common-pool workers wait for that lock; work
+     * queued on the common pool could then never run (a deadlock seen with one common-pool worker on 2 cores).
+     */
+    private static void inOwnPool(Runnable work) {
+        java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(
+                Math.max(1, Runtime.getRuntime().availableProcessors()));
+        try {
+            pool.submit(work).get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.util.concurrent.CancellationException("axial expansion interrupted");
+        } catch (java.util.concurrent.ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException re) {
+                throw re;
+            }
+            throw new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdown();
+        }
     }
 
     /** coefficients [electrode][order][j] on [a, b]. */
