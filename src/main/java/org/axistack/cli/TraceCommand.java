@@ -170,6 +170,14 @@ final class TraceCommand implements Callable<Integer> {
         RaySet rays;
         TraceTargets targets;
         Tracer tracer;
+        long wanted = (long) (count != null ? count : k == Kind.fan ? 21 : 100) * (k == Kind.fan ? Math.max(1, azimuths) : 1)
+                * (energyOffsets != null && !energyOffsets.isEmpty() ? energyOffsets.size() : 1);
+        int most = BundleTracer.maxRaysForHeap(planes.size());
+        if (wanted > most) {
+            throw usage(String.format(Locale.ROOT, "%d rays at %d plane(s) are more than this heap can hold (at most %d;"
+                    + " about %d MB of heap): lower --count%s, or start Java with a larger -Xmx", wanted, planes.size(),
+                    most, Runtime.getRuntime().maxMemory() >> 20, k == Kind.fan ? " or --azimuths" : ""));
+        }
         try {
             rays = raySet(k, beam, startZ, bore);
             targets = new TraceTargets(planes, screenZ);

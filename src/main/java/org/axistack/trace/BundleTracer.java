@@ -22,6 +22,25 @@ public final class BundleTracer {
     private final int threads;
 
     /** @param threads worker threads (&gt;= 1; the number of cores is the usual choice) */
+    /**
+     * Heap bytes kept per traced ray, estimated from the object layout of a finished ray (a {@link RayStart},
+     * a {@link Trajectory} with its end {@link RayPoint} and their headers, about 400 bytes) with a factor 2.5
+     * for the bundle's lists and statistics. An estimate, not a measurement: the limit below keeps 50 % of the
+     * heap free for the field solution, the field map and the output.
+     */
+    static final long BYTES_PER_RAY = 1000;
+    /** Heap bytes per ray and observation plane (one {@link PlaneCrossing} and its list slot, about 100 bytes, x2.5). */
+    static final long BYTES_PER_CROSSING = 250;
+    /** Most rays in one bundle whatever the heap (keeps run time bounded as well). */
+    public static final int MAX_RAYS = 5_000_000;
+
+    /** Largest number of rays the current heap can hold for a bundle observed at the given number of planes. */
+    public static int maxRaysForHeap(int planes) {
+        long perRay = BYTES_PER_RAY + BYTES_PER_CROSSING * Math.max(1, planes);
+        long byHeap = (long) (0.5 * Runtime.getRuntime().maxMemory()) / perRay;
+        return (int) Math.min(byHeap, MAX_RAYS);
+    }
+
     public BundleTracer(Tracer tracer, int threads) {
         if (tracer == null) {
             throw new IllegalArgumentException("the bundle tracer needs a tracer");
