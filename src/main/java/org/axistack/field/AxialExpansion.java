@@ -26,6 +26,8 @@ final class AxialExpansion {
      * the order), which no expansion can beat; asking for more only splits intervals without end.
      */
     static final double TOLERANCE = 1e-11;
+    /** Stretches where an electrode is closer to the axis than this fraction of the range use the exact sum. */
+    static final double EXACT_FRACTION = 1e-3;
 
     private final double[] breaks;
     /** coef[e][interval][order][j] */
@@ -61,21 +63,34 @@ final class AxialExpansion {
         int ne = s.electrodes().size();
         FieldSolution unit = s;
         BiasedField probe = s.withBiases(new double[ne]);
-        // initial intervals: length about half the clearance from the axis
+        // Initial intervals: length about the clearance from the axis. Where an electrode comes closer to the axis
+        // than EXACT_FRACTION of the range (a disk or plate across the axis, whose charge makes the axial
+        // derivatives jump), no expansion is made: those stretches are evaluated by the exact sum.
+        double minLen = EXACT_FRACTION * (zMax - zMin);
         List<double[]> work = new ArrayList<>();
+        List<double[]> done = new ArrayList<>();
+        List<double[][][]> doneCoef = new ArrayList<>();
         double z = zMin;
         while (z < zMax) {
-            double c = Math.max(probe.clearance_m(z, 0), 1e-6 * (zMax - zMin));
-            double len = Math.min(Math.max(c, 1e-4 * (zMax - zMin)), 0.1 * (zMax - zMin));
+            double c = probe.clearance_m(z, 0);
+            boolean exact = c < minLen;
+            double len = exact ? minLen : Math.min(c, 0.1 * (zMax - zMin));
             double end = Math.min(zMax, z + len);
             if (zMax - end < 0.3 * len) {
                 end = zMax;
             }
-            work.add(new double[] {z, end});
+            if (exact) {
+                if (!done.isEmpty() && doneCoef.get(done.size() - 1) == null && done.get(done.size() - 1)[1] == z) {
+                    done.get(done.size() - 1)[1] = end;
+                } else {
+                    done.add(new double[] {z, end});
+                    doneCoef.add(null);
+                }
+            } else {
+                work.add(new double[] {z, end});
+            }
             z = end;
         }
-        List<double[]> done = new ArrayList<>();
-        List<double[][][]> doneCoef = new ArrayList<>();
         double worst = 0;
         double[][] scale = null;
         for (int pass = 0; pass < 4 && !work.isEmpty(); pass++) {
@@ -106,10 +121,13 @@ final class AxialExpansion {
             work = new ArrayList<>();
             for (int i = 0; i < current.size(); i++) {
                 double[] iv = current.get(i);
-                if (errors[i] > TOLERANCE && pass < 3) {
+                if (errors[i] > TOLERANCE && pass < 3 && iv[1] - iv[0] > 2 * minLen) {
                     double mid = 0.5 * (iv[0] + iv[1]);
                     work.add(new double[] {iv[0], mid});
                     work.add(new double[] {mid, iv[1]});
+                } else if (errors[i] > TOLERANCE) {
+                    done.add(iv); // the expansion does not converge here: exact sums
+                    doneCoef.add(null);
                 } else {
                     done.add(iv);
                     doneCoef.add(fitted[i]);
@@ -126,8 +144,9 @@ final class AxialExpansion {
         double[][][][] coef = new double[ne][idx.length][][];
         for (int i = 0; i < idx.length; i++) {
             breaks[i] = done.get(idx[i])[0];
+            double[][][] c = doneCoef.get(idx[i]);
             for (int e = 0; e < ne; e++) {
-                coef[e][i] = doneCoef.get(idx[i])[e];
+                coef[e][i] = c == null ? null : c[e];
             }
         }
         breaks[idx.length] = zMax;
@@ -229,6 +248,10 @@ final class AxialExpansion {
                 continue;
             }
             for (int i = 0; i < ni; i++) {
+                if (coef[e][i] == null) {
+                    out[i] = null;
+                    continue;
+                }
                 for (int o = 0; o <= ORDER; o++) {
                     double[] src = coef[e][i][o];
                     double[] dst = out[i][o];
@@ -241,17 +264,25 @@ final class AxialExpansion {
         return out;
     }
 
-    /** Evaluates combined coefficients at z (inside [zMin, zMax]) for orders 0..order. */
-    void evaluate(double[][][] combined, double z, int order, double[] out) {
+    /**
+     * Evaluates combined coefficients at z (inside [zMin, zMax]) for orders 0..order.
+     *
+     * @return false where this stretch has no expansion (the caller then uses the exact sum)
+     */
+    boolean evaluate(double[][][] combined, double z, int order, double[] out) {
         int i = Arrays.binarySearch(breaks, z);
         if (i < 0) {
             i = -i - 2;
         }
         i = Math.max(0, Math.min(i, breaks.length - 2));
+        if (combined[i] == null) {
+            return false;
+        }
         double a = breaks[i], b = breaks[i + 1];
         double x = (2 * z - a - b) / (b - a);
         for (int o = 0; o <= order; o++) {
             out[o] = clenshaw(combined[i][o], x);
         }
+        return true;
     }
 }

@@ -82,8 +82,9 @@ public final class BiasedField implements Field, AxialField {
                     c = x.combine(biases);
                     combined = c;
                 }
-                x.evaluate(c, z_m, order, out);
-                return;
+                if (x.evaluate(c, z_m, order, out)) {
+                    return;
+                }
             }
         }
         exactAxial(z_m, order, out);
