@@ -1,0 +1,52 @@
+package org.axistack.optics;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+
+import org.axistack.field.BemSolver;
+import org.axistack.field.BiasedField;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.StackReader;
+import org.axistack.model.Stack;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Scherzer's theorem (O. Scherzer, Z. Physik 101, 593 (1936)): a static round lens free of space charge has
+ * positive spherical and chromatic aberration coefficients. Checked on every stack of the lens library with
+ * the aberration integrals, in the convention of interface.md (image side for a parallel beam, object side
+ * too for a finite object), at the stack's own biases.
+ */
+class LensLibraryScherzerTest {
+
+    static Stream<Path> library() throws IOException {
+        try (Stream<Path> files = Files.list(Path.of("lens-library"))) {
+            return files.filter(p -> p.toString().endsWith(".toml")).sorted().toList().stream();
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("library")
+    void everyLibraryLensHasPositiveCsAndCc(Path file) throws Exception {
+        Stack stack = StackReader.read(file);
+        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE).biased();
+        ParaxialOptics optics = ParaxialOptics.of(field, stack);
+        // a strong lens may cross the axis inside its field and look diverging asymptotically (the retarding
+        // analyser lens does): the theorem still holds for its coefficients; only an afocal lens has none
+        assertThat(optics.cardinal().kind()).as("%s has a focus", file).isNotEqualTo(CardinalElements.Kind.AFOCAL);
+        Aberrations a = optics.aberrations();
+        System.out.printf("%s (%s): Cs %.6g mm, Cc %.6g mm (image side)%n", file.getFileName(), optics.cardinal().kind(),
+                a.sphericalImage_m() * 1e3, a.chromaticImage_m() * 1e3);
+        assertThat(a.sphericalImage_m()).as("Cs of %s", file).isPositive();
+        assertThat(a.chromaticImage_m()).as("Cc of %s", file).isPositive();
+        if (stack.beam().objectZ_m().isPresent()) {
+            Aberrations o = optics.aberrations(stack.beam().objectZ_m().getAsDouble());
+            assertThat(o.sphericalObject_m().getAsDouble()).as("object-side Cs of %s", file).isPositive();
+            assertThat(o.chromaticObject_m().getAsDouble()).as("object-side Cc of %s", file).isPositive();
+        }
+    }
+}
