@@ -56,29 +56,7 @@ public final class StackReader {
 
     /** Reads a stack file; messages name it as {@code shownAs}. */
     public static Stack read(Path file, String shownAs) throws StackInputException {
-        byte[] bytes;
-        try {
-            if (!Files.exists(file)) {
-                throw new StackInputException(StackMessage.FILE_NOT_FOUND, shownAs, 0, null, null, Map.of());
-            }
-            if (!Files.isRegularFile(file)) {
-                throw new StackInputException(StackMessage.FILE_UNREADABLE, shownAs, 0, null, null,
-                        Map.of("reason", "it is not a regular file"));
-            }
-            long size = Files.size(file);
-            if (size > Limits.MAX_FILE_BYTES) {
-                throw tooLarge(shownAs, size);
-            }
-            try (InputStream in = Files.newInputStream(file)) {
-                bytes = in.readNBytes((int) Limits.MAX_FILE_BYTES + 1);
-            }
-        } catch (NoSuchFileException e) {
-            throw new StackInputException(StackMessage.FILE_NOT_FOUND, shownAs, 0, null, null, Map.of());
-        } catch (IOException e) {
-            throw new StackInputException(StackMessage.FILE_UNREADABLE, shownAs, 0, null, null,
-                    Map.of("reason", String.valueOf(e.getMessage())));
-        }
-        return parse(bytes, shownAs);
+        return parse(readText(file, shownAs), shownAs);
     }
 
     private static StackInputException tooLarge(String source, long size) {
