@@ -110,7 +110,7 @@ final class EnvelopeCommand implements Callable<Integer> {
         EnvelopeSolver solver = new EnvelopeSolver(nearFill == null ? org.axistack.beam.EnvelopeSettings.defaults()
                 : checked(cl, () -> org.axistack.beam.EnvelopeSettings.defaults().withNearFill(nearFill)));
         PrintWriter err = cl.getErr();
-        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), progress(err)).withBiases(stack.biases_V());
+        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, json)).withBiases(stack.biases_V());
         EnvelopeStudy study = new EnvelopeStudy(solver);
         EnvelopeStudyResult res = checked(cl, () -> study.run(stack, field, req));
         ScanResult scan = null;
@@ -156,19 +156,6 @@ final class EnvelopeCommand implements Callable<Integer> {
                 err.flush();
             }
         }));
-    }
-
-    private org.axistack.field.SolveProgress progress(PrintWriter err) {
-        return (stage, f) -> {
-            if (!json) {
-                err.printf(java.util.Locale.ROOT, "\rfield solve: %-12s %3.0f %%", stage, 100 * f);
-                if (f >= 1) {
-                    err.println();
-                }
-                err.flush();
-            }
-            return true;
-        };
     }
 
     private EnvelopeRequest request(Stack stack, CommandLine cl) {

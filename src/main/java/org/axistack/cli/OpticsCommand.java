@@ -59,16 +59,7 @@ final class OpticsCommand implements Callable<Integer> {
     public Integer call() throws StackInputException {
         Stack stack = input.load(spec.commandLine());
         PrintWriter err = spec.commandLine().getErr();
-        int[] lastPercent = {-10};
-        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), (stage, fraction) -> {
-            int percent = (int) Math.floor(fraction * 100);
-            if (!json && percent >= lastPercent[0] + 25) {
-                lastPercent[0] = percent;
-                err.printf(Locale.ROOT, "field solve: %s, %d%%%n", stage, percent);
-                err.flush();
-            }
-            return true;
-        }).biased();
+        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, json)).biased();
         OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("stack", input.shownAs());

@@ -191,7 +191,7 @@ final class TraceCommand implements Callable<Integer> {
         }
 
         err.println("solving the field (" + stack.mesh().targetElements() + " elements) ...");
-        BiasedField biased = BemSolver.solve(stack.electrodes(), stack.mesh(), progressLine(err, "field"))
+        BiasedField biased = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, false))
                 .withBiases(stack.biases_V());
         Field field = biased;
         String method;
@@ -308,20 +308,6 @@ final class TraceCommand implements Callable<Integer> {
 
     private CommandLine.ParameterException usage(String message) {
         return new CommandLine.ParameterException(spec.commandLine(), message);
-    }
-
-    private static org.axistack.field.SolveProgress progressLine(PrintWriter err, String what) {
-        int[] last = {-1};
-        return (stage, f) -> {
-            int pct = (int) (f * 10) * 10;
-            synchronized (last) {
-                if (pct != last[0]) {
-                    last[0] = pct;
-                    err.println("  " + what + ": " + stage + " " + pct + " %");
-                }
-            }
-            return true;
-        };
     }
 
     private static TraceProgress progressRays(PrintWriter err) {
