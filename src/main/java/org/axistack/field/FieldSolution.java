@@ -176,9 +176,4 @@ public final class FieldSolution {
         }
         return d;
     }
-
-    /** sigma/eps0 at node j for unit bias on electrode e, V/m. */
-    double unitDensity(int e, int j) {
-        return unitDensity[e][j];
-    }
 }

@@ -12,11 +12,6 @@ public final class NearAxisSeries {
     private NearAxisSeries() {
     }
 
-    /** Axial derivative order needed for the given number of terms (potential and both field components). */
-    public static int orderFor(int terms) {
-        return 2 * terms - 1;
-    }
-
     /**
      * @param d        axial derivatives d[k] = V^(k)(z), k = 0..2 terms - 1
      * @param terms    number of series terms (1 = paraxial potential only)
@@ -47,16 +42,5 @@ public final class NearAxisSeries {
         fieldOut[0] = ez;
         fieldOut[1] = er;
         return phi;
-    }
-
-    /** Size of the last term kept, relative to V(z)'s scale, as a truncation estimate: |(r/2)^(2n-2) V^(2n-2)| / ((n-1)!)^2. */
-    public static double lastTerm(double[] d, int terms, double r_m) {
-        int k = terms - 1;
-        double h = r_m / 2;
-        double c = 1;
-        for (int i = 1; i <= k; i++) {
-            c *= h * h / ((double) i * i);
-        }
-        return Math.abs(c * d[2 * k]);
     }
 }

@@ -10,17 +10,15 @@ public final class BoundaryMesh {
 
     private final List<Panel> panels;
     private final int order;
-    private final int electrodeCount;
     private final double[] tau;
     private final double[] weight;
     private final double[] z;
     private final double[] r;
     private final double[] jac;
 
-    BoundaryMesh(List<Panel> panels, int order, int electrodeCount, double[] tau, double[] weight) {
+    BoundaryMesh(List<Panel> panels, int order, double[] tau, double[] weight) {
         this.panels = List.copyOf(panels);
         this.order = order;
-        this.electrodeCount = electrodeCount;
         this.tau = tau.clone();
         this.weight = weight.clone();
         int n = panels.size() * order;
@@ -50,10 +48,6 @@ public final class BoundaryMesh {
     /** Total number of unknowns (collocation nodes). */
     public int size() {
         return z.length;
-    }
-
-    public int electrodeCount() {
-        return electrodeCount;
     }
 
     /** Local node coordinates tau_j in [0, 1] (shared by every panel). */

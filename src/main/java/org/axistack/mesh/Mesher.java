@@ -77,7 +77,7 @@ public final class Mesher {
             tau[j] = gauss.getPoint(j);
             w[j] = gauss.getWeight(j);
         }
-        return new BoundaryMesh(panels, ORDER, electrodes.size(), tau, w);
+        return new BoundaryMesh(panels, ORDER, tau, w);
     }
 
     /** Per-segment plan: where the singular ends are and their exponents. */

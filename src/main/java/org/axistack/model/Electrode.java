@@ -1,6 +1,5 @@
 package org.axistack.model;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -268,19 +267,6 @@ public sealed interface Electrode permits Electrode.Tube, Electrode.Aperture, El
         @Override
         public String shape() {
             return "outline";
-        }
-
-        /** Vertices of the outline in order (arc via-points excluded). */
-        public List<ZR> vertices() {
-            List<ZR> v = new ArrayList<>();
-            v.add(outline.segments().get(0).start());
-            for (Segment s : outline.segments()) {
-                v.add(s.end());
-            }
-            if (outline.closed()) {
-                v.remove(v.size() - 1);
-            }
-            return v;
         }
     }
 }
