@@ -83,6 +83,10 @@ public final class Main implements Runnable {
             err.println("error: the field cannot be solved as given: " + m.getMessage() + ".");
             return EXIT_INPUT;
         }
+        if (ex instanceof org.axistack.optics.BlockedAxisException b) {
+            err.println(b.getMessage() + ".");
+            return EXIT_PHYSICS;
+        }
         if (ex instanceof OutcomeException o) {
             err.println(o.getMessage());
             return EXIT_PHYSICS;

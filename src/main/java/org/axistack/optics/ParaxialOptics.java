@@ -76,9 +76,19 @@ public final class ParaxialOptics {
     /**
      * Paraxial optics of a stack's field for the stack's beam, planes chosen automatically within
      * {@link #searchRange_m(Stack)}.
+     *
+     * @throws BlockedAxisException if an electrode crosses the axis in the beam's path (anywhere in the search
+     *                              range not behind a given beam start)
      */
     public static ParaxialOptics of(AxialField field, Stack stack) {
         double[] range = searchRange_m(stack);
+        double from = stack.beam().startZ_m().orElse(range[0]);
+        for (org.axistack.model.Electrode e : stack.electrodes()) {
+            org.axistack.model.Contour c = e.contour();
+            if (c.minR_m() <= 0 && c.maxZ_m() > from && c.minZ_m() < range[1]) {
+                throw new BlockedAxisException(e.name(), c.minZ_m(), c.maxZ_m());
+            }
+        }
         return auto(field, stack.beam(), range[0], range[1]);
     }
 

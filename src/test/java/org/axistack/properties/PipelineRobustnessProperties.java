@@ -12,6 +12,7 @@ import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.ParaxialOptics;
+import org.axistack.optics.BlockedAxisException;
 import org.axistack.optics.ReflectionException;
 
 /**
@@ -43,6 +44,14 @@ class PipelineRobustnessProperties {
             double u = s.beam().energyPerCharge_V() - s.beam().particle().chargeSign() * f.axialPotential_V(zt);
             assertThat(u).isCloseTo(0, within(1e-6 * s.beam().energyPerCharge_V()));
             assertThat(e.getMessage()).contains("reflected");
+            return;
+        } catch (BlockedAxisException e) {
+            // reported only for an electrode that really reaches the axis inside the searched range
+            org.axistack.model.Contour blocker = s.electrode(e.electrode()).contour();
+            assertThat(blocker.minR_m()).isLessThanOrEqualTo(0.0);
+            assertThat(blocker.maxZ_m()).isGreaterThan(range[0]);
+            assertThat(blocker.minZ_m()).isLessThan(range[1]);
+            assertThat(e.getMessage()).contains(e.electrode(), "crosses the axis");
             return;
         }
         CardinalElements c = o.cardinal();
