@@ -12,7 +12,6 @@ import org.axistack.mesh.Panel;
 import org.axistack.model.Electrode;
 import org.axistack.model.MeshSettings;
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.CommonOps_DDRM;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 
@@ -23,15 +22,22 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * polynomial panels (e.g. Atkinson, The Numerical Solution of Integral Equations of the Second Kind,
  * ch. 4; for the axisymmetric ring kernel, the surface-charge method of electron optics as described in
  * P. W. Hawkes and E. Kasper, Principles of Electron Optics, vol. 1, ch. 13). The dense matrix is
- * assembled in parallel, LU-factored once with EJML, and solved for one unit-bias right-hand side per
- * electrode.
+ * assembled in parallel, factored once by block elimination on all cores from EJML's LU and matrix
+ * products ({@link SchurLuSolver}; one pivoted EJML LU of the whole matrix for small systems or as the
+ * fallback), and solved for one unit-bias right-hand side per electrode.
  */
 public final class BemSolver {
 
     private BemSolver() {
     }
 
-    /** Bytes of heap needed per unknown squared (matrix, its copy for the residual, solver workspace). */
+    /**
+     * Largest |A x - b| (unit-bias right-hand sides, so volts per volt) accepted from the parallel block
+     * elimination before falling back to one pivoted LU; well-posed meshes give 1e-14 .. 1e-12.
+     */
+    static final double RESIDUAL_TOLERANCE = 1e-10;
+
+    /** Bytes of heap needed per unknown squared (matrix, its tiled copy or the LU's copy, workspace). */
     static final double BYTES_PER_N2 = 8 * 2.2;
 
     /** Largest number of unknowns the current heap can take. */
@@ -119,22 +125,26 @@ public final class BemSolver {
         for (int i = 0; i < n; i++) {
             rhs.set(i, mesh.electrodeOf(i), 1.0);
         }
-        DMatrixRMaj copy = a.copy();
         if (!progress.update("factoring", 0.7)) {
             throw new CancellationException("field solve cancelled");
         }
-        LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.lu(n);
-        if (!solver.setA(a)) {
-            throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
+        DMatrixRMaj x = n >= SchurLuSolver.MIN_SIZE ? SchurLuSolver.solve(a, rhs, RESIDUAL_TOLERANCE,
+                f -> progress.update("factoring", 0.7 + 0.25 * f)) : null;
+        if (x == null) {
+            // Small systems, or a block elimination that did not meet the residual: one LU of the whole
+            // matrix with partial pivoting (EJML, single core).
+            LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.lu(n);
+            if (!solver.setA(a)) {
+                throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
+            }
+            x = new DMatrixRMaj(n, ne);
+            solver.solve(rhs, x);
         }
-        DMatrixRMaj x = new DMatrixRMaj(n, ne);
-        solver.solve(rhs, x);
         progress.update("checking residual", 0.95);
-        DMatrixRMaj check = new DMatrixRMaj(n, ne);
-        CommonOps_DDRM.mult(copy, x, check);
-        double residual = 0;
-        for (int i = 0; i < check.data.length; i++) {
-            residual = Math.max(residual, Math.abs(check.data[i] - rhs.data[i]));
+        double residual = SchurLuSolver.residual(a, x, rhs);
+        if (!(residual < 1e-6)) {
+            throw new MeshException("the collocation matrix is singular (residual " + residual
+                    + "): two electrodes coincide or overlap; separate them");
         }
         double[][] unit = new double[ne][n];
         for (int e = 0; e < ne; e++) {
