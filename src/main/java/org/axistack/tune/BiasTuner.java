@@ -91,9 +91,8 @@ public final class BiasTuner {
         refineEdges(scan, scanEval, range, count);
         refineDips(scan, scanEval, range, count);
 
-        List<FocusSolution> solutions = new ArrayList<>();
         double scale = Math.max(range.width_V(), Math.max(Math.abs(range.from_V()), Math.abs(range.to_V())));
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, 1e-8 * scale, 1e-12, 5);
+        List<double[]> brackets = new ArrayList<>();
         Map.Entry<Double, FocusProbe.Point> prev = null;
         double reflectFrom = Double.NaN;
         double reflectTo = Double.NaN;
@@ -106,25 +105,19 @@ public final class BiasTuner {
             boolean bracket = prev != null && prev.getValue().valid() && p.valid()
                     && (p.miss() == 0 || prev.getValue().miss() != 0 && Math.signum(prev.getValue().miss()) != Math.signum(p.miss()));
             if (bracket || prev == null && p.valid() && p.miss() == 0) {
-                double lo = prev == null ? e.getKey() : prev.getKey();
-                double hi = e.getKey();
-                try {
-                    double approx = lo == hi ? lo : solver.solve(200, v -> {
-                        FocusProbe.Point q = scanEval.apply(v);
-                        if (!q.valid()) {
-                            throw new IllegalStateException("reflection inside a bracket");
-                        }
-                        return q.miss();
-                    }, lo, hi, AllowedSolution.ANY_SIDE);
-                    FocusProbe.Point root = polish(fineEval, approx, lo, hi, 1e-12 * scale);
-                    if (root != null) {
-                        solutions.add(describe(stack, electrode, index, root, target));
-                    }
-                } catch (IllegalStateException | MathIllegalStateException ex) {
-                    // a reflecting island inside the bracket: no clean root here
-                }
+                brackets.add(new double[] {prev == null ? e.getKey() : prev.getKey(), e.getKey()});
             }
             prev = e;
+        }
+        // The brackets are independent: solve them in parallel (in scan order in the result).
+        FocusSolution[] found = new FocusSolution[brackets.size()];
+        IntStream.range(0, found.length).parallel().forEach(i -> found[i] = root(brackets.get(i)[0],
+                brackets.get(i)[1], scale, scanEval, fineEval, electrode, index, target));
+        List<FocusSolution> solutions = new ArrayList<>();
+        for (FocusSolution f : found) {
+            if (f != null) {
+                solutions.add(f);
+            }
         }
         Optional<TuneResult.NearestApproach> nearest = Optional.empty();
         if (solutions.isEmpty()) {
@@ -141,6 +134,28 @@ public final class BiasTuner {
             }
         }
         return new TuneResult(electrode, target, range, solutions, nearest, count.get(), reflectFrom, reflectTo);
+    }
+
+    /**
+     * The root in one bracket: n-th order Brent on the scan-accuracy condition, then secant polishing on the
+     * full-accuracy one; null when a reflecting island sits inside the bracket.
+     */
+    private FocusSolution root(double lo, double hi, double scale, DoubleFunction<FocusProbe.Point> scanEval,
+            DoubleFunction<FocusProbe.Point> fineEval, String electrode, int index, FocusTarget target) {
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, 1e-8 * scale, 1e-12, 5);
+        try {
+            double approx = lo == hi ? lo : solver.solve(200, v -> {
+                FocusProbe.Point q = scanEval.apply(v);
+                if (!q.valid()) {
+                    throw new IllegalStateException("reflection inside a bracket");
+                }
+                return q.miss();
+            }, lo, hi, AllowedSolution.ANY_SIDE);
+            FocusProbe.Point root = polish(fineEval, approx, lo, hi, 1e-12 * scale);
+            return root == null ? null : describe(stack, electrode, index, root, target);
+        } catch (IllegalStateException | MathIllegalStateException ex) {
+            return null; // a reflecting island inside the bracket: no clean root here
+        }
     }
 
     /** Evaluates new scan points in parallel (independent optics runs). */
