@@ -4,9 +4,10 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.CancellationException;
+import java.util.function.ToDoubleFunction;
 
+import org.axistack.ode.SwitchingFunction;
 import org.hipparchus.analysis.UnivariateFunction;
-import org.hipparchus.analysis.solvers.BracketedUnivariateSolver;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.ode.DenseOutputModel;
@@ -152,7 +153,7 @@ public final class EnvelopeSolver {
                 }
             });
             double check = maxStep / 4;
-            integ.addEventDetector(new Detector(check, s -> {
+            integ.addEventDetector(detector(check, s -> {
                 channel.coefficients(s.getTime(), c);
                 return c[EnvelopeChannel.BETA_GAMMA_SQUARED] - bg2Floor;
             }, (s, d, increasing) -> {
@@ -167,7 +168,7 @@ public final class EnvelopeSolver {
             }));
             // the tiny offsets keep the g functions away from exact zero when R' or R vanish identically
             // (a parallel ray in a drift), which would stall the root finder; they move a waist by ~1e-300 rad
-            integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[1] - TINY, (s, d, increasing) -> {
+            integ.addEventDetector(detector(check, s -> s.getPrimaryState()[1] - TINY, (s, d, increasing) -> {
                 double r = s.getPrimaryState()[0];
                 boolean minimum = linear ? (r > 0) == increasing : increasing;
                 boolean atCrossover = Math.abs(s.getTime() - lastCrossover_m) <= 1e-9 * length;
@@ -177,14 +178,14 @@ public final class EnvelopeSolver {
                 return Action.CONTINUE;
             }));
             if (linear) {
-                integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[0] - TINY, (s, d, increasing) -> {
+                integ.addEventDetector(detector(check, s -> s.getPrimaryState()[0] - TINY, (s, d, increasing) -> {
                     if (s.getTime() > p.zStart_m() + 1e-9 * length) {
                         waists.add(new Waist(s.getTime(), 0, Waist.Kind.AXIS_CROSSING));
                     }
                     return Action.CONTINUE;
                 }));
             } else {
-                integ.addEventDetector(new Detector(check, s -> s.getPrimaryState()[0] - floor, new ODEEventHandler() {
+                integ.addEventDetector(detector(check, s -> s.getPrimaryState()[0] - floor, new ODEEventHandler() {
                     @Override
                     public Action eventOccurred(ODEStateAndDerivative s, ODEEventDetector d, boolean increasing) {
                         return increasing ? Action.CONTINUE : Action.RESET_STATE;
@@ -267,49 +268,10 @@ public final class EnvelopeSolver {
         return rf * Math.exp(-x);
     }
 
-    /** g function of an event. */
-    @FunctionalInterface
-    private interface G {
-        double g(ODEStateAndDerivative s);
-    }
-
-    /** A plain event detector: fixed check interval, Brent-type root solver. */
-    private static final class Detector implements ODEEventDetector {
-        private final AdaptableInterval interval;
-        private final G g;
-        private final ODEEventHandler handler;
-        private final BracketedUnivariateSolver<UnivariateFunction> solver;
-
-        Detector(double maxCheck, G g, ODEEventHandler handler) {
-            this.interval = AdaptableInterval.of(maxCheck);
-            this.g = g;
-            this.handler = handler;
-            this.solver = new BracketingNthOrderBrentSolver(1e-14, Math.max(1e-18, maxCheck * 1e-12), 5);
-        }
-
-        @Override
-        public AdaptableInterval getMaxCheckInterval() {
-            return interval;
-        }
-
-        @Override
-        public int getMaxIterationCount() {
-            return 200;
-        }
-
-        @Override
-        public BracketedUnivariateSolver<UnivariateFunction> getSolver() {
-            return solver;
-        }
-
-        @Override
-        public ODEEventHandler getHandler() {
-            return handler;
-        }
-
-        @Override
-        public double g(ODEStateAndDerivative s) {
-            return g.g(s);
-        }
+    /** An event checked at most {@code maxCheck} apart, located by the n-th order Brent method. */
+    private static SwitchingFunction detector(double maxCheck, ToDoubleFunction<ODEStateAndDerivative> g,
+            ODEEventHandler handler) {
+        return new SwitchingFunction(g, handler, AdaptableInterval.of(maxCheck),
+                new BracketingNthOrderBrentSolver(1e-14, Math.max(1e-18, maxCheck * 1e-12), 5));
     }
 }

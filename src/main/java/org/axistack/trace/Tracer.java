@@ -4,14 +4,19 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.CancellationException;
+import java.util.function.ToDoubleFunction;
 
 import org.axistack.field.Field;
 import org.axistack.model.Codata2018;
 import org.axistack.model.Particle;
+import org.axistack.ode.SwitchingFunction;
+import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.events.Action;
+import org.hipparchus.ode.events.AdaptableInterval;
+import org.hipparchus.ode.events.ODEEventHandler;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
@@ -166,13 +171,13 @@ public final class Tracer {
         for (int i = 0; i < planes.size(); i++) {
             final int k = i;
             final double zp = planes.get(i);
-            integrator.addEventDetector(new EventDetector(s -> s.getPrimaryState()[2] - zp, (s, d, inc) -> {
+            integrator.addEventDetector(event(s -> s.getPrimaryState()[2] - zp, (s, d, inc) -> {
                 run.cross(k, s);
                 return Action.CONTINUE;
             }, check, acc));
         }
         double zs = targets.screenZ_m();
-        integrator.addEventDetector(new EventDetector(s -> s.getPrimaryState()[2] - zs, (s, d, inc) -> {
+        integrator.addEventDetector(event(s -> s.getPrimaryState()[2] - zs, (s, d, inc) -> {
             if (!inc) {
                 return Action.CONTINUE;
             }
@@ -184,7 +189,7 @@ public final class Tracer {
             }
             return Action.STOP;
         }, check, acc));
-        integrator.addEventDetector(new EventDetector(s -> s.getPrimaryState()[5], (s, d, inc) -> {
+        integrator.addEventDetector(event(s -> s.getPrimaryState()[5], (s, d, inc) -> {
             if (inc) {
                 return Action.CONTINUE;
             }
@@ -192,7 +197,7 @@ public final class Tracer {
             return Action.STOP;
         }, check, acc));
         double rMax = geometry.regionR_m(), zMin = geometry.regionZMin_m(), zMax = geometry.regionZMax_m();
-        integrator.addEventDetector(new EventDetector(s -> {
+        integrator.addEventDetector(event(s -> {
             double[] p = s.getPrimaryState();
             return Math.min(rMax - Math.hypot(p[0], p[1]), Math.min(p[2] - zMin, zMax - p[2]));
         }, (s, d, inc) -> {
@@ -367,5 +372,21 @@ public final class Tracer {
 
     private static double sq(double x) {
         return x * x;
+    }
+
+    /**
+     * An event whose check interval adapts to the particle's speed, so that the particle moves at most
+     * {@code checkDist_m} between checks; located to {@code accuracy_tau} (light path, m) by the n-th order
+     * Brent method.
+     */
+    private static SwitchingFunction event(ToDoubleFunction<ODEStateAndDerivative> g, ODEEventHandler handler,
+            double checkDist_m, double accuracy_tau) {
+        AdaptableInterval interval = (state, forward) -> {
+            double[] s = state.getPrimaryState();
+            double u2 = s[3] * s[3] + s[4] * s[4] + s[5] * s[5];
+            double beta = Math.sqrt(u2 / (1 + u2));
+            return checkDist_m / Math.max(beta, 1e-12);
+        };
+        return new SwitchingFunction(g, handler, interval, new BracketingNthOrderBrentSolver(1e-15, accuracy_tau, 0, 5));
     }
 }
