@@ -28,7 +28,7 @@ class PipelineRobustnessProperties {
         return RandomStacks.stacks(true, 1.5);
     }
 
-    @Property
+    @Property(seed = "20261201")
     void solveAndOpticsGiveNumbersOrAReportedMirror(@ForAll("anyStack") Stack s) {
         BiasedField f = Lens.solve(s).biased();
         double[] range = ParaxialOptics.searchRange_m(s);
