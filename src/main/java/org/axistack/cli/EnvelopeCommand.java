@@ -19,6 +19,7 @@ import org.axistack.field.BiasedField;
 import org.axistack.io.StackInputException;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
+import org.axistack.plan.PlanAnalysis;
 import org.axistack.report.ChartFiles;
 import org.axistack.report.EnvelopeChart;
 import picocli.CommandLine;
@@ -175,7 +176,7 @@ final class EnvelopeCommand implements Callable<Integer> {
                     throw new IllegalArgumentException("give --emittance MM_MRAD (0 for a laminar beam), "
                             + "or start from a source with --source-radius-mm and --divergence-mrad");
                 }
-                double r = radius_mm != null ? Units.mmToM(radius_mm) : defaultRadius_m(stack);
+                double r = radius_mm != null ? Units.mmToM(radius_mm) : PlanAnalysis.defaultEnvelopeRadius_m(stack);
                 Emittance e = new Emittance(emittance_mm_mrad * 1e-6, rms ? Emittance.Measure.RMS : Emittance.Measure.EDGE,
                         normalised ? Emittance.Frame.NORMALISED : Emittance.Frame.GEOMETRIC_AT_START);
                 start = new EnvelopeStart.RadiusSlope(r, Units.mradToRad(slope_mrad), e);
@@ -184,13 +185,6 @@ final class EnvelopeCommand implements Callable<Integer> {
                     from_mm == null ? OptionalDouble.empty() : OptionalDouble.of(Units.mmToM(from_mm)),
                     to_mm == null ? OptionalDouble.empty() : OptionalDouble.of(Units.mmToM(to_mm)));
         });
-    }
-
-    /** A quarter of the narrowest open bore. */
-    static double defaultRadius_m(Stack stack) {
-        double b = stack.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(x -> x > 0).min()
-                .orElse(1e-3);
-        return 0.25 * b;
     }
 
     private void writeFiles(CommandLine cl, Stack stack, EnvelopeStudyResult res, ScanResult scan) {

@@ -12,7 +12,9 @@ import org.axistack.model.Beam;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
 import org.axistack.model.Stack;
-import org.axistack.report.HtmlReport;
+import org.axistack.plan.PlanAnalysis;
+import org.axistack.plan.PlanFolder;
+import org.axistack.plan.PlanFormat;
 import org.axistack.report.LensPlan;
 import org.axistack.report.SafetyNotice;
 import picocli.CommandLine;
@@ -64,6 +66,11 @@ final class PlanCommand implements Callable<Integer> {
             description = "Electrode whose bias is tuned to focus on the screen (default: the one with the largest |bias|).")
     String tune;
 
+    @Option(names = "--depth-mm", paramLabel = "D", defaultValue = "0.1",
+            description = "Depth of focus for the supply-stability budget: the focus is held on the screen within"
+                    + " +/- D mm (default ${DEFAULT-VALUE}).")
+    double depth_mm;
+
     @Option(names = "--no-check", description = "Skip the built-in verification cases (faster; the report says so).")
     boolean noCheck;
 
@@ -79,6 +86,9 @@ final class PlanCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--energy-spread, --current and --emittance must be finite "
                     + "and >= 0");
         }
+        if (!(depth_mm > 0) || !Double.isFinite(depth_mm)) {
+            throw new CommandLine.ParameterException(cl, "--depth-mm must be a positive number of mm");
+        }
         if (tune != null && stack.indexOf(tune) < 0) {
             throw new CommandLine.ParameterException(cl, "--tune " + tune + ": no electrode of that name; the stack has "
                     + String.join(", ", stack.names()));
@@ -87,14 +97,21 @@ final class PlanCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--out " + out + " exists and is not a folder; choose a folder");
         }
         PrintWriter w = cl.getOut();
-        LensPlan plan = PlanAnalysis.run(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV, current_A,
-                emittance_mm_mrad * 1e-6, tune, !noCheck), cl.getErr(), quiet);
+        PrintWriter err = cl.getErr();
+        LensPlan plan = PlanAnalysis.solveAndRun(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV,
+                current_A, emittance_mm_mrad * 1e-6, tune, !noCheck, Units.mmToM(depth_mm)),
+                SolveReporter.to(err, quiet), (what, fraction) -> {
+                    if (!quiet) {
+                        err.println("plan: " + what + " ...");
+                        err.flush();
+                    }
+                    return true;
+                });
         summary(w, stack, input.shownAs());
         PlanSummary.print(w, plan);
         Path html;
         try {
-            html = HtmlReport.write(plan, out, plan.sweep().isEmpty() ? java.util.Map.of()
-                    : java.util.Map.of("sweep.csv", SweepCommand.csv(plan.sweep())));
+            html = PlanFolder.write(plan, out);
         } catch (IOException | java.io.UncheckedIOException e) {
             throw new CommandLine.ParameterException(cl,
                     "--out " + out + ": cannot write there (" + e.getMessage() + "); choose a folder you can write to");
@@ -167,9 +184,6 @@ final class PlanCommand implements Callable<Integer> {
     }
 
     static String num(double x) {
-        if (x == Math.rint(x) && Math.abs(x) < 1e12) {
-            return String.valueOf((long) x);
-        }
-        return String.format(Locale.ROOT, "%.5g", x).replaceAll("(\\.\\d*?)0+$", "$1").replaceAll("\\.$", "");
+        return PlanFormat.num(x);
     }
 }

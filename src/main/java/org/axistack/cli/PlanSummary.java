@@ -104,6 +104,12 @@ final class PlanSummary {
                     f.worstElectrode(), f.surfaceFieldCheck().warning() ? " (above the " + (f.surfaceFieldCheck()
                             == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort") + " limit)" : ""));
         }
+        if (!p.budgets().isEmpty()) {
+            TuneReport.budget(w, t.solutions().stream().map(FocusSolution::bias_V).toList(), p.budgets(),
+                    p.budgets().get(0).depth_m());
+        } else if (t.found()) {
+            w.println("  Supply-stability budget: " + p.budgetNote());
+        }
         if (!t.found()) {
             w.println("  none in range" + t.nearest().map(n -> String.format(Locale.ROOT,
                     "; closest: %s V puts the image at %s mm", g(n.bias_V()), g(Units.mToMm(n.imageZ_m())))).orElse(""));

@@ -2,7 +2,6 @@ package org.axistack.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -12,12 +11,11 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.field.BemSolver;
 import org.axistack.field.FieldSolution;
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackInputException;
+import org.axistack.io.SweepTableCsv;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.report.ChartFiles;
@@ -47,10 +45,6 @@ import picocli.CommandLine.Spec;
             "against the bias of electrode NAME (N steps from V1 to V2), as a table, a CSV file and a PNG chart.",
             "The field is solved once; every point re-biases the stored unit solutions."})
 final class SweepCommand implements Callable<Integer> {
-
-    static final String[] HEADER = {"bias_V", "status", "focal_length_object_mm", "focal_length_image_mm",
-        "focal_point_object_z_mm", "focal_point_image_z_mm", "principal_plane_object_z_mm",
-        "principal_plane_image_z_mm", "image_z_mm", "magnification", "spherical_aberration_mm", "chromatic_aberration_mm"};
 
     @Spec
     CommandSpec spec;
@@ -110,7 +104,7 @@ final class SweepCommand implements Callable<Integer> {
         bar.finish();
         double seconds = (System.nanoTime() - t0) * 1e-9;
         if (csv != null) {
-            AtomicFiles.writeString(csv, csv(points));
+            AtomicFiles.writeString(csv, SweepTableCsv.text(points));
         }
         if (png != null) {
             ChartFiles.writePng(SweepChart.of(stack, vary, points, "Sweep of " + vary + ": " + stack.title()), 1000, 720, png);
@@ -124,10 +118,10 @@ final class SweepCommand implements Callable<Integer> {
             m.put("sweep_seconds", seconds);
             List<Map<String, Object>> rows = new ArrayList<>();
             for (SweepPoint p : points) {
-                Object[] r = row(p);
+                Object[] r = SweepTableCsv.row(p);
                 Map<String, Object> row = new LinkedHashMap<>();
-                for (int i = 0; i < HEADER.length; i++) {
-                    row.put(HEADER[i], r[i]);
+                for (int i = 0; i < SweepTableCsv.HEADER.size(); i++) {
+                    row.put(SweepTableCsv.HEADER.get(i), r[i]);
                 }
                 rows.add(row);
             }
@@ -185,34 +179,6 @@ final class SweepCommand implements Callable<Integer> {
 
     private static String f(double x) {
         return Double.isFinite(x) ? String.format(Locale.ROOT, "%.5g", x) : "-";
-    }
-
-    static Object[] row(SweepPoint p) {
-        return new Object[] {p.bias_V(), p.status(), mm(p.focalLengthObject_m()), mm(p.focalLengthImage_m()),
-            mm(p.focalPointObjectZ_m()), mm(p.focalPointImageZ_m()), mm(p.principalPlaneObjectZ_m()),
-            mm(p.principalPlaneImageZ_m()), mm(p.imageZ_m()), Double.isFinite(p.magnification()) ? p.magnification() : null,
-            mm(p.sphericalAberration_m()), mm(p.chromaticAberration_m())};
-    }
-
-    private static Double mm(double m) {
-        double v = Units.mToMm(m);
-        return Double.isFinite(v) ? v : null;
-    }
-
-    static String csv(List<SweepPoint> points) throws IOException {
-        StringWriter sw = new StringWriter();
-        try (CSVPrinter p = new CSVPrinter(sw, CSVFormat.RFC4180.builder().setHeader(HEADER).build())) {
-            for (SweepPoint pt : points) {
-                Object[] r = row(pt);
-                for (int i = 0; i < r.length; i++) {
-                    if (r[i] == null) {
-                        r[i] = "";
-                    }
-                }
-                p.printRecord(r);
-            }
-        }
-        return sw.toString();
     }
 
     /** A one-line progress bar on standard error, redrawn in place at each whole percent. */

@@ -236,9 +236,18 @@ final class TuneReport {
                     Units.vPerMToVPerMm(s.maxSurfaceField_V_per_m()), s.worstElectrode(),
                     s.surfaceFieldCheck().name().toLowerCase(Locale.ROOT).replace('_', ' '));
         }
-        w.printf(Locale.ROOT, "%n  Supply-stability budget (focus held within +/- %s mm; linearised, first-variation equations):%n",
+        w.println();
+        budget(w, sols.stream().map(FocusSolution::bias_V).toList(), budgets, depth_m);
+    }
+
+    /**
+     * The supply-stability budget lines: for each solution (bias of the tuned electrode), the image shift per volt
+     * and the ppm stability of every biased supply alone, of all together, and of the beam energy.
+     */
+    static void budget(PrintWriter w, List<Double> tunedBias_V, List<FocusSensitivity> budgets, double depth_m) {
+        w.printf(Locale.ROOT, "  Supply-stability budget (focus held within +/- %s mm; linearised, first-variation equations):%n",
                 PlanCommand.num(Units.mToMm(depth_m)));
-        for (int i = 0; i < sols.size(); i++) {
+        for (int i = 0; i < tunedBias_V.size(); i++) {
             FocusSensitivity b = budgets.get(i);
             StringBuilder sb = new StringBuilder();
             for (int e = 0; e < b.electrodes().size(); e++) {
@@ -248,7 +257,7 @@ final class TuneReport {
                 }
             }
             w.printf(Locale.ROOT, "  %12.4f V: %sall supplies together %s ppm; beam energy: %.4g mm per unit dT/T (%s ppm)%n",
-                    sols.get(i).bias_V(), sb, ppm(b.stabilityAllSupplies()), Units.mToMm(b.imageShiftPerRelativeEnergy_m()),
+                    tunedBias_V.get(i), sb, ppm(b.stabilityAllSupplies()), Units.mToMm(b.imageShiftPerRelativeEnergy_m()),
                     ppm(b.stabilityEnergy()));
         }
         w.println("  (ppm: the relative supply stability that keeps the focus within the depth; each supply alone,"

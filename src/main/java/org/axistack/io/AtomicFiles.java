@@ -21,7 +21,73 @@ public final class AtomicFiles {
         void writeTo(OutputStream out) throws IOException;
     }
 
+    /** Writes the files of a folder into the folder it is given. */
+    @FunctionalInterface
+    public interface FolderContent {
+        void writeInto(Path folder) throws IOException;
+    }
+
     private AtomicFiles() {
+    }
+
+    /**
+     * Writes a folder of files so that a failure or a cancellation (any exception from content) leaves the folder as
+     * it was: content writes into a new temporary folder beside it, and only when it has finished are its files moved
+     * in. A folder that did not exist is made by renaming the whole temporary folder (atomic where the file system
+     * allows); into an existing folder each file is moved over its old version (atomically per file), and files that
+     * content did not write stay. The temporary folder is always removed.
+     *
+     * @throws IOException when target exists and is not a folder, or a file cannot be written or moved
+     */
+    public static void writeFolder(Path target, FolderContent content) throws IOException {
+        Path abs = target.toAbsolutePath().normalize();
+        if (Files.exists(abs) && !Files.isDirectory(abs)) {
+            throw new IOException(abs + " exists and is not a folder");
+        }
+        Path parent = abs.getParent();
+        Files.createDirectories(parent);
+        Path tmp = Files.createTempDirectory(parent, "." + abs.getFileName() + "-");
+        try {
+            content.writeInto(tmp);
+            boolean renamed = false;
+            if (!Files.exists(abs)) {
+                try {
+                    Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE);
+                    renamed = true;
+                } catch (IOException e) {
+                    Files.createDirectories(abs); // made meanwhile, or no atomic rename here: move file by file
+                }
+            }
+            if (!renamed) {
+                try (var files = Files.list(tmp)) {
+                    for (Path f : (Iterable<Path>) files::iterator) {
+                        Path to = abs.resolve(f.getFileName().toString());
+                        try {
+                            Files.move(f, to, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+                        } catch (AtomicMoveNotSupportedException e) {
+                            Files.move(f, to, StandardCopyOption.REPLACE_EXISTING);
+                        }
+                    }
+                }
+            }
+        } finally {
+            deleteTree(tmp);
+        }
+    }
+
+    /** Deletes a folder and what is in it, without following links; nothing if it is gone. */
+    private static void deleteTree(Path dir) throws IOException {
+        if (!Files.exists(dir, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+            return;
+        }
+        if (Files.isDirectory(dir, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+            try (var files = Files.list(dir)) {
+                for (Path f : (Iterable<Path>) files::iterator) {
+                    deleteTree(f);
+                }
+            }
+        }
+        Files.deleteIfExists(dir);
     }
 
     /** Writes target through a temporary sibling file and a move; on failure the target is untouched. */

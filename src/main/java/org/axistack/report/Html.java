@@ -52,6 +52,17 @@ final class Html {
         return String.format(Locale.ROOT, "%.6g", x);
     }
 
+    /** Six significant digits without trailing zeros ("0.1", "2500"), "-" for NaN or infinite. */
+    static String trim(double x) {
+        if (!Double.isFinite(x)) {
+            return "-";
+        }
+        if (x == 0) {
+            return "0";
+        }
+        return String.format(Locale.ROOT, "%.6g", x).replaceAll("(\\.\\d*?)0+(e|$)", "$1$2").replaceAll("\\.(e|$)", "$1");
+    }
+
     static String sci(double x) {
         if (!Double.isFinite(x)) {
             return "-";

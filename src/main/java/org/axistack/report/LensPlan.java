@@ -12,6 +12,7 @@ import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.SpotSizeBudget;
 import org.axistack.trace.Trajectory;
+import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.SweepPoint;
 import org.axistack.tune.TuneResult;
 import org.axistack.verify.CheckResult;
@@ -37,6 +38,9 @@ import org.axistack.verify.CheckResult;
  * @param envelopeNote what beam the envelope assumes
  * @param tune         the biases of one electrode that focus on the screen, if asked for and possible
  * @param tuneNote     what was tuned, or why not
+ * @param budgets      the supply-stability budget at each focusing bias, in the order of the tune's solutions
+ *                     (empty when there is none)
+ * @param budgetNote   what the budgets assume (depth of focus, method), or why they are missing
  * @param sweepElectrode the electrode whose bias was swept (empty: no sweep)
  * @param sweep        optical properties against that bias
  * @param checks       the built-in verification cases
@@ -47,11 +51,13 @@ public record LensPlan(Stack stack, String source, FieldSolution solution, Biase
         Optional<String> reflection, Optional<CardinalElements> cardinal, String optics, Optional<Imaging> imaging,
         Optional<Aberrations> aberrations, Optional<SpotSizeBudget.Inputs> spotInputs, List<SpotSizeBudget.Row> spotRows,
         List<Trajectory> rays, String rayNote, Optional<EnvelopeStudyResult> envelope, String envelopeNote,
-        Optional<TuneResult> tune, String tuneNote, Optional<String> sweepElectrode, List<SweepPoint> sweep,
+        Optional<TuneResult> tune, String tuneNote, List<FocusSensitivity> budgets, String budgetNote,
+        Optional<String> sweepElectrode, List<SweepPoint> sweep,
         List<CheckResult> checks, List<String> warnings, double seconds) {
 
     public LensPlan {
         spotRows = List.copyOf(spotRows);
+        budgets = List.copyOf(budgets);
         rays = List.copyOf(rays);
         sweep = List.copyOf(sweep);
         checks = List.copyOf(checks);

@@ -107,6 +107,9 @@ final class PlanTables {
             t.put("focus_biases.csv", csv(List.of("electrode", "bias_V", "image_z_mm", "magnification",
                     "max_surface_field_V_per_mm", "worst_electrode"), tu));
         });
+        if (!plan.budgets().isEmpty()) {
+            t.put("supply_budget.csv", csv(BudgetSection.CSV_HEADER, BudgetSection.csvRows(plan)));
+        }
         if (!plan.checks().isEmpty()) {
             List<List<Object>> ch = new ArrayList<>();
             for (CheckResult r : plan.checks()) {

@@ -26,6 +26,14 @@ class LayeringTest {
     }
 
     @Test
+    void thePlanUseCaseKnowsNothingOfTheCommandLineOrWindow() {
+        noClasses().that().resideInAPackage("org.axistack.plan..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.axistack.cli..", "org.axistack.ui..",
+                        "javax.swing..", "picocli..")
+                .check(CLASSES);
+    }
+
+    @Test
     void inputOutputDoesNotDependOnTheCommandLineOrWindow() {
         noClasses().that().resideInAPackage("org.axistack.io..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.axistack.cli..", "org.axistack.ui..",

@@ -23,11 +23,12 @@ class PlanCommandTest {
         MainTest.Run r = MainTest.run("plan", "--no-check", "--out", out.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("Flood-gun einzel lens", "built-in demo", "IEC 61010-1", "Cardinal elements (lens converging", "Aberrations: Cs =", "Spot-size budget",
-                "Focusing bias", "focus = ", "Surface fields", "Report: ", SafetyNotice.TITLE);
+                "Focusing bias", "focus = ", "Supply-stability budget (focus held within +/- 0.1 mm", "mm/V (",
+                "Surface fields", "Report: ", SafetyNotice.TITLE);
         assertThat(r.err()).contains("field solve: done, 100%", "plan: beam envelope");
         for (String f : new String[] {"report.html", "geometry.png", "geometry.svg", "axial.png", "axial.svg",
             "envelope.png", "axial.csv", "cardinal.csv", "surface_fields.csv", "capacitance.csv", "spot_budget.csv",
-            "focus_biases.csv", "sweep.csv", "sweep.png", "stack.toml"}) {
+            "focus_biases.csv", "supply_budget.csv", "sweep.csv", "sweep.png", "stack.toml"}) {
             assertThat(out.resolve(f)).as(f).isNotEmptyFile();
         }
         var png = javax.imageio.ImageIO.read(out.resolve("geometry.png").toFile());
@@ -37,7 +38,8 @@ class PlanCommandTest {
         String html = Files.readString(out.resolve("report.html"));
         assertThat(html).contains("<h2>Cardinal elements</h2>", "<h2>Electrode surface fields</h2>",
                 "<h2>Capacitance matrix (pF)</h2>", "<h2>Method and stated accuracy</h2>", "<h2>Inputs</h2>",
-                "[[electrode]]", SafetyNotice.TITLE, "<h2>Focus-bias sweep</h2>", "Not run (plan --no-check)");
+                "[[electrode]]", SafetyNotice.TITLE, "<h2>Focus-bias sweep</h2>", "Not run (plan --no-check)",
+                "<h2>Supply-stability budget</h2>");
         assertThat(html).doesNotContain("http://", "https://", "<script");
         assertThat(Files.readAllLines(out.resolve("axial.csv")).get(0))
                 .isEqualTo("z_mm,potential_V,dV_dz_V_per_mm,d2V_dz2_V_per_mm2");

@@ -1,4 +1,4 @@
-package org.axistack.cli;
+package org.axistack.plan;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -55,7 +55,7 @@ final class PlanRays {
                 starts.add(RayStart.withSlopes(id++, 0, 0, startZ, maxSlope * i / 4, 0, beam.energy_eV()));
             }
             what = String.format(Locale.ROOT, "9 rays from the object point at z = %s mm, slopes up to +-%s mrad",
-                    PlanCommand.num(Units.mToMm(startZ)), PlanCommand.num(Units.radToMrad(maxSlope)));
+                    PlanFormat.num(Units.mToMm(startZ)), PlanFormat.num(Units.radToMrad(maxSlope)));
         } else {
             for (int i = -5; i <= 5; i++) {
                 if (i != 0) {
@@ -63,7 +63,7 @@ final class PlanRays {
                 }
             }
             what = String.format(Locale.ROOT, "10 rays parallel to the axis at +-10..50%% of the smallest bore (%s mm), "
-                    + "from z = %s mm", PlanCommand.num(Units.mToMm(bore)), PlanCommand.num(Units.mToMm(startZ)));
+                    + "from z = %s mm", PlanFormat.num(Units.mToMm(bore)), PlanFormat.num(Units.mToMm(startZ)));
         }
         TraceTargets targets = new TraceTargets(List.of(endZ), endZ);
         Tracer.checkTargets(geometry, targets);

@@ -1,0 +1,60 @@
+package org.axistack.io;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.util.List;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.axistack.tune.SweepPoint;
+
+/**
+ * The table of a bias sweep (optics against one bias): RFC 4180 CSV (Commons CSV) with unit-named columns, one row
+ * per point, empty cells where a point has no value. Shared by the sweep command (its --csv file and JSON rows), the
+ * plan report's sweep.csv and the desktop window's report export.
+ */
+public final class SweepTableCsv {
+
+    /** Column names, with their units. */
+    public static final List<String> HEADER = List.of("bias_V", "status", "focal_length_object_mm",
+            "focal_length_image_mm", "focal_point_object_z_mm", "focal_point_image_z_mm", "principal_plane_object_z_mm",
+            "principal_plane_image_z_mm", "image_z_mm", "magnification", "spherical_aberration_mm",
+            "chromatic_aberration_mm");
+
+    private SweepTableCsv() {
+    }
+
+    /** One point's cells in {@link #HEADER} order (lengths in mm); null where the point has no value. */
+    public static Object[] row(SweepPoint p) {
+        return new Object[] {p.bias_V(), p.status(), mm(p.focalLengthObject_m()), mm(p.focalLengthImage_m()),
+            mm(p.focalPointObjectZ_m()), mm(p.focalPointImageZ_m()), mm(p.principalPlaneObjectZ_m()),
+            mm(p.principalPlaneImageZ_m()), mm(p.imageZ_m()), Double.isFinite(p.magnification()) ? p.magnification() : null,
+            mm(p.sphericalAberration_m()), mm(p.chromaticAberration_m())};
+    }
+
+    /** The whole table as CSV text. */
+    public static String text(List<SweepPoint> points) {
+        StringWriter sw = new StringWriter();
+        try (CSVPrinter p = new CSVPrinter(sw, CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new))
+                .get())) {
+            for (SweepPoint pt : points) {
+                Object[] r = row(pt);
+                for (int i = 0; i < r.length; i++) {
+                    if (r[i] == null) {
+                        r[i] = "";
+                    }
+                }
+                p.printRecord(r);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return sw.toString();
+    }
+
+    private static Double mm(double m) {
+        double v = Units.mToMm(m);
+        return Double.isFinite(v) ? v : null;
+    }
+}

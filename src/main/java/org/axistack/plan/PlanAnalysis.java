@@ -1,0 +1,349 @@
+package org.axistack.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.concurrent.CancellationException;
+
+import org.axistack.beam.Emittance;
+import org.axistack.beam.EnvelopeRequest;
+import org.axistack.beam.EnvelopeStart;
+import org.axistack.beam.EnvelopeStudy;
+import org.axistack.beam.EnvelopeStudyResult;
+import org.axistack.beam.EnvelopeWarning;
+import org.axistack.field.BemSolver;
+import org.axistack.field.BiasedField;
+import org.axistack.field.FieldSolution;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.Units;
+import org.axistack.model.Electrode;
+import org.axistack.model.Stack;
+import org.axistack.optics.Aberrations;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.Imaging;
+import org.axistack.optics.ParaxialOptics;
+import org.axistack.optics.ReflectionException;
+import org.axistack.optics.SpotSizeBudget;
+import org.axistack.optics.StartPlaneException;
+import org.axistack.report.LensPlan;
+import org.axistack.trace.Trajectory;
+import org.axistack.tune.BiasRange;
+import org.axistack.tune.BiasSweep;
+import org.axistack.tune.BiasTuner;
+import org.axistack.tune.FocusSensitivity;
+import org.axistack.tune.SurfaceFieldCheck;
+import org.axistack.tune.SweepPoint;
+import org.axistack.tune.TuneResult;
+import org.axistack.verify.CheckResult;
+import org.axistack.verify.VerificationSuite;
+
+/**
+ * Runs every step of a lens plan on one field solution: paraxial optics and aberrations, the spot-size budget, a
+ * ray fan, the envelope, the biases that focus on the screen with their supply-stability budget, a focus-bias
+ * sweep and the verification cases. The {@code plan} command solves the field first ({@link #solveAndRun}); the
+ * desktop window hands over the solution it already has ({@link #run}), so its report costs no second solve. Each
+ * stage is announced to a {@link Progress}, which may cancel.
+ */
+public final class PlanAnalysis {
+
+    /** Intervals of the focus-bias sweep in the report. */
+    public static final int SWEEP_STEPS = 80;
+
+    /** Aperture half-angles of the spot-size budget table, rad. */
+    private static final double[] SPOT_ANGLES_RAD = {0.5e-3, 1e-3, 2e-3, 5e-3, 10e-3, 20e-3};
+
+    /**
+     * @param energySpread_eV  full energy spread for the chromatic disc, eV
+     * @param current_A        envelope beam current, A
+     * @param emittance_m_rad  envelope edge emittance (geometric, at the start), m rad
+     * @param tuneElectrode    electrode to tune for focus on the screen (null: the one with the largest |bias|)
+     * @param runChecks        whether to run the verification cases
+     * @param depth_m          the supply-stability budget keeps the focus within +/- this, m
+     */
+    public record Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
+            boolean runChecks, double depth_m) {
+        public Settings {
+            if (!(energySpread_eV >= 0) || !(current_A >= 0) || !(emittance_m_rad >= 0)
+                    || !Double.isFinite(energySpread_eV + current_A + emittance_m_rad)) {
+                throw new IllegalArgumentException("the energy spread, current and emittance must be finite and >= 0");
+            }
+            if (!(depth_m > 0) || !Double.isFinite(depth_m)) {
+                throw new IllegalArgumentException("the depth of focus must be a positive length");
+            }
+        }
+
+        /**
+         * The plan command's defaults: 1 eV energy spread, 10 uA, 1 mm mrad, the strongest electrode tuned,
+         * verification run, focus held within +/- {@link FocusSensitivity#DEFAULT_DEPTH_M}.
+         */
+        public static Settings defaults() {
+            return new Settings(1, 1e-5, 1e-6, null, true, FocusSensitivity.DEFAULT_DEPTH_M);
+        }
+
+        /** The same settings with another envelope beam. */
+        public Settings withEnvelope(double newCurrent_A, double newEmittance_m_rad) {
+            return new Settings(energySpread_eV, newCurrent_A, newEmittance_m_rad, tuneElectrode, runChecks, depth_m);
+        }
+
+        /** The same settings with or without the verification cases. */
+        public Settings withChecks(boolean run) {
+            return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, run, depth_m);
+        }
+    }
+
+    /** Where the plan is. Return false from either method to cancel (the plan then throws {@link CancellationException}). */
+    public interface Progress {
+        /**
+         * A stage begins.
+         *
+         * @param what     the stage in words ("beam envelope")
+         * @param fraction the share of the plan done before it, 0..1
+         */
+        boolean stage(String what, double fraction);
+
+        /** Progress inside a long stage: the share of the whole plan done, 0..1. */
+        default boolean within(double fraction) {
+            return true;
+        }
+
+        Progress NONE = (what, fraction) -> true;
+    }
+
+    private PlanAnalysis() {
+    }
+
+    /** Solves the stack's field (progress to solveProgress), then runs the plan on it. */
+    public static LensPlan solveAndRun(Stack stack, String source, Settings s, SolveProgress solveProgress,
+            Progress progress) {
+        long t0 = System.nanoTime();
+        announce(progress, "solving the field (" + stack.mesh().targetElements() + " boundary elements)", 0);
+        FieldSolution solution = BemSolver.solve(stack.electrodes(), stack.mesh(), solveProgress);
+        return analyse(stack, source, s, solution, progress, t0);
+    }
+
+    /**
+     * Runs the plan at the stack's biases on a solution of the stack's geometry (re-biased, never solved again).
+     *
+     * @throws IllegalArgumentException when the solution belongs to other electrodes
+     * @throws CancellationException    when progress cancels
+     */
+    public static LensPlan run(Stack stack, String source, Settings s, FieldSolution solution, Progress progress) {
+        requireSameGeometry(stack, solution);
+        return analyse(stack, source, s, solution, progress, System.nanoTime());
+    }
+
+    private static void requireSameGeometry(Stack stack, FieldSolution solution) {
+        List<Electrode> a = stack.electrodes();
+        List<Electrode> b = solution.electrodes();
+        boolean same = a.size() == b.size();
+        for (int i = 0; same && i < a.size(); i++) {
+            same = a.get(i).withBias_V(0).equals(b.get(i).withBias_V(0));
+        }
+        if (!same) {
+            throw new IllegalArgumentException("the field solution was made for other electrodes than the stack's;"
+                    + " solve the stack's own geometry first");
+        }
+    }
+
+    private static LensPlan analyse(Stack stack, String source, Settings s, FieldSolution solution, Progress progress,
+            long t0) {
+        Shares share = new Shares(s.runChecks());
+        List<String> warnings = new ArrayList<>();
+        BiasedField field = solution.withBiases(stack.biases_V());
+        surfaceFieldWarnings(stack, field, warnings);
+
+        announce(progress, "paraxial optics and aberrations", share.optics);
+        Optics o = Optics.of(stack, field, warnings);
+
+        Optional<SpotSizeBudget.Inputs> spotInputs = Optional.empty();
+        List<SpotSizeBudget.Row> spotRows = new ArrayList<>();
+        if (o.aberrations.isPresent() && o.cardinal.isPresent()) {
+            double tImage = o.cardinal.get().uImage_V() * Math.abs(stack.beam().particle().chargeNumber());
+            SpotSizeBudget.Inputs in = new SpotSizeBudget.Inputs(o.aberrations.get().sphericalImage_m(),
+                    o.aberrations.get().chromaticImage_m(), s.energySpread_eV() / tImage, 0, 0);
+            spotInputs = Optional.of(in);
+            for (double a : SPOT_ANGLES_RAD) {
+                spotRows.add(SpotSizeBudget.at(in, a));
+            }
+        }
+
+        announce(progress, "tracing a meridional fan of rays for the picture", share.rays);
+        List<Trajectory> rays = List.of();
+        String rayNote;
+        try {
+            PlanRays.Fan fan = PlanRays.trace(stack, field);
+            rays = fan.rays();
+            rayNote = fan.note();
+        } catch (IllegalArgumentException e) {
+            rayNote = "no rays drawn: " + e.getMessage();
+            warnings.add(rayNote);
+        }
+
+        announce(progress, "beam envelope", share.envelope);
+        Optional<EnvelopeStudyResult> envelope = Optional.empty();
+        double r0 = defaultEnvelopeRadius_m(stack);
+        String envNote = String.format(Locale.ROOT, "round beam of %s uA, edge radius %s mm (a quarter of the smallest "
+                + "bore), parallel, edge emittance %s mm mrad (geometric, at the start); set with --current and "
+                + "--emittance", PlanFormat.num(s.current_A() * 1e6), PlanFormat.num(Units.mToMm(r0)),
+                PlanFormat.num(s.emittance_m_rad() * 1e6));
+        if (o.reflection.isEmpty()) {
+            try {
+                EnvelopeStudyResult env = new EnvelopeStudy().run(stack, field, new EnvelopeRequest(s.current_A(),
+                        new EnvelopeStart.RadiusSlope(r0, 0, Emittance.edge(s.emittance_m_rad()))));
+                envelope = Optional.of(env);
+                for (EnvelopeWarning w : env.warnings()) {
+                    warnings.add("envelope: " + w.message());
+                }
+            } catch (IllegalArgumentException | IllegalStateException e) {
+                envNote += "; not computed: " + e.getMessage();
+            }
+        }
+
+        String name = s.tuneElectrode() != null ? s.tuneElectrode() : strongest(stack);
+        PlanTuning tuning = PlanTuning.run(stack, solution, name, s.depth_m(), progress, share.tune, warnings);
+
+        List<SweepPoint> sweep = List.of();
+        if (name != null) {
+            BiasRange range = tuning.tune().map(TuneResult::range).orElse(BiasRange.supplyDefault(stack.beam()));
+            announce(progress, "sweeping the bias of " + name + " over " + PlanFormat.num(range.from_V()) + " .. "
+                    + PlanFormat.num(range.to_V()) + " V", share.sweep);
+            sweep = BiasSweep.run(solution, stack, name, range.from_V(), range.to_V(), SWEEP_STEPS,
+                    stack.beam().objectZ_m(), (done, total) -> progress.within(share.sweep
+                            + (share.checks - share.sweep) * done / total));
+        }
+
+        List<CheckResult> checks = List.of();
+        if (s.runChecks()) {
+            boolean[] stopped = {false};
+            checks = VerificationSuite.run((i, n, caseName) -> {
+                boolean go = progress.stage(String.format(Locale.ROOT, "verification %d/%d: %s", i + 1, n, caseName),
+                        share.checks + (1 - share.checks) * i / n);
+                stopped[0] = !go;
+                return go;
+            });
+            if (stopped[0]) {
+                throw new CancellationException("plan cancelled");
+            }
+            if (!VerificationSuite.allPassed(checks)) {
+                warnings.add("a built-in verification case is outside its tolerance: do not trust these numbers");
+            }
+        }
+        return new LensPlan(stack, source, solution, field, o.reflection, o.cardinal, o.note, o.imaging,
+                o.aberrations, spotInputs, spotRows, rays, rayNote, envelope, envNote, tuning.tune(), tuning.note(),
+                tuning.budgets(), tuning.budgetNote(), Optional.ofNullable(name), sweep, checks, warnings,
+                (System.nanoTime() - t0) * 1e-9);
+    }
+
+    /** The default envelope beam's edge radius: a quarter of the narrowest open bore, m (plan and envelope commands). */
+    public static double defaultEnvelopeRadius_m(Stack stack) {
+        double b = stack.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(x -> x > 0).min()
+                .orElse(1e-3);
+        return 0.25 * b;
+    }
+
+    /** The electrode with the largest |bias| (null if all are 0 V). */
+    public static String strongest(Stack stack) {
+        String best = null;
+        double max = 0;
+        for (Electrode e : stack.electrodes()) {
+            if (Math.abs(e.bias_V()) > max) {
+                max = Math.abs(e.bias_V());
+                best = e.name();
+            }
+        }
+        return best;
+    }
+
+    private static void surfaceFieldWarnings(Stack stack, BiasedField field, List<String> warnings) {
+        double[] max = field.maxSurfaceFieldPerElectrode_V_per_m();
+        for (int i = 0; i < max.length; i++) {
+            SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], stack.limits());
+            if (c.warning()) {
+                warnings.add(String.format(Locale.ROOT, "electrode %s: surface field %s V/mm is above the %s limit "
+                        + "(%s V/mm): round its edges, widen the gap or lower the bias", stack.electrodes().get(i).name(),
+                        PlanFormat.num(Units.vPerMToVPerMm(max[i])),
+                        c == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort",
+                        PlanFormat.num(Units.vPerMToVPerMm(c == SurfaceFieldCheck.ABOVE_AGGRESSIVE
+                                ? stack.limits().aggressive_V_per_m() : stack.limits().comfort_V_per_m()))));
+            }
+        }
+    }
+
+    static void announce(Progress progress, String what, double fraction) {
+        if (!progress.stage(what, fraction)) {
+            throw new CancellationException("plan cancelled");
+        }
+    }
+
+    /** Where each stage starts, as a share of the whole plan (rough shares of the time on the demo lens). */
+    private static final class Shares {
+        final double optics;
+        final double rays;
+        final double envelope;
+        final double tune;
+        final double sweep;
+        final double checks;
+
+        Shares(boolean withChecks) {
+            double k = withChecks ? 0.55 : 1;
+            optics = 0;
+            rays = 0.05 * k;
+            envelope = 0.15 * k;
+            tune = 0.25 * k;
+            sweep = 0.45 * k;
+            checks = k;
+        }
+    }
+
+    /** The paraxial part of the plan, or why it is missing. */
+    private record Optics(Optional<String> reflection, Optional<CardinalElements> cardinal, String note,
+            Optional<Imaging> imaging, Optional<Aberrations> aberrations) {
+
+        static Optics of(Stack stack, BiasedField field, List<String> warnings) {
+            Optional<String> reflection = Optional.empty();
+            Optional<CardinalElements> cardinal = Optional.empty();
+            Optional<Imaging> imaging = Optional.empty();
+            Optional<Aberrations> aberrations = Optional.empty();
+            String note;
+            try {
+                ParaxialOptics optics = ParaxialOptics.of(field, stack);
+                CardinalElements c = optics.cardinal();
+                cardinal = Optional.of(c);
+                note = String.format(Locale.ROOT, "relativistic paraxial ray equation (relative tolerance %.0e) between "
+                        + "reference planes z = %s and %s mm taken as field-free; moving them 10%% inward changes the "
+                        + "cardinal elements by %.1e (relative)", optics.settings().relativeTolerance(),
+                        PlanFormat.num(Units.mToMm(c.zStart_m())), PlanFormat.num(Units.mToMm(c.zEnd_m())),
+                        c.planeSensitivity());
+                if (c.planeSensitivity() > 1e-4) {
+                    warnings.add(String.format(Locale.ROOT, "the reference planes are not quite field-free: the "
+                            + "cardinal elements carry a relative error of about %.1e; lengthen the outer electrodes or "
+                            + "move the beam start outward for better", c.planeSensitivity()));
+                }
+                OptionalDouble obj = stack.beam().objectZ_m();
+                if (obj.isPresent() && obj.getAsDouble() < optics.zEnd_m()) {
+                    imaging = Optional.of(optics.imaging(obj.getAsDouble()));
+                }
+                if (c.kind() != CardinalElements.Kind.AFOCAL) {
+                    aberrations = Optional.of(imaging.isPresent() && Double.isFinite(imaging.get().imageZ_m())
+                            ? optics.aberrations(imaging.get().objectZ_m()) : optics.aberrations());
+                }
+                if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
+                    warnings.add("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
+                            + "): change the biases (e.g. with --set) to get a real focus");
+                }
+            } catch (ReflectionException e) {
+                reflection = Optional.of(e.getMessage());
+                note = "no optics: the beam is reflected on the axis";
+                warnings.add(e.getMessage() + "; lower the retarding bias or raise the beam energy");
+            } catch (StartPlaneException e) {
+                note = "no optics: the beam start plane lies inside the lens field";
+                warnings.add(String.format(Locale.ROOT, "[beam] start_z_mm = %s mm lies inside the lens (usable %s .. "
+                        + "%s mm); move it into the field-free entrance region", PlanFormat.num(Units.mToMm(e.startZ_m())),
+                        PlanFormat.num(Units.mToMm(e.usableFromZ_m())), PlanFormat.num(Units.mToMm(e.usableToZ_m()))));
+            }
+            return new Optics(reflection, cardinal, note, imaging, aberrations);
+        }
+    }
+}

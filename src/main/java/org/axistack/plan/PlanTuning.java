@@ -1,0 +1,69 @@
+package org.axistack.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.axistack.field.FieldSolution;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.tune.BiasTuner;
+import org.axistack.tune.FocusSensitivity;
+import org.axistack.tune.FocusSolution;
+import org.axistack.tune.TuneResult;
+
+/**
+ * The plan's tuning step: the biases of one electrode that focus the beam on the screen ({@link BiasTuner}) and,
+ * for each, the supply-stability budget of the tuning package ({@link FocusSensitivity}: image shift per volt of
+ * every bias and per relative change of the beam energy, and the relative supply stability that holds the focus on
+ * the screen within +/- the depth).
+ *
+ * @param tune       the focusing biases, when a screen and a biased electrode exist
+ * @param note       what was tuned, or why not
+ * @param budgets    one budget per focusing solution, in the same order (empty when there are none)
+ * @param budgetNote what the budgets assume, or why they are missing
+ */
+record PlanTuning(Optional<TuneResult> tune, String note, List<FocusSensitivity> budgets, String budgetNote) {
+
+    PlanTuning {
+        budgets = List.copyOf(budgets);
+    }
+
+    static PlanTuning run(Stack stack, FieldSolution solution, String name, double depth_m,
+            PlanAnalysis.Progress progress, double share, List<String> warnings) {
+        if (stack.screenZ_m().isEmpty()) {
+            return new PlanTuning(Optional.empty(), "no [screen] plane in the stack: add one to get the focusing bias",
+                    List.of(), "no budget: there is no focusing bias");
+        }
+        if (name == null) {
+            return new PlanTuning(Optional.empty(), "every electrode is at 0 V: give one a bias (or --tune NAME) to get "
+                    + "the focusing bias", List.of(), "no budget: there is no focusing bias");
+        }
+        PlanAnalysis.announce(progress, "finding the biases of electrode " + name + " that focus on the screen", share);
+        TuneResult t = new BiasTuner(solution, stack).focus(name, stack.screenZ_m().getAsDouble());
+        String note = "biases of electrode " + name + " that image the " + (stack.beam().objectZ_m().isPresent()
+                ? "object point" : "parallel beam") + " onto the screen at z = "
+                + PlanFormat.num(Units.mToMm(stack.screenZ_m().getAsDouble())) + " mm (other biases as given), searched "
+                + PlanFormat.num(t.range().from_V()) + " .. " + PlanFormat.num(t.range().to_V()) + " V";
+        if (!t.found()) {
+            warnings.add("no bias of " + name + " in " + PlanFormat.num(t.range().from_V()) + " .. "
+                    + PlanFormat.num(t.range().to_V()) + " V focuses on the screen");
+            return new PlanTuning(Optional.of(t), note, List.of(), "no budget: no bias focuses on the screen");
+        }
+        List<FocusSensitivity> budgets = new ArrayList<>();
+        String budgetNote = "focus held on the screen within +/- " + PlanFormat.num(Units.mToMm(depth_m)) + " mm (set "
+                + "with --depth-mm); image shift from the first-variation equations of the paraxial ray (linear in the "
+                + "change); a supply of relative stability e moves the image by e |V dZ/dV|; 'all supplies' assumes the "
+                + "same stability for every biased supply, drifting independently (added in quadrature)";
+        try {
+            for (FocusSolution f : t.solutions()) {
+                budgets.add(FocusSensitivity.of(solution, stack, f.biases_V(), t.target(), depth_m));
+            }
+        } catch (RuntimeException e) {
+            budgets.clear();
+            budgetNote = "no budget: the linearised optics failed at a focusing bias (" + e.getMessage() + ")";
+            warnings.add(budgetNote);
+        }
+        return new PlanTuning(Optional.of(t), note, budgets, budgetNote);
+    }
+}

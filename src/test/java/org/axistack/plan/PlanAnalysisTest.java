@@ -1,0 +1,122 @@
+package org.axistack.plan;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.CancellationException;
+
+import org.axistack.field.BemSolver;
+import org.axistack.field.FieldSolution;
+import org.axistack.field.SolveProgress;
+import org.axistack.io.BuiltInStacks;
+import org.axistack.model.Stack;
+import org.axistack.optics.CardinalElements;
+import org.axistack.optics.ParaxialOptics;
+import org.axistack.report.HtmlReport;
+import org.axistack.report.LensPlan;
+import org.axistack.tune.FocusSensitivity;
+import org.axistack.tune.FocusSolution;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The plan on a solution it is handed (the desktop window's way): no new solve, the optics package's numbers at the
+ * stack's biases, a supply-stability budget per focusing bias, cancellation, and a report folder written whole or
+ * not at all.
+ */
+class PlanAnalysisTest {
+
+    static Stack stack;
+    static FieldSolution solution;
+    static LensPlan plan;
+
+    @BeforeAll
+    static void solveOnce() throws Exception {
+        Stack demo = BuiltInStacks.demo();
+        solution = BemSolver.solve(demo.electrodes(), demo.mesh(), SolveProgress.NONE);
+        double[] b = demo.biases_V();
+        b[demo.indexOf("focus")] = -140; // biases moved in the window: not the stack's own
+        stack = demo.withBiases(b);
+        plan = PlanAnalysis.run(stack, "test", PlanAnalysis.Settings.defaults().withChecks(false), solution,
+                PlanAnalysis.Progress.NONE);
+    }
+
+    @Test
+    void theHandedSolutionIsReBiasedNotSolvedAgain() {
+        assertThat(plan.solution()).isSameAs(solution);
+        assertThat(plan.stack().electrodes().get(stack.indexOf("focus")).bias_V()).isEqualTo(-140);
+        // reference: the optics package on the same solution at the same biases
+        CardinalElements ref = ParaxialOptics.of(solution.withBiases(stack.biases_V()), stack).cardinal();
+        assertThat(plan.cardinal()).isPresent();
+        assertThat(plan.cardinal().get().focalLengthImage_m()).isEqualTo(ref.focalLengthImage_m());
+        assertThat(plan.cardinal().get().focalPointImageZ_m()).isEqualTo(ref.focalPointImageZ_m());
+        assertThat(plan.checks()).isEmpty();
+    }
+
+    @Test
+    void everyFocusingBiasHasASupplyBudgetThatMatchesFiniteDifferences() {
+        assertThat(plan.tune()).isPresent();
+        var solutions = plan.tune().get().solutions();
+        assertThat(solutions).isNotEmpty();
+        assertThat(plan.budgets()).hasSameSizeAs(solutions);
+        int k = stack.indexOf("focus");
+        for (int i = 0; i < solutions.size(); i++) {
+            assertThat(plan.budgets().get(i).biases_V()).containsExactly(solutions.get(i).biases_V());
+            assertThat(plan.budgets().get(i).depth_m()).isEqualTo(FocusSensitivity.DEFAULT_DEPTH_M);
+        }
+        // the mildest solution: image shift per volt of the tuned bias against a central difference of the real
+        // axis crossing from the optics package (second-order accurate; h = 0.05 V moves the image by ~0.04 mm)
+        FocusSolution s = solutions.stream().min((x, y) -> Double.compare(
+                Math.abs(plan.budgets().get(solutions.indexOf(x)).imageShift_m_per_V()[k]),
+                Math.abs(plan.budgets().get(solutions.indexOf(y)).imageShift_m_per_V()[k]))).orElseThrow();
+        FocusSensitivity budget = plan.budgets().get(solutions.indexOf(s));
+        double h = 0.05;
+        double fd = (crossing(s.biases_V(), k, h) - crossing(s.biases_V(), k, -h)) / (2 * h);
+        assertThat(budget.imageShift_m_per_V()[k]).isCloseTo(fd, within(1e-3 * Math.abs(fd)));
+        // the stability of the tuned supply alone keeps |V dZ/dV| e within the depth (its definition)
+        assertThat(budget.stabilityPerSupply()[k] * Math.abs(s.bias_V() * budget.imageShift_m_per_V()[k]))
+                .isCloseTo(budget.depth_m(), within(1e-12 * budget.depth_m()));
+    }
+
+    private static double crossing(double[] biases, int k, double dv) {
+        double[] b = biases.clone();
+        b[k] += dv;
+        CardinalElements c = ParaxialOptics.of(solution.withBiases(b), stack.withBiases(b)).cardinal();
+        return c.realFocusImageZ_m().orElse(c.focalPointImageZ_m());
+    }
+
+    @Test
+    void progressCanCancelAndAnotherGeometryIsRefused() {
+        assertThatThrownBy(() -> PlanAnalysis.run(stack, "test", PlanAnalysis.Settings.defaults(), solution,
+                (what, f) -> !what.startsWith("tracing"))).isInstanceOf(CancellationException.class);
+        Stack other = stack.shifted(1e-3);
+        assertThatThrownBy(() -> PlanAnalysis.run(other, "test", PlanAnalysis.Settings.defaults(), solution,
+                PlanAnalysis.Progress.NONE)).isInstanceOf(IllegalArgumentException.class)
+                .hasMessageContaining("other electrodes");
+    }
+
+    @Test
+    void theFolderIsWrittenWholeOrLeftAsItWas(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("report");
+        Files.createDirectories(out);
+        Files.writeString(out.resolve(HtmlReport.FILE), "old report");
+        assertThatThrownBy(() -> PlanFolder.writeWhole(plan, out, () -> true))
+                .isInstanceOf(CancellationException.class);
+        assertThat(Files.readString(out.resolve(HtmlReport.FILE))).isEqualTo("old report");
+        try (var files = Files.list(out)) {
+            assertThat(files).hasSize(1);
+        }
+        Path html = PlanFolder.writeWhole(plan, out, () -> false);
+        assertThat(Files.readString(html)).contains("<h2>Supply-stability budget</h2>", "supply_budget.csv");
+        assertThat(out.resolve("supply_budget.csv")).isNotEmptyFile();
+        assertThat(out.resolve("sweep.csv")).isNotEmptyFile();
+        try (var left = Files.list(dir)) {
+            assertThat(left.map(p -> p.getFileName().toString())).containsExactly("report");
+        }
+    }
+}
