@@ -16,7 +16,8 @@ import picocli.CommandLine.Spec;
         description = {"Open the desktop window: the lens cross-section with equipotentials, rays and envelope over",
             "the axial potential, a slider and number field per electrode bias (redrawn live from the stored",
             "solution), the optical properties and surface-field margins, the stack text, and exports",
-            "(PNG, SVG, trajectory CSV). Without STACK it opens the built-in demo lens. Needs a display."})
+            "(PNG, SVG, trajectory CSV, the HTML report of the plan command at the biases set in the window).",
+            "Without STACK it opens the built-in demo lens. Needs a display."})
 final class GuiCommand implements Callable<Integer> {
 
     @Spec

@@ -140,8 +140,7 @@ public final class LensChart {
 
     private LensChart(Stack stack) {
         section = GeometryChart.plot(stack);
-        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
-        r.setDrawSeriesLineAsPath(true); // one path per series; NaN points break it into pieces
+        XYLineAndShapeRenderer r = new PolylineRenderer(); // one path per series; NaN points break it into pieces
         r.setSeriesPaint(0, EQUIPOTENTIAL);
         r.setSeriesStroke(0, new BasicStroke(0.8f));
         r.setSeriesPaint(1, ENVELOPE);
@@ -158,7 +157,7 @@ public final class LensChart {
 
         NumberAxis vAxis = new NumberAxis("axial potential (V)");
         vAxis.setAutoRangeIncludesZero(true);
-        XYLineAndShapeRenderer pr = new XYLineAndShapeRenderer(true, false);
+        XYLineAndShapeRenderer pr = new PolylineRenderer();
         pr.setSeriesPaint(0, POTENTIAL);
         pr.setSeriesStroke(0, new BasicStroke(1.6f));
         potential = new XYPlot(axis, null, vAxis, pr);

@@ -9,7 +9,7 @@ import org.axistack.beam.EnvelopePoint;
 import org.axistack.beam.EnvelopeRequest;
 import org.axistack.beam.EnvelopeStart;
 import org.axistack.beam.EnvelopeStudy;
-import org.axistack.beam.EnvelopeStudyResult;
+import org.axistack.beam.EnvelopeSolver;
 import org.axistack.field.AxialField;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
@@ -17,8 +17,8 @@ import org.axistack.report.LensChart;
 
 /**
  * The beam envelope layer: the round-beam envelope with emittance and space charge of the beam package
- * ({@link EnvelopeStudy}), drawn mirrored. About a tenth of a second per envelope, so the window computes
- * it after the live redraw, off the event thread.
+ * ({@link EnvelopeStudy}), drawn mirrored. Tens of milliseconds per envelope, so the window computes it
+ * after the live redraw has been painted, off the event thread, and abandons it when the biases move again.
  *
  * @param current_A   beam current, A (0 for none)
  * @param emittance_m_rad edge emittance at the start, m rad (geometric)
@@ -45,10 +45,15 @@ public record EnvelopeLayer(double current_A, double emittance_m_rad, double rad
                 OptionalDouble.empty(), OptionalDouble.empty());
     }
 
-    /** Runs the envelope study and returns its full-case curve as mirrored lines, mm. */
+    /**
+     * The envelope with space charge and emittance (the full case of {@link EnvelopeStudy#run}: the same problem
+     * and solver, without the study's two comparison curves, which the window does not draw) as mirrored lines,
+     * mm. Honours thread interruption (throws {@link java.util.concurrent.CancellationException}).
+     */
     public LensChart.Lines lines(Stack stack, AxialField field) {
-        EnvelopeStudyResult r = new EnvelopeStudy().run(stack, field, request(stack));
-        EnvelopeCurve c = r.full();
+        EnvelopeRequest req = request(stack);
+        EnvelopeCurve c = new EnvelopeSolver().solve(EnvelopeStudy.channel(stack, field),
+                EnvelopeStudy.problem(stack, field, req));
         LensChart.LinesBuilder b = new LensChart.LinesBuilder();
         for (double sign : new double[] {1, -1}) {
             for (EnvelopePoint p : c.points()) {

@@ -7,13 +7,11 @@ import java.awt.event.KeyEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
-import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicReference;
 import javax.swing.BorderFactory;
 import javax.swing.Box;
@@ -37,7 +35,6 @@ import org.axistack.io.BuiltInStacks;
 import org.axistack.io.StackInputException;
 import org.axistack.model.Stack;
 import org.axistack.report.LensChart;
-import org.jfree.chart.ChartPanel;
 
 /**
  * The desktop window: the lens view (cross-section with equipotentials, rays, envelope and cardinal points over
@@ -72,6 +69,10 @@ public final class LensWindow extends JFrame {
     private final ExecutorService live = Executors.newSingleThreadExecutor(daemon("axistack-live"));
     private final ExecutorService slow = Executors.newSingleThreadExecutor(daemon("axistack-envelope"));
     private final AtomicReference<double[]> pending = new AtomicReference<>();
+    /** The view whose envelope starts once it has been painted (event thread only). */
+    private LensView envelopeDue;
+    /** The envelope being computed (event thread only). */
+    private Future<?> envelopeJob;
     private boolean editorUpdating;
 
     public LensWindow(RecentFiles recent) {
@@ -94,9 +95,16 @@ public final class LensWindow extends JFrame {
     private void layoutWindow() {
         chartPanel.setMouseWheelEnabled(true);
         chartPanel.afterPaint(() -> {
-            List<Double> t = chartPanel.times();
-            timing.setText(String.format(java.util.Locale.ROOT, "change to redraw %.0f ms (views computed in %.0f ms)",
-                    t.get(t.size() - 1), chartPanel.computeMs));
+            TimedChartPanel.Redraw r = chartPanel.last();
+            timing.setText(String.format(java.util.Locale.ROOT, "change to redraw %.0f ms (view computed in %.0f ms,"
+                    + " drawn in %.0f ms)", r.total_ms(), r.compute_ms(), r.paint_ms()));
+        });
+        chartPanel.afterEveryPaint(() -> {
+            if (envelopeDue != null) {
+                LensView v = envelopeDue;
+                envelopeDue = null;
+                startEnvelope(v);
+            }
         });
         chartPanel.addChartMouseListener(new CursorReadout(this));
         JPanel right = new JPanel(new BorderLayout());
@@ -282,6 +290,7 @@ public final class LensWindow extends JFrame {
             return;
         }
         chartPanel.markChange(System.nanoTime());
+        cancelEnvelope();
         pending.set(biases);
         LensSession s = session;
         live.submit(() -> {
@@ -290,8 +299,10 @@ public final class LensWindow extends JFrame {
                 return;
             }
             try {
+                long t0 = System.nanoTime();
                 LensView v = s.view(b);
-                SwingUtilities.invokeLater(() -> apply(s, v));
+                long t1 = System.nanoTime();
+                SwingUtilities.invokeLater(() -> apply(s, v, t0, t1));
             } catch (RuntimeException ex) {
                 SwingUtilities.invokeLater(() -> status("could not redraw: " + ex.getMessage()));
             }
@@ -299,20 +310,37 @@ public final class LensWindow extends JFrame {
         updateTitle();
     }
 
-    private void apply(LensSession s, LensView v) {
+    private void apply(LensSession s, LensView v, long started, long computed) {
         if (s != session) {
             return;
         }
+        chartPanel.markApplied(started, computed, v.cpu_ms());
         current = v;
         lensChart.show(v.layers());
         properties.show(v.properties());
-        chartPanel.computeMs = v.compute_ms();
-        startEnvelope(v);
+        // the envelope (tens of ms) waits for this paint, so it never competes with the live redraw
+        envelopeDue = v;
+        if (!chartPanel.isShowing()) {
+            envelopeDue = null;
+            startEnvelope(v);
+        }
+    }
+
+    /** Drops a pending envelope and interrupts a running one: the biases moved again. */
+    private void cancelEnvelope() {
+        envelopeDue = null;
+        if (envelopeJob != null) {
+            envelopeJob.cancel(true);
+            envelopeJob = null;
+        }
     }
 
     private void startEnvelope(LensView v) {
         EnvelopeLayer env = envelope;
-        slow.submit(() -> {
+        if (envelopeJob != null) {
+            envelopeJob.cancel(true);
+        }
+        envelopeJob = slow.submit(() -> {
             if (current != v) {
                 return;
             }
@@ -324,54 +352,12 @@ public final class LensWindow extends JFrame {
                         lensChart.show(current.layers());
                     }
                 });
+            } catch (java.util.concurrent.CancellationException ex) {
+                // the biases moved on; the next view starts its own envelope
             } catch (RuntimeException ex) {
                 SwingUtilities.invokeLater(() -> status("envelope not drawn: " + ex.getMessage()));
             }
         });
-    }
-
-    /** The chart panel that records the time from a bias change to the end of the next paint. */
-    static final class TimedChartPanel extends ChartPanel {
-        private volatile long changeNanos;
-        volatile double computeMs;
-        /** Processor time of the last paint on the event thread, ms. */
-        volatile double lastPaintCpuMs;
-        private final List<Double> times = Collections.synchronizedList(new ArrayList<>());
-        private Runnable afterPaint = () -> { };
-
-        TimedChartPanel() {
-            super(null, 900, 600, 300, 200, 2400, 1800, true, true, true, true, true, false);
-            setName("lens-view");
-            // no per-item entities (thousands of line pieces): the read-out only needs the plot areas
-            getChartRenderingInfo().setEntityCollection(null);
-        }
-
-        void markChange(long nanos) {
-            changeNanos = nanos;
-        }
-
-        void afterPaint(Runnable r) {
-            afterPaint = r;
-        }
-
-        @Override
-        public void paintComponent(java.awt.Graphics g) {
-            java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
-            long cpu0 = mx.getCurrentThreadCpuTime();
-            super.paintComponent(g);
-            lastPaintCpuMs = (mx.getCurrentThreadCpuTime() - cpu0) / 1e6;
-            long c = changeNanos;
-            if (c != 0 && getChart() != null && computeMs > 0) {
-                changeNanos = 0;
-                double ms = (System.nanoTime() - c) / 1e6;
-                times.add(ms);
-                afterPaint.run();
-            }
-        }
-
-        List<Double> times() {
-            return times;
-        }
     }
 
     /** Opens the built-in demo lens. */

@@ -32,7 +32,8 @@ import org.axistack.trace.TraceProgress;
 
 /**
  * What the window's menus and buttons do: open, check, apply, save (atomically, biases written back into the
- * text), exports (PNG, SVG, trajectory CSV), the cautions, and closing with a warning about unsaved changes.
+ * text), exports (PNG, SVG, trajectory CSV; the HTML report in {@link ReportAction}), the cautions, and closing
+ * with a warning about unsaved changes.
  * Long work runs in {@link SwingWorker}s with the status-bar progress and Cancel button.
  */
 final class WindowActions {
@@ -100,6 +101,7 @@ final class WindowActions {
         export.add(item("Lens view as SVG...", 0, e -> exportChart("svg")));
         export.add(item("Trajectory table (CSV)...", 0, e -> exportTable()));
         file.add(export);
+        file.add(item("Export HTML report...", KeyEvent.VK_R, e -> new ReportAction(w).run()));
         file.addSeparator();
         file.add(item("Quit", KeyEvent.VK_Q, e -> closeWindow()));
         bar.add(file);
@@ -317,14 +319,30 @@ final class WindowActions {
         writeTable(p, r -> w.status(r));
     }
 
+    /** Shows the progress bar and Cancel button for a long job and clears the cancel request. */
+    void beginWork(String what) {
+        cancelRequested = false;
+        w.progress.setValue(0);
+        w.progress.setString(what);
+        w.progress.setVisible(true);
+        w.cancel.setVisible(true);
+    }
+
+    /** Hides the progress bar and Cancel button. */
+    void endWork() {
+        w.progress.setVisible(false);
+        w.cancel.setVisible(false);
+    }
+
+    /** Whether Cancel was pressed since the last {@link #beginWork}. */
+    boolean cancelRequested() {
+        return cancelRequested;
+    }
+
     /** Traces the table bundle at the shown biases on a worker and writes the CSV (not when cancelled). */
     void writeTable(Path p, Consumer<String> done) {
         LensView v = w.current;
-        cancelRequested = false;
-        w.progress.setValue(0);
-        w.progress.setString("tracing " + TableBundle.RAYS + " rays");
-        w.progress.setVisible(true);
-        w.cancel.setVisible(true);
+        beginWork("tracing " + TableBundle.RAYS + " rays");
         new SwingWorker<String, Void>() {
             @Override
             protected String doInBackground() throws IOException {
@@ -349,8 +367,7 @@ final class WindowActions {
 
             @Override
             protected void done() {
-                w.progress.setVisible(false);
-                w.cancel.setVisible(false);
+                endWork();
                 try {
                     done.accept(get());
                 } catch (InterruptedException | ExecutionException e) {
@@ -385,7 +402,8 @@ final class WindowActions {
         }
     }
 
-    private void error(String where, String message) {
+    /** A problem in a dialog (the message names the fix) and in the status bar. */
+    void error(String where, String message) {
         JTextArea t = new JTextArea(message, 6, 60);
         t.setLineWrap(true);
         t.setWrapStyleWord(true);

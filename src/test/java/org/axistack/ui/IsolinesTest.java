@@ -56,6 +56,36 @@ class IsolinesTest {
     }
 
     @Test
+    void segmentsAreJoinedIntoOneLinePerContour() {
+        // phi = z^2 + r^2, level 0.25: the upper half of one circle, so one poly-line above the axis and its
+        // mirror image below, each point shared by two neighbouring cell segments (a closed form, no source needed)
+        int nz = 41, nr = 21;
+        double[][] v = values(nz, nr, (z, r) -> z * z + r * r + 1e-9 * z); // tilt off the exact node values
+        LensChart.Lines l = Isolines.trace(new PotentialGridStub(nz, nr).grid, v, new double[] {0.25});
+        int pieces = 0;
+        for (int k = 0; k < l.size(); k++) {
+            if (Double.isNaN(l.z_mm()[k])) {
+                pieces++;
+            }
+        }
+        assertThat(pieces).isEqualTo(2);
+        // the piece runs from one side of the axis to the other
+        double zFirst = l.z_mm()[0], zLast = l.z_mm()[l.size() / 2 - 2]; // the upper piece, then NaN
+        assertThat(Math.abs(zFirst) / 1000).isCloseTo(0.5, within(1e-3));
+        assertThat(zFirst * zLast).isNegative();
+        // a closed contour away from the axis closes on itself: phi = (z - 0.5)^2 + (r - 0.5)^2, radius 0.2
+        double[][] w = values(nz, nr, (z, r) -> (z - 0.01) * (z - 0.01) + (r - 0.5) * (r - 0.5));
+        LensChart.Lines ring = Isolines.trace(new PotentialGridStub(nz, nr).grid, w, new double[] {0.04});
+        int end = 0;
+        while (!Double.isNaN(ring.z_mm()[end])) {
+            end++;
+        }
+        assertThat(ring.z_mm()[0]).isEqualTo(ring.z_mm()[end - 1]);
+        assertThat(ring.r_mm()[0]).isEqualTo(ring.r_mm()[end - 1]);
+        assertThat(end).isGreaterThan(20);
+    }
+
+    @Test
     void levelsAreRoundAndInsideTheRange() {
         assertThat(Isolines.levels(-120, 0, 10)).containsExactly(-110, -100, -90, -80, -70, -60, -50, -40, -30, -20,
                 -10);

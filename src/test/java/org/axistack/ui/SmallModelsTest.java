@@ -31,7 +31,7 @@ class SmallModelsTest {
 
     @Test
     void recentFilesKeepTheNewestFirstWithoutDuplicates() throws Exception {
-        Preferences node = Preferences.userRoot().node("org/axistack/test-recent-" + System.nanoTime());
+        Preferences node = new MemoryPreferences().node("org/axistack/desktop"); // never the user's own preferences
         try {
             RecentFiles r = new RecentFiles(node);
             assertThat(r.cautionsSeen()).isFalse();
