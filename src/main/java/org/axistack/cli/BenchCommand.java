@@ -27,7 +27,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Times the field solve, re-biasing with the axial potential, cardinal elements, tuning, a sweep"
-                + " and a 1000-ray bundle on the built-in demo lens (or STACK); prints medians against the speed targets.")
+                + " and a 1000-ray bundle on the built-in demo lens (or STACK), with --window also the desktop window's"
+                + " redraw after a bias change; prints medians against the speed targets.")
 final class BenchCommand implements Callable<Integer> {
 
     @Spec
@@ -49,8 +50,12 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--repeat", paramLabel = "N", defaultValue = "7", description = "Repetitions per measurement (default 7).")
     int repeat;
 
+    @Option(names = "--window", description = "Also time the desktop window's redraw after a bias change (needs a"
+            + " display, e.g. xvfb-run; STACK's file, without --set; target <= 50 ms on the demo lens).")
+    boolean window;
+
     @Override
-    public Integer call() throws StackInputException {
+    public Integer call() throws Exception {
         if (repeat < 1 || repeat > 1000) {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--repeat must be 1..1000");
         }
@@ -125,8 +130,22 @@ final class BenchCommand implements Callable<Integer> {
             row(out, String.format(Locale.ROOT, "sizing, %d varied parameters, %d geometries (%s)", req.varied().length,
                     r.candidates().size(), sizing.getFileName()), (System.nanoTime() - t) * 1e-9, 60);
         }
+        if (window) {
+            windowRow(out);
+        }
         out.flush();
         return 0;
+    }
+
+    /** The window's change-to-redraw time (ui.RedrawBench): 20 warm-up changes, then 40 timed ones. */
+    private void windowRow(PrintWriter out) throws Exception {
+        if (!org.axistack.ui.Desktop.displayAvailable()) {
+            out.println("  (no window row: no display here; run under xvfb-run or on a desktop session)");
+            return;
+        }
+        org.axistack.ui.RedrawBench.Result r = org.axistack.ui.RedrawBench.run(input.path(), 20, 40);
+        row(out, "window: bias change to redraw (median of " + r.changes() + ")", r.median_ms() / 1000, 0.050);
+        out.println("    " + r.describe());
     }
 
     /**

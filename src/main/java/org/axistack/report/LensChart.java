@@ -37,6 +37,8 @@ public final class LensChart {
     private static final Color MARKER = new Color(0x5A5A5A);
     private static final Color BACKGROUND = new Color(0xFBFAF7);
     private static final Color GRID = new Color(0xE4E1DA);
+    /** Thin solid grid lines: the dashed default costs a quarter of a redraw in anti-aliased dash pieces. */
+    private static final BasicStroke GRID_STROKE = new BasicStroke(0.5f);
 
     /**
      * Poly-lines in the (z, r) plane, mm, as one coordinate list where NaN separates the pieces (so thousands
@@ -154,6 +156,8 @@ public final class LensChart {
         section.setDataset(1, lines);
         section.setRenderer(1, r);
         section.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
+        section.setDomainGridlineStroke(GRID_STROKE);
+        section.setRangeGridlineStroke(GRID_STROKE);
 
         NumberAxis vAxis = new NumberAxis("axial potential (V)");
         vAxis.setAutoRangeIncludesZero(true);
@@ -164,6 +168,8 @@ public final class LensChart {
         potential.setBackgroundPaint(BACKGROUND);
         potential.setDomainGridlinePaint(GRID);
         potential.setRangeGridlinePaint(GRID);
+        potential.setDomainGridlineStroke(GRID_STROKE);
+        potential.setRangeGridlineStroke(GRID_STROKE);
 
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot((NumberAxis) section.getDomainAxis());
         combined.setGap(8);

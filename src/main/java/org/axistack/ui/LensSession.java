@@ -1,7 +1,13 @@
 package org.axistack.ui;
 
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.util.Locale;
 import java.util.concurrent.CancellationException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
@@ -27,6 +33,14 @@ public final class LensSession {
     static final int AXIS_POINTS = 400;
     /** About this many equipotential levels are drawn. */
     static final int LEVELS = 16;
+
+    private static final ThreadMXBean THREADS = ManagementFactory.getThreadMXBean();
+    /** One helper thread for the part of a view that runs beside the caller's (two cores are the design target). */
+    private static final ExecutorService HELPER = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "axistack-view-helper");
+        t.setDaemon(true);
+        return t;
+    });
 
     private final Stack stack;
     private final FieldSolution solution;
@@ -80,15 +94,22 @@ public final class LensSession {
 
     /**
      * Everything drawn and listed for these biases (volts, electrode order): re-biased field, equipotentials,
-     * live rays, axial potential, properties. Costs milliseconds (no solve). The envelope is not included
-     * (see {@link EnvelopeLayer}).
+     * live rays, axial potential, properties. Costs milliseconds (no solve): the rays and properties are computed
+     * on a helper thread while the calling thread sums the grid and draws the equipotentials. The envelope is not
+     * included (see {@link EnvelopeLayer}).
      */
     public LensView view(double[] biases_V) {
         long t0 = System.nanoTime();
-        java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
-        long c0 = mx.getCurrentThreadCpuTime();
+        long c0 = THREADS.getCurrentThreadCpuTime();
         Stack biased = stack.withBiases(biases_V);
         BiasedField field = solution.withBiases(biases_V);
+        // rays and optics on the helper thread while this one sums the grid and traces the equipotentials
+        Future<Side> side = HELPER.submit(() -> {
+            long h0 = THREADS.getCurrentThreadCpuTime();
+            LiveRays.Result rays = LiveRays.trace(biased, field);
+            PropertySheet props = PropertySheet.of(biased, field);
+            return new Side(rays, props, (THREADS.getCurrentThreadCpuTime() - h0) / 1e6);
+        });
         double[][] v = grid.combine(biases_V);
         double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
         for (double[] row : v) {
@@ -109,13 +130,30 @@ public final class LensSession {
             field.axial(z, 0, out);
             axis.add(Units.mToMm(z), out[0]);
         }
-        LiveRays.Result rays = LiveRays.trace(biased, field);
-        PropertySheet props = PropertySheet.of(biased, field);
-        LensChart.Layers layers = new LensChart.Layers(biased, iso, levelsNote, rays.kept(), rays.lost(),
-                rays.note(), LensChart.Lines.none(), axis.build(), props.marks());
+        Side s = join(side);
+        LensChart.Layers layers = new LensChart.Layers(biased, iso, levelsNote, s.rays().kept(), s.rays().lost(),
+                s.rays().note(), LensChart.Lines.none(), axis.build(), s.props().marks());
         double ms = (System.nanoTime() - t0) / 1e6;
-        double cpuMs = (mx.getCurrentThreadCpuTime() - c0) / 1e6;
-        return new LensView(biased, field, layers, props, rays, ms, cpuMs);
+        double cpuMs = (THREADS.getCurrentThreadCpuTime() - c0) / 1e6 + s.cpu_ms();
+        return new LensView(biased, field, layers, s.props(), s.rays(), ms, cpuMs);
+    }
+
+    /** The rays and properties of a view, with the processor time they took. */
+    private record Side(LiveRays.Result rays, PropertySheet props, double cpu_ms) {
+    }
+
+    private static Side join(Future<Side> f) {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new CancellationException("view interrupted");
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
     }
 
     /**

@@ -23,6 +23,11 @@ public final class RecentFiles {
         return new RecentFiles(Preferences.userRoot().node("org/axistack/desktop"));
     }
 
+    /** A list kept in memory only, never in the user's preferences (for tests and benchmarks). */
+    public static RecentFiles inMemory() {
+        return new RecentFiles(new MemoryPreferences().node("org/axistack/desktop"));
+    }
+
     /** The remembered files, newest first. */
     public List<Path> list() {
         List<Path> out = new ArrayList<>();

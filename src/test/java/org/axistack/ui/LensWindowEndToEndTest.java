@@ -56,9 +56,6 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class LensWindowEndToEndTest {
 
-    /** Bias changes timed (at least 30 for the median in gui.md). */
-    private static final int REDRAWS = 40;
-
     private final List<LensWindow> windows = new ArrayList<>();
 
     @TempDir
@@ -79,7 +76,7 @@ class LensWindowEndToEndTest {
 
     private static Preferences freshPreferences() {
         Assumptions.assumeFalse(GraphicsEnvironment.isHeadless(), "no display: the window test needs one");
-        return new MemoryPreferences().node("org/axistack/desktop");
+        return new MemoryPreferences().node("org/axistack/desktop"); // never the user's own preferences
     }
 
     /** Opens the window with cautions already acknowledged (the first-start test covers them). */
@@ -115,16 +112,10 @@ class LensWindowEndToEndTest {
                 .isEqualTo(UiFormat.num(Units.mToMm(ref.focalPointImageZ_m())));
         assertThat(w.unsaved()).isTrue();
 
-        // change-to-redraw times (printed for src/site/markdown/gui.md, not asserted)
-        int first = w.chartPanel.redrawCount();
-        for (int i = 1; i <= REDRAWS; i++) {
-            double v = moved * (1 + 0.006 * (i % 21)); // ends near 1.11 x moved, with lost rays in the screenshot
-            int n = w.chartPanel.redrawCount();
-            SwingUtilities.invokeAndWait(() -> w.biasPanel.set(k, v, false));
-            waitFor(() -> w.chartPanel.redrawCount() > n, "a redraw");
-        }
-        List<TimedChartPanel.Redraw> t = w.chartPanel.redraws();
-        printRedraws(t.subList(first, t.size()));
+        // change-to-redraw times (printed for src/site/markdown/gui.md, not asserted: speed targets live in the
+        // bench command, bench --window)
+        RedrawBench.Result r = RedrawBench.measure(w, 20, 40);
+        System.out.println("demo lens, " + r.describe());
         waitFor(() -> w.current.layers().envelope().size() > 0, "the envelope");
         screenshot(w, "gui-electron-flood-einzel.png");
     }
@@ -313,24 +304,6 @@ class LensWindowEndToEndTest {
     private static AbstractButton button(Container root, String text) {
         return find(root, AbstractButton.class, b -> text.equals(b.getText())).orElseThrow(
                 () -> new AssertionError("no button '" + text + "'"));
-    }
-
-    private static void printRedraws(List<TimedChartPanel.Redraw> r) {
-        System.out.printf(Locale.ROOT, "demo lens, %d bias changes, medians (ms): change to redraw %.1f (max %.1f);"
-                + " wait %.1f, view computation %.1f wall / %.1f cpu, hand-off %.1f, to paint %.1f, paint %.1f wall /"
-                + " %.1f cpu; load average %.2f%n", r.size(), median(r, TimedChartPanel.Redraw::total_ms),
-                r.stream().mapToDouble(TimedChartPanel.Redraw::total_ms).max().orElse(0),
-                median(r, TimedChartPanel.Redraw::wait_ms), median(r, TimedChartPanel.Redraw::compute_ms),
-                median(r, TimedChartPanel.Redraw::computeCpu_ms), median(r, TimedChartPanel.Redraw::handoff_ms),
-                median(r, TimedChartPanel.Redraw::toPaint_ms), median(r, TimedChartPanel.Redraw::paint_ms),
-                median(r, TimedChartPanel.Redraw::paintCpu_ms),
-                java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
-    }
-
-    private static double median(List<TimedChartPanel.Redraw> l,
-            java.util.function.ToDoubleFunction<TimedChartPanel.Redraw> f) {
-        double[] v = l.stream().mapToDouble(f).sorted().toArray();
-        return v[v.length / 2];
     }
 
     private static String tableValue(LensWindow w, String label) {

@@ -5,9 +5,9 @@ import java.util.Map;
 import java.util.prefs.AbstractPreferences;
 
 /**
- * A preferences tree held in memory only, so tests never read or write the user's real preferences (the window's
- * recent files and the cautions flag live in {@link java.util.prefs.Preferences}, which {@link RecentFiles} takes
- * as a node).
+ * A preferences tree held in memory only (gone when the program ends), for windows that must not read or write the
+ * user's own preferences: tests and the redraw benchmark. The window's recent files and the cautions flag live in
+ * {@link java.util.prefs.Preferences}, which {@link RecentFiles} takes as a node.
  */
 final class MemoryPreferences extends AbstractPreferences {
 
