@@ -23,8 +23,10 @@ import java.util.prefs.Preferences;
 import java.util.stream.Stream;
 import javax.imageio.ImageIO;
 import javax.swing.AbstractButton;
+import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
 import javax.swing.JDialog;
+import javax.swing.JFileChooser;
 import javax.swing.JMenuItem;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
@@ -157,11 +159,30 @@ class LensWindowEndToEndTest {
         double moved = -150;
         SwingUtilities.invokeAndWait(() -> w.biasPanel.set(k, moved, false));
         waitFor(() -> w.current.stack().electrodes().get(k).bias_V() == moved, "the view at the moved bias");
-        Path dir = tmp.resolve("report");
+        // an export cancelled from the status bar writes nothing
+        Path cancelled = tmp.resolve("cancelled");
         AtomicReference<String> outcome = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> new ReportAction(w).export(dir, false, outcome::set));
-        waitFor(() -> outcome.get() != null, "the report");
-        assertThat(outcome.get()).startsWith("wrote ");
+        SwingUtilities.invokeAndWait(() -> {
+            new ReportAction(w).export(cancelled, true, outcome::set);
+            w.cancel.doClick();
+        });
+        waitFor(() -> outcome.get() != null, "the cancelled report");
+        assertThat(outcome.get()).isEqualTo("report cancelled; the folder is unchanged");
+        assertThat(cancelled).doesNotExist();
+
+        Path dir = tmp.resolve("report");
+        // File > Export HTML report...: type the folder, leave out the verification cases, approve
+        clickMenu(w, "Export HTML report...");
+        JDialog chooser = waitForDialog("Export the HTML report into a folder", d -> true);
+        SwingUtilities.invokeAndWait(() -> {
+            JFileChooser fc = find(chooser, JFileChooser.class, c -> true).orElseThrow();
+            ((JCheckBox) fc.getAccessory()).setSelected(false);
+            fc.setSelectedFile(dir.toFile());
+            fc.approveSelection();
+        });
+        waitFor(() -> w.status.getText().startsWith("wrote ") || w.status.getText().startsWith("problem"),
+                "the report");
+        assertThat(w.status.getText()).startsWith("wrote ").contains(dir.toString());
         Path html = dir.resolve(HtmlReport.FILE);
         assertThat(html).isNotEmptyFile();
         String text = unescape(Files.readString(html));
