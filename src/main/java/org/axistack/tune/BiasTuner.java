@@ -23,9 +23,10 @@ import org.hipparchus.exception.MathIllegalStateException;
  * of the paraxial ray from the object) on {@value #SCAN_POINTS} equally spaced biases (in parallel, with a looser
  * integration tolerance, {@link FocusProbe#scanSettings()}), refined by bisection near the edge of any reflecting
  * part of the range and around every dip of |height| that does not change sign (so close pairs of roots are not
- * missed); each sign change is solved by the bracketing n-th order Brent method (Hipparchus
+ * missed); the brackets are solved in parallel; each sign change is solved by the bracketing n-th order Brent method (Hipparchus
  * {@code BracketingNthOrderBrentSolver}; R. P. Brent, Algorithms for Minimization without Derivatives, 1973, with
- * inverse polynomial interpolation of order 5) and polished by secant steps on the condition computed with the
+ * inverse polynomial interpolation of order 5) and polished by Newton-secant steps (started with the slope of
+ * Brent's last two points) on the condition computed with the
  * {@code optics} command's own settings, so a tuned bias reproduces the image plane in an {@code optics} run. Einzel lenses give two roots, one
  * decelerating and one accelerating. Each bias set is applied by superposition of the stored unit solutions;
  * the field is never solved again. Thread-safe (immutable).
@@ -143,15 +144,21 @@ public final class BiasTuner {
     private FocusSolution root(double lo, double hi, double scale, DoubleFunction<FocusProbe.Point> scanEval,
             DoubleFunction<FocusProbe.Point> fineEval, String electrode, int index, FocusTarget target) {
         BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, 1e-8 * scale, 1e-12, 5);
+        double[][] last = new double[2][]; // the two latest (bias, miss) of the scan-accuracy condition
         try {
             double approx = lo == hi ? lo : solver.solve(200, v -> {
                 FocusProbe.Point q = scanEval.apply(v);
                 if (!q.valid()) {
                     throw new IllegalStateException("reflection inside a bracket");
                 }
+                last[1] = last[0];
+                last[0] = new double[] {v, q.miss()};
                 return q.miss();
             }, lo, hi, AllowedSolution.ANY_SIDE);
-            FocusProbe.Point root = polish(fineEval, approx, lo, hi, 1e-12 * scale);
+            // Brent's last two points lie next to the root: their secant is the slope to start Newton with
+            double slope = last[1] != null && last[0][0] != last[1][0]
+                    ? (last[0][1] - last[1][1]) / (last[0][0] - last[1][0]) : Double.NaN;
+            FocusProbe.Point root = polish(fineEval, approx, slope, lo, hi, 1e-12 * scale);
             return root == null ? null : describe(stack, electrode, index, root, target);
         } catch (IllegalStateException | MathIllegalStateException ex) {
             return null; // a reflecting island inside the bracket: no clean root here
@@ -177,34 +184,56 @@ public final class BiasTuner {
     }
 
     /**
-     * Secant steps on the full-accuracy condition from the scan-accuracy root (they differ by the looser
-     * integration tolerance only), kept inside the bracket; null if the full-accuracy probe reflects there.
+     * Newton-secant steps on the full-accuracy condition from the scan-accuracy root (the two differ only by
+     * the looser integration tolerance, so the root moves by a tiny amount), starting with the scan
+     * condition's slope there; stops when the predicted next correction is below {@code tol}; kept inside
+     * the bracket; null if the full-accuracy probe reflects there.
      */
-    private static FocusProbe.Point polish(DoubleFunction<FocusProbe.Point> fine, double x0, double lo, double hi,
-            double tol) {
+    private static FocusProbe.Point polish(DoubleFunction<FocusProbe.Point> fine, double x0, double slope0, double lo,
+            double hi, double tol) {
         FocusProbe.Point p0 = fine.apply(x0);
         if (!p0.valid()) {
             return null;
         }
-        double step = Math.max(1e-7 * (hi - lo), 10 * tol);
-        double x1 = x0 + step <= hi ? x0 + step : x0 - step;
-        FocusProbe.Point p1 = fine.apply(x1);
-        for (int it = 0; it < 6 && p1.valid() && p1.miss() != 0; it++) {
-            double slope = (p1.miss() - p0.miss()) / (x1 - x0);
-            double x2 = x1 - p1.miss() / slope;
-            if (!(x2 >= lo && x2 <= hi) || !Double.isFinite(x2)) {
+        if (p0.miss() == 0) {
+            return p0;
+        }
+        double slope = slope0;
+        if (!(Double.isFinite(slope) && slope != 0)) {
+            double step = Math.max(1e-7 * (hi - lo), 10 * tol);
+            double x1 = x0 + step <= hi ? x0 + step : x0 - step;
+            FocusProbe.Point p1 = fine.apply(x1);
+            if (!p1.valid() || p1.miss() == p0.miss()) {
+                return p0;
+            }
+            slope = (p1.miss() - p0.miss()) / (x1 - x0);
+            if (Math.abs(p1.miss()) < Math.abs(p0.miss())) {
+                x0 = x1;
+                p0 = p1;
+            }
+        }
+        for (int it = 0; it < 6; it++) {
+            double x1 = x0 - p0.miss() / slope;
+            if (!(x1 >= lo && x1 <= hi) || !Double.isFinite(x1) || x1 == x0) {
                 break;
             }
-            boolean done = Math.abs(x2 - x1) <= tol;
-            x0 = x1;
-            p0 = p1;
-            x1 = x2;
-            p1 = fine.apply(x2);
-            if (done) {
+            FocusProbe.Point p1 = fine.apply(x1);
+            if (!p1.valid()) {
+                break;
+            }
+            if (p1.miss() != p0.miss()) {
+                slope = (p1.miss() - p0.miss()) / (x1 - x0);
+            }
+            boolean better = Math.abs(p1.miss()) <= Math.abs(p0.miss());
+            if (better) {
+                x0 = x1;
+                p0 = p1;
+            }
+            if (!better || p1.miss() == 0 || Math.abs(p1.miss() / slope) <= tol) {
                 break;
             }
         }
-        return p1.valid() && Math.abs(p1.miss()) <= Math.abs(p0.miss()) ? p1 : p0;
+        return p0;
     }
 
     /** Bisect every interval between a reflecting and a transmitting bias, so roots near the edge are bracketed. */

@@ -42,9 +42,9 @@ final class FocusProbe {
         this.searchRange = ParaxialOptics.searchRange_m(stack);
     }
 
-    /** Looser settings for scanning: relative tolerance 1e-9 and 200 axis samples (the plane search is unchanged in kind). */
+    /** Looser settings for scanning: relative tolerance 1e-7 and 200 axis samples (the plane search is unchanged in kind). */
     static ParaxialSettings scanSettings() {
-        return ParaxialSettings.defaults().withRelativeTolerance(1e-9).withScanPoints(200);
+        return ParaxialSettings.defaults().withRelativeTolerance(1e-7).withScanPoints(200);
     }
 
     FocusTarget target() {
