@@ -70,9 +70,8 @@ final class SchurLuSolver {
         int padded = (n + TILE - 1) / TILE * TILE;
         DMatrixRBlock aug = new DMatrixRBlock(padded, padded + m, TILE);
         for (int i = 0; i < n; i++) {
-            int row = i * n;
-            for (int j = 0; j < n; j++) {
-                aug.set(i, j, a.data[row + j]);
+            for (int c = 0; c * TILE < n; c++) {
+                System.arraycopy(a.data, i * n + c * TILE, aug.data, tileIndex(aug, i, c), Math.min(TILE, n - c * TILE));
             }
             for (int j = 0; j < m; j++) {
                 aug.set(i, padded + j, b.get(i, j));
@@ -133,13 +132,16 @@ final class SchurLuSolver {
             return false;
         }
         int[] pivot = lu.getRowPivotV(null);
-        double[] column = new double[size];
-        for (int j = r1; j < end; j++) {
+        // Row exchanges of the leaf applied to every column to its right, one tile column at a time (a row's
+        // part of a tile is contiguous in the tiled storage).
+        double[] rows = new double[size * TILE];
+        for (int c = r1 / TILE; c * TILE < end; c++) {
+            int width = Math.min(TILE, end - c * TILE);
             for (int i = 0; i < size; i++) {
-                column[i] = aug.get(r0 + pivot[i], j);
+                System.arraycopy(aug.data, tileIndex(aug, r0 + pivot[i], c), rows, i * TILE, width);
             }
             for (int i = 0; i < size; i++) {
-                aug.set(r0 + i, j, column[i]);
+                System.arraycopy(rows, i * TILE, aug.data, tileIndex(aug, r0 + i, c), width);
             }
         }
         DSubmatrixD1 rhs = view(r0, r1, r1, end);
@@ -152,6 +154,17 @@ final class SchurLuSolver {
             throw new CancellationException("field solve cancelled");
         }
         return true;
+    }
+
+    /**
+     * Index in the tiled storage of the first element of row {@code row} inside tile column {@code c}
+     * (EJML's layout: tiles stored row of tiles after row of tiles, each tile row-major).
+     */
+    static int tileIndex(DMatrixRBlock m, int row, int c) {
+        int tileRow = row / TILE;
+        int height = Math.min(TILE, m.numRows - tileRow * TILE);
+        int width = Math.min(TILE, m.numCols - c * TILE);
+        return tileRow * TILE * m.numCols + c * TILE * height + (row - tileRow * TILE) * width;
     }
 
     /** Rows in the first half of a block of {@code size} rows (a multiple of the tile). */

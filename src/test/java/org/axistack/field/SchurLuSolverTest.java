@@ -66,6 +66,16 @@ class SchurLuSolverTest {
     }
 
     @Test
+    void tileIndexIsEjmlsLayout() {
+        org.ejml.data.DMatrixRBlock m = new org.ejml.data.DMatrixRBlock(250, 187, SchurLuSolver.TILE);
+        for (int row = 0; row < m.numRows; row++) {
+            for (int c = 0; c * SchurLuSolver.TILE < m.numCols; c++) {
+                assertThat(SchurLuSolver.tileIndex(m, row, c)).isEqualTo(m.getIndex(row, c * SchurLuSolver.TILE));
+            }
+        }
+    }
+
+    @Test
     void pivotsInsideALeafWhereTheDiagonalVanishes() {
         int n = 500;
         DMatrixRMaj a = kernelLike(n, 3);
