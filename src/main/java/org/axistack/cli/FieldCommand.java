@@ -75,6 +75,7 @@ final class FieldCommand implements Callable<Integer> {
             m.put("panels", solution.mesh().panels().size());
             m.put("solve_seconds", solution.solveSeconds());
             m.put("residual_V_per_V", solution.residual());
+            m.put("solved_as_mirror_halves", solution.solvedAsMirrorHalves());
             m.put("axial_expansion_relative_error", field.axialExpansionError());
             List<Map<String, Object>> es = new ArrayList<>();
             for (int e = 0; e < stack.electrodes().size(); e++) {
@@ -106,8 +107,9 @@ final class FieldCommand implements Callable<Integer> {
             return 0;
         }
         out.printf(Locale.ROOT, "Field of %s%n", input.shownAs());
-        out.printf(Locale.ROOT, "  boundary elements: %d unknowns on %d panels; solved in %.3f s; collocation residual %.1e V/V%n",
-                solution.unknowns(), solution.mesh().panels().size(), solution.solveSeconds(), solution.residual());
+        out.printf(Locale.ROOT, "  boundary elements: %d unknowns on %d panels; solved in %.3f s%s; collocation residual %.1e V/V%n",
+                solution.unknowns(), solution.mesh().panels().size(), solution.solveSeconds(),
+                solution.solvedAsMirrorHalves() ? " (mirror-symmetric: two half-size systems)" : "", solution.residual());
         out.printf(Locale.ROOT, "  method: surface-charge boundary elements, exact ring kernel (elliptic integrals);"
                 + " axial values from a Chebyshev expansion within %.0e of the exact sum%n", Math.max(field.axialExpansionError(), 1e-16));
         out.println();

@@ -135,6 +135,7 @@ public final class BemSolver {
         if (x != null && !(SchurLuSolver.residual(a, x, rhs) <= RESIDUAL_TOLERANCE)) {
             x = null;
         }
+        boolean mirrorHalves = x != null;
         if (x == null && n >= SchurLuSolver.MIN_SIZE) {
             x = SchurLuSolver.solve(a, rhs, RESIDUAL_TOLERANCE, f -> progress.update("factoring", 0.7 + 0.25 * f));
         }
@@ -162,6 +163,7 @@ public final class BemSolver {
         }
         double seconds = (System.nanoTime() - t0) * 1e-9;
         progress.update("done", 1.0);
-        return new FieldSolution(electrodes, mesh, quad, bounds, unit, residual, seconds, assembleSeconds);
+        return new FieldSolution(electrodes, mesh, quad, bounds, unit, residual, seconds, assembleSeconds,
+                mirrorHalves);
     }
 }

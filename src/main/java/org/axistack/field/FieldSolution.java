@@ -24,11 +24,12 @@ public final class FieldSolution {
     private final double residual;
     private final double solveSeconds;
     private final double assembleSeconds;
+    private final boolean mirrorHalves;
     private final double[][] capacitance;
     private volatile AxialExpansion axialExpansion;
 
     FieldSolution(List<Electrode> electrodes, BoundaryMesh mesh, PanelQuadrature quad, PanelQuadrature.Bounds[] bounds,
-            double[][] unitDensity, double residual, double solveSeconds, double assembleSeconds) {
+            double[][] unitDensity, double residual, double solveSeconds, double assembleSeconds, boolean mirrorHalves) {
         this.electrodes = List.copyOf(electrodes);
         this.mesh = mesh;
         this.quad = quad;
@@ -37,6 +38,7 @@ public final class FieldSolution {
         this.residual = residual;
         this.solveSeconds = solveSeconds;
         this.assembleSeconds = assembleSeconds;
+        this.mirrorHalves = mirrorHalves;
         int ne = electrodes.size();
         int n = mesh.size();
         unitStrength = new double[ne][n];
@@ -112,6 +114,11 @@ public final class FieldSolution {
     }
 
     /** Wall-clock seconds for mesh, assembly, factorisation and unit solves. */
+    /** Whether the stack was found mirror-symmetric and solved as two half-size systems. */
+    public boolean solvedAsMirrorHalves() {
+        return mirrorHalves;
+    }
+
     public double solveSeconds() {
         return solveSeconds;
     }
