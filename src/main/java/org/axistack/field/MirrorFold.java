@@ -16,7 +16,7 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
  * solves (A[i][j] + A[i][s(j)]) and the odd part (A[i][j] - A[i][s(j)]) (the reduction of a problem with
  * a reflection symmetry by its symmetric and antisymmetric subspaces; e.g. the group-theoretic reduction
  * of boundary-element systems in A. Bossavit, "Boundary value problems with symmetry and their
- * approximation by finite elements", SIAM J. Appl. Math. 53 (1993) 1352). Each half is factored as any
+ * approximation by finite elements", SIAM J. Appl. Math. 53 (1993) 1352, cited from memory). Each half is factored as any
  * other collocation matrix ({@link SchurLuSolver}); the arithmetic falls to a quarter.
  *
  * <p>The mirror is looked for, never assumed: the node coordinates must match to 1e-9 of the stack's size,
