@@ -186,7 +186,7 @@ public final class PlanAnalysis {
         double r0 = defaultEnvelopeRadius_m(stack);
         String envNote = String.format(Locale.ROOT, "round beam of %s uA, edge radius %s mm (a quarter of the smallest "
                 + "bore), parallel, edge emittance %s mm mrad (geometric, at the start); set with --current and "
-                + "--emittance", PlanFormat.num(s.current_A() * 1e6), PlanFormat.num(Units.mToMm(r0)),
+                + "--emittance, or in the window's beam envelope fields", PlanFormat.num(s.current_A() * 1e6), PlanFormat.num(Units.mToMm(r0)),
                 PlanFormat.num(s.emittance_m_rad() * 1e6));
         if (o.reflection.isEmpty()) {
             try {
@@ -331,7 +331,7 @@ public final class PlanAnalysis {
                 }
                 if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
                     warnings.add("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
-                            + "): change the biases (e.g. with --set) to get a real focus");
+                            + "): change the biases (with --set or the window's bias controls) to get a real focus");
                 }
             } catch (ReflectionException e) {
                 reflection = Optional.of(e.getMessage());

@@ -36,7 +36,7 @@ record PlanTuning(Optional<TuneResult> tune, String note, List<FocusSensitivity>
                     List.of(), "no budget: there is no focusing bias");
         }
         if (name == null) {
-            return new PlanTuning(Optional.empty(), "every electrode is at 0 V: give one a bias (or --tune NAME) to get "
+            return new PlanTuning(Optional.empty(), "every electrode is at 0 V: give one a bias (or name one with --tune) to get "
                     + "the focusing bias", List.of(), "no budget: there is no focusing bias");
         }
         PlanAnalysis.announce(progress, "finding the biases of electrode " + name + " that focus on the screen", share);
@@ -52,7 +52,7 @@ record PlanTuning(Optional<TuneResult> tune, String note, List<FocusSensitivity>
         }
         List<FocusSensitivity> budgets = new ArrayList<>();
         String budgetNote = "focus held on the screen within +/- " + PlanFormat.num(Units.mToMm(depth_m)) + " mm (set "
-                + "with --depth-mm); image shift from the first-variation equations of the paraxial ray (linear in the "
+                + "with plan --depth-mm); image shift from the first-variation equations of the paraxial ray (linear in the "
                 + "change); a supply of relative stability e moves the image by e |V dZ/dV|; 'all supplies' assumes the "
                 + "same stability for every biased supply, drifting independently (added in quadrature)";
         try {

@@ -143,7 +143,7 @@ public final class HtmlReport {
                 + "method.</p>\n");
         verification(b, plan.checks());
         PlanSections.method(b, plan);
-        b.append("<h2>Inputs</h2>\n<p class=\"note\">The stack as planned (after --set), also in stack.toml:</p>\n<pre>")
+        b.append("<h2>Inputs</h2>\n<p class=\"note\">The stack as planned (with the biases given by --set or set in the window), also in stack.toml:</p>\n<pre>")
                 .append(Html.esc(StackWriter.toToml(s))).append("</pre>\n");
         b.append("<h2>Files</h2>\n<p class=\"note\">");
         for (String f : files) {
