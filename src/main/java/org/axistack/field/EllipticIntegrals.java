@@ -46,29 +46,6 @@ public final class EllipticIntegrals {
         out[2] = kme;
     }
 
-    /**
-     * K(m) alone, from its complement m1 = 1 - m (as in {@link #kAndE}): the same arithmetic-geometric mean
-     * without the sum that E needs, stopped by the same test (c_{n+1}^2 <= 1e-34 a^2, with
-     * c_{n+1} = c_n^2 / (4 a_{n+1})), so the value is identical to {@code kAndE}'s.
-     */
-    public static double kOnly(double m, double m1) {
-        double a = 1.0;
-        double b = Math.sqrt(m1);
-        double cSq = m;
-        for (int i = 0; i < 40; i++) {
-            double an = 0.5 * (a + b);
-            double bn = Math.sqrt(a * b);
-            double c = cSq / (4 * an);
-            a = an;
-            b = bn;
-            cSq = c * c;
-            if (cSq <= 1e-34 * a * a) {
-                break;
-            }
-        }
-        return Math.PI / (2 * a);
-    }
-
     /** K(m) for 0 &lt;= m &lt; 1. */
     public static double k(double m) {
         double[] o = new double[3];

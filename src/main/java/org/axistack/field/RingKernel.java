@@ -33,7 +33,9 @@ public final class RingKernel {
         double rp = Math.sqrt(rp2);
         double m = 4 * aRing * r / rp2;
         double m1 = rm2 / rp2;
-        return (2 / Math.PI) * EllipticIntegrals.kOnly(m, m1) / rp;
+        double[] ke = new double[3];
+        EllipticIntegrals.kAndE(m, m1, ke);
+        return (2 / Math.PI) * ke[0] / rp;
     }
 
     /**

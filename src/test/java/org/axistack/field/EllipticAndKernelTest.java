@@ -9,20 +9,6 @@ import org.junit.jupiter.api.Test;
 class EllipticAndKernelTest {
 
     /** Reference: Hipparchus LegendreEllipticIntegral.bigK/bigE (a general-purpose library, Carlson forms). */
-    /** The potential kernel's K-only mean must be the very same number as kAndE's K (same arithmetic). */
-    @Test
-    void kOnlyEqualsKFromKAndE() {
-        double[] out = new double[3];
-        for (int k = 0; k <= 2000; k++) {
-            double m1 = Math.pow(10, -14.0 * k / 2000);
-            double m = 1 - m1;
-            EllipticIntegrals.kAndE(m, m1, out);
-            org.assertj.core.api.Assertions.assertThat(EllipticIntegrals.kOnly(m, m1)).isEqualTo(out[0]);
-            EllipticIntegrals.kAndE(m1, m, out);
-            org.assertj.core.api.Assertions.assertThat(EllipticIntegrals.kOnly(m1, m)).isEqualTo(out[0]);
-        }
-    }
-
     @Test
     void ellipticIntegralsMatchHipparchus() {
         double worst = 0;
