@@ -12,8 +12,6 @@ import org.axistack.mesh.Panel;
 import org.axistack.model.Electrode;
 import org.axistack.model.MeshSettings;
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
-import org.ejml.interfaces.linsol.LinearSolverDense;
 
 /**
  * Boundary-element (surface-charge) solver for axially symmetric conductors held at fixed potentials:
@@ -130,27 +128,25 @@ public final class BemSolver {
         }
         // A mirror-symmetric stack first: two half-size systems (a quarter of the work), kept only if the
         // unfolded solution meets the residual in the full system.
-        DMatrixRMaj x = MirrorFold.solve(mesh, a, rhs, RESIDUAL_TOLERANCE,
+        SchurLuSolver.Solution solved = null;
+        DMatrixRMaj folded = MirrorFold.solve(mesh, a, rhs, RESIDUAL_TOLERANCE,
                 f -> progress.update("factoring (mirror-symmetric halves)", 0.7 + 0.25 * f));
-        if (x != null && !(SchurLuSolver.residual(a, x, rhs) <= RESIDUAL_TOLERANCE)) {
-            x = null;
-        }
-        boolean mirrorHalves = x != null;
-        if (x == null && n >= SchurLuSolver.MIN_SIZE) {
-            x = SchurLuSolver.solve(a, rhs, RESIDUAL_TOLERANCE, f -> progress.update("factoring", 0.7 + 0.25 * f));
-        }
-        if (x == null) {
-            // Small systems, or a block elimination that did not meet the residual: one LU of the whole
-            // matrix with partial pivoting (EJML, single core).
-            LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.lu(n);
-            if (!solver.setA(a)) {
-                throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
+        if (folded != null) {
+            double r = SchurLuSolver.residual(a, folded, rhs);
+            if (r <= RESIDUAL_TOLERANCE) {
+                solved = new SchurLuSolver.Solution(folded, r);
             }
-            x = new DMatrixRMaj(n, ne);
-            solver.solve(rhs, x);
         }
-        progress.update("checking residual", 0.95);
-        double residual = SchurLuSolver.residual(a, x, rhs);
+        boolean mirrorHalves = solved != null;
+        if (solved == null) {
+            solved = SchurLuSolver.solveOrPivot(a, rhs, RESIDUAL_TOLERANCE,
+                    f -> progress.update("factoring", 0.7 + 0.25 * f));
+        }
+        if (solved == null) {
+            throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
+        }
+        DMatrixRMaj x = solved.x();
+        double residual = solved.residual();
         if (!(residual < 1e-6)) {
             throw new MeshException("the collocation matrix is singular (residual " + residual
                     + "): two electrodes coincide or overlap; separate them");

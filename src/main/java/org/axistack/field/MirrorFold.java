@@ -5,8 +5,6 @@ import java.util.function.DoublePredicate;
 
 import org.axistack.mesh.BoundaryMesh;
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
-import org.ejml.interfaces.linsol.LinearSolverDense;
 
 /**
  * Solves the collocation system of a stack that is mirror-symmetric about a plane z = z0 (an einzel lens
@@ -160,14 +158,16 @@ final class MirrorFold {
                 bOdd.set(p, c, 0.5 * (bi - bs));
             }
         }
-        DMatrixRMaj xEven = half(even, bEven, tolerance, f -> progress.test(0.5 * f));
-        if (xEven == null) {
+        SchurLuSolver.Solution sEven = SchurLuSolver.solveOrPivot(even, bEven, tolerance, f -> progress.test(0.5 * f));
+        if (sEven == null) {
             return null;
         }
-        DMatrixRMaj xOdd = half(odd, bOdd, tolerance, f -> progress.test(0.5 + 0.5 * f));
-        if (xOdd == null) {
+        SchurLuSolver.Solution sOdd = SchurLuSolver.solveOrPivot(odd, bOdd, tolerance, f -> progress.test(0.5 + 0.5 * f));
+        if (sOdd == null) {
             return null;
         }
+        DMatrixRMaj xEven = sEven.x();
+        DMatrixRMaj xOdd = sOdd.x();
         DMatrixRMaj x = new DMatrixRMaj(n, m);
         for (int p = 0; p < h; p++) {
             int i = rep[p];
@@ -199,22 +199,5 @@ final class MirrorFold {
             }
         }
         return true;
-    }
-
-    private static DMatrixRMaj half(DMatrixRMaj a, DMatrixRMaj b, double tolerance, DoublePredicate progress) {
-        int n = a.numRows;
-        if (n >= SchurLuSolver.MIN_SIZE) {
-            DMatrixRMaj x = SchurLuSolver.solve(a, b, tolerance, progress);
-            if (x != null) {
-                return x;
-            }
-        }
-        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(n);
-        if (!lu.setA(a)) {
-            return null;
-        }
-        DMatrixRMaj x = new DMatrixRMaj(n, b.numCols);
-        lu.solve(b, x);
-        return x;
     }
 }

@@ -11,6 +11,8 @@ import org.ejml.dense.block.MatrixOps_DDRB;
 import org.ejml.dense.block.TriangularSolver_MT_DDRB;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.ejml.dense.row.decomposition.lu.LUDecompositionAlt_DDRM;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.linsol.LinearSolverDense;
 
 /**
  * Solves the dense collocation system A X = B on all cores by recursive block elimination with the
@@ -57,12 +59,37 @@ final class SchurLuSolver {
         this.leaves = leafCount(size);
     }
 
+    /** A solution X of A X = B with its largest residual |A X - B|. */
+    record Solution(DMatrixRMaj x, double residual) {
+    }
+
+    /**
+     * Solves A X = B (A not modified) by this block elimination where it pays and meets {@code tolerance},
+     * else by one EJML LU of the whole matrix with partial pivoting (single core); null when that LU finds A
+     * singular. The one place that chooses between the two.
+     */
+    static Solution solveOrPivot(DMatrixRMaj a, DMatrixRMaj b, double tolerance, DoublePredicate progress) {
+        if (a.numRows >= MIN_SIZE) {
+            Solution s = solve(a, b, tolerance, progress);
+            if (s != null) {
+                return s;
+            }
+        }
+        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(a.numRows);
+        if (!lu.setA(a)) {
+            return null;
+        }
+        DMatrixRMaj x = new DMatrixRMaj(a.numRows, b.numCols);
+        lu.solve(b, x);
+        return new Solution(x, residual(a, x, b));
+    }
+
     /**
      * Solves A X = B, A square (not modified). Returns null when a leaf block is singular or the
      * largest residual |A X - B| exceeds {@code tolerance}. {@code progress} gets the fraction done
      * (0..1) after each leaf; when it returns false the solve stops with a CancellationException.
      */
-    static DMatrixRMaj solve(DMatrixRMaj a, DMatrixRMaj b, double tolerance, DoublePredicate progress) {
+    static Solution solve(DMatrixRMaj a, DMatrixRMaj b, double tolerance, DoublePredicate progress) {
         int n = a.numRows;
         int m = b.numCols;
         // The tiled kernels work on views that start on tile boundaries, so A is padded with an
@@ -90,7 +117,8 @@ final class SchurLuSolver {
                 x.data[i * m + j] = aug.get(i, padded + j);
             }
         }
-        return residual(a, x, b) <= tolerance ? x : null;
+        double r = residual(a, x, b);
+        return r <= tolerance ? new Solution(x, r) : null;
     }
 
     /**

@@ -50,8 +50,9 @@ class SchurLuSolverTest {
                 b.data[i] = rnd.nextDouble() - 0.5;
             }
             DMatrixRMaj keep = a.copy();
-            DMatrixRMaj x = SchurLuSolver.solve(a, b, 1e-10, f -> true);
-            assertThat(x).as("n = %d", n).isNotNull();
+            SchurLuSolver.Solution solved = SchurLuSolver.solve(a, b, 1e-10, f -> true);
+            assertThat(solved).as("n = %d", n).isNotNull();
+            DMatrixRMaj x = solved.x();
             assertThat(a.data).as("A is not modified").isEqualTo(keep.data);
             DMatrixRMaj ref = reference(a, b);
             double worst = 0;
@@ -85,9 +86,9 @@ class SchurLuSolverTest {
         DMatrixRMaj b = new DMatrixRMaj(n, 2);
         b.set(0, 0, 1);
         b.set(n - 1, 1, 1);
-        DMatrixRMaj x = SchurLuSolver.solve(a, b, 1e-10, f -> true);
-        assertThat(x).isNotNull();
-        assertThat(SchurLuSolver.residual(a, x, b)).isLessThan(1e-10);
+        SchurLuSolver.Solution solved = SchurLuSolver.solve(a, b, 1e-10, f -> true);
+        assertThat(solved).isNotNull();
+        assertThat(SchurLuSolver.residual(a, solved.x(), b)).isLessThan(1e-10);
     }
 
     @Test
