@@ -67,46 +67,23 @@ final class BenchCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "Benchmark on %s, %d cores, %d repetitions (medians, wall clock)%n", input.shownAs(),
                 Runtime.getRuntime().availableProcessors(), repeat);
         BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE); // warm-up
-        double[] solve = new double[repeat];
-        FieldSolution sol = null;
-        for (int i = 0; i < repeat; i++) {
-            long t = System.nanoTime();
-            sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE);
-            solve[i] = (System.nanoTime() - t) * 1e-9;
-        }
-        row(out, "field solve (mesh+assembly+factor+solves), " + sol.unknowns() + " unknowns"
-                + (sol.solvedAsMirrorHalves() ? ", mirror halves" : ""), median(solve), 0.5);
+        TimedSolve demo = timeSolve(stack.electrodes(), stack.mesh());
+        FieldSolution sol = demo.last();
+        row(out, "field solve (mesh+assembly+factor+solves), " + demo.describe(), demo.median_s(), 0.5);
         if (stack.mesh().targetElements() != SOLVE_TARGET_UNKNOWNS) {
             // The speed target is stated for about 1500 elements; time that mesh of the same stack too.
-            Stack sized = stack.withMesh(new MeshSettings(SOLVE_TARGET_UNKNOWNS, stack.mesh().edgeLevels()));
-            double[] sizedSolve = new double[repeat];
-            int unknowns = 0;
-            boolean sizedHalves = false;
-            for (int i = 0; i < repeat; i++) {
-                long t = System.nanoTime();
-                FieldSolution f = BemSolver.solve(sized.electrodes(), sized.mesh(), SolveProgress.NONE);
-                sizedSolve[i] = (System.nanoTime() - t) * 1e-9;
-                unknowns = f.unknowns();
-                sizedHalves = f.solvedAsMirrorHalves();
-            }
-            row(out, "same, [mesh] target_elements = " + SOLVE_TARGET_UNKNOWNS + ": " + unknowns + " unknowns"
-                    + (sizedHalves ? ", mirror halves" : ""), median(sizedSolve), 0.5);
+            MeshSettings sized = new MeshSettings(SOLVE_TARGET_UNKNOWNS, stack.mesh().edgeLevels());
+            TimedSolve target = timeSolve(stack.electrodes(), sized);
+            row(out, "same, [mesh] target_elements = " + SOLVE_TARGET_UNKNOWNS + ": " + target.describe(),
+                    target.median_s(), 0.5);
             // The demo is mirror-symmetric and solved as two halves; time the general path too, on the same
             // lens with its last electrode moved 0.5 mm (no mirror), for stacks without the symmetry.
-            java.util.List<org.axistack.model.Electrode> moved = new java.util.ArrayList<>(sized.electrodes());
+            java.util.List<org.axistack.model.Electrode> moved = new java.util.ArrayList<>(stack.electrodes());
             int last = moved.size() - 1;
             moved.set(last, moved.get(last).shifted(0.5e-3));
-            double[] general = new double[repeat];
-            boolean halves = true;
-            for (int i = 0; i < repeat; i++) {
-                long t = System.nanoTime();
-                FieldSolution g = BemSolver.solve(moved, sized.mesh(), SolveProgress.NONE);
-                general[i] = (System.nanoTime() - t) * 1e-9;
-                unknowns = g.unknowns();
-                halves = g.solvedAsMirrorHalves();
-            }
-            row(out, "  general path (last electrode moved 0.5 mm" + (halves ? "" : ", no mirror") + "), " + unknowns
-                    + " unknowns", median(general), Double.NaN);
+            TimedSolve general = timeSolve(moved, sized);
+            row(out, "  general path (last electrode moved 0.5 mm): " + general.describe(), general.median_s(),
+                    Double.NaN);
         }
         long t0 = System.nanoTime();
         BiasedField first = sol.biased();
@@ -233,6 +210,24 @@ final class BenchCommand implements Callable<Integer> {
         org.axistack.tune.BiasSweep.run(sol, stack, name, from, to, 999, stack.beam().objectZ_m(),
                 org.axistack.tune.BiasSweep.Progress.NONE);
         row(out, "1000-point sweep of '" + name + "' (once)", (System.nanoTime() - t) * 1e-9, 5.0);
+    }
+
+    /** Median wall time of {@code repeat} solves of one geometry, and the last solution. */
+    private record TimedSolve(double median_s, FieldSolution last) {
+        String describe() {
+            return last.unknowns() + " unknowns" + (last.solvedAsMirrorHalves() ? ", mirror halves" : ", no mirror");
+        }
+    }
+
+    private TimedSolve timeSolve(java.util.List<org.axistack.model.Electrode> electrodes, MeshSettings mesh) {
+        double[] t = new double[repeat];
+        FieldSolution last = null;
+        for (int i = 0; i < repeat; i++) {
+            long t0 = System.nanoTime();
+            last = BemSolver.solve(electrodes, mesh, SolveProgress.NONE);
+            t[i] = (System.nanoTime() - t0) * 1e-9;
+        }
+        return new TimedSolve(median(t), last);
     }
 
     private static void row(PrintWriter out, String what, double seconds, double target) {
