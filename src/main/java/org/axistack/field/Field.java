@@ -6,8 +6,10 @@ package org.axistack.field;
  */
 public interface Field {
 
-    /** Electric potential at (z, r), V. */
-    double potential_V(double z_m, double r_m);
+    /** Electric potential at (z, r), V (by default from {@link #evaluate}, discarding the field). */
+    default double potential_V(double z_m, double r_m) {
+        return evaluate(z_m, r_m, new double[2]);
+    }
 
     /**
      * Potential and field at (z, r).

@@ -168,12 +168,6 @@ public final class FieldMap implements Field {
     }
 
     @Override
-    public double potential_V(double z_m, double r_m) {
-        double[] f = new double[2];
-        return evaluate(z_m, r_m, f);
-    }
-
-    @Override
     public double evaluate(double z_m, double r_m, double[] out) {
         double s = (z_m - z0) / hz, q = r_m / hr;
         if (!(s >= 0 && s < nz && q < nr)) {

@@ -138,7 +138,7 @@ public final class BiasTuner {
     }
 
     /**
-     * The root in one bracket: n-th order Brent on the scan-accuracy condition, then secant polishing on the
+     * The root in one bracket: n-th order Brent on the scan-accuracy condition, then Newton-secant polishing on the
      * full-accuracy one; null when a reflecting island sits inside the bracket.
      */
     private FocusSolution root(double lo, double hi, double scale, DoubleFunction<FocusProbe.Point> scanEval,

@@ -36,12 +36,6 @@ final class RingChargeField implements Field, AxialField {
     }
 
     @Override
-    public double potential_V(double zz, double r) {
-        double[] out = new double[2];
-        return evaluate(zz, r, out);
-    }
-
-    @Override
     public double evaluate(double zz, double r, double[] out) {
         double phi = 0, ez = 0, er = 0;
         double[] tmp = new double[2];
