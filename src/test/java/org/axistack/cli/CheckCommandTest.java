@@ -9,7 +9,7 @@ class CheckCommandTest {
 
     @Test
     void checkPassesAndPrintsTheTable() {
-        MainTest.Run r = MainTest.run("check");
+        CliRun.Run r = CliRun.run("check");
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("thin disk capacitance", "sphere capacitance", "two-tube lens axial potential",
                 "uniform-field paraxial ray", "Helmholtz-Lagrange f2/f1", "universal beam-spread curve",

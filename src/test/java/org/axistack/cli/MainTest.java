@@ -1,62 +1,55 @@
 package org.axistack.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.axistack.cli.CliRun.run;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.axistack.cli.CliRun.Run;
 import org.axistack.report.SafetyNotice;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 class MainTest {
 
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        StringWriter out = new StringWriter(), err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void helpOnTheToolAndOnEveryCommand() {
         Run top = run("--help");
-        assertThat(top.code).isZero();
-        assertThat(top.out).contains("plan").contains("Exit codes");
+        assertThat(top.code()).isZero();
+        assertThat(top.out()).contains("plan").contains("Exit codes");
         for (String name : Main.commandLine().getSubcommands().keySet()) {
             Run r = run(name, "--help");
-            assertThat(r.code).as(name).isZero();
-            assertThat(r.out).as(name).contains("Usage:");
+            assertThat(r.code()).as(name).isZero();
+            assertThat(r.out()).as(name).contains("Usage:");
         }
-        assertThat(run().code).isZero();
+        assertThat(run().code()).isZero();
     }
 
     @Test
     void setAcceptsNegativeVoltsInBothForms(@TempDir Path dir) {
         Run a = run("plan", "--set", "focus=-140", "--no-check", "-q", "--out", dir.resolve("a").toString());
         Run b = run("plan", "--set=focus=-90", "--no-check", "-q", "--out", dir.resolve("b").toString());
-        assertThat(a.code).as(a.err).isZero();
-        assertThat(b.code).as(b.err).isZero();
-        assertThat(a.out).containsPattern("focus\\s+tube\\s+-140");
-        assertThat(b.out).containsPattern("focus\\s+tube\\s+-90");
-        assertThat(a.err).isEmpty();
+        assertThat(a.code()).as(a.err()).isZero();
+        assertThat(b.code()).as(b.err()).isZero();
+        assertThat(a.out()).containsPattern("focus\\s+tube\\s+-140");
+        assertThat(b.out()).containsPattern("focus\\s+tube\\s+-90");
+        assertThat(a.err()).isEmpty();
     }
 
     @Test
     void badSetAndUnknownOptionsExitTwoWithoutATrace() {
         Run a = run("plan", "--set", "fokus=-1400");
-        assertThat(a.code).isEqualTo(2);
-        assertThat(a.err).contains("did you mean 'focus'?");
+        assertThat(a.code()).isEqualTo(2);
+        assertThat(a.err()).contains("did you mean 'focus'?");
         Run b = run("plan", "--bogus");
-        assertThat(b.code).isEqualTo(2);
-        assertThat(b.err).contains("--bogus").contains("--help");
+        assertThat(b.code()).isEqualTo(2);
+        assertThat(b.err()).contains("--bogus").contains("--help");
         Run c = run("frobnicate");
-        assertThat(c.code).isEqualTo(2);
+        assertThat(c.code()).isEqualTo(2);
         for (Run r : new Run[] {a, b, c}) {
-            assertThat(r.err).doesNotContain("\tat ").doesNotContain("Exception");
+            assertThat(r.err()).doesNotContain("\tat ").doesNotContain("Exception");
         }
     }
 
@@ -64,8 +57,8 @@ class MainTest {
     void outThatIsAFileIsBadUsage(@TempDir Path dir) throws Exception {
         Path f = Files.writeString(dir.resolve("afile"), "x");
         Run r = run("plan", "--out", f.toString());
-        assertThat(r.code).isEqualTo(2);
-        assertThat(r.err).contains("not a folder");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("not a folder");
     }
 
     @picocli.CommandLine.Command(name = "probe")

@@ -2,11 +2,11 @@ package org.axistack.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
+import static org.axistack.cli.CliRun.run;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 
+import org.axistack.cli.CliRun.Run;
 import org.axistack.model.Particle;
 import org.axistack.report.SafetyNotice;
 import org.junit.jupiter.api.Test;
@@ -21,20 +21,13 @@ class OpticsCommandTest {
         return Path.of(OpticsCommandTest.class.getResource("optics-two-tube.toml").toURI()).toString();
     }
 
-    private static MainTest.Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new MainTest.Run(code, out.toString(), err.toString());
-    }
-
     /**
      * JSON keys of interface.md, and Helmholtz-Lagrange f2/f1 = sqrt(U2* / U1*) (physics brief) for the accelerating
      * two-tube lens: protons at 1 keV into a -3 kV tube, U1 = 1000 V, U2 = 4000 V.
      */
     @Test
     void jsonCarriesTheContractKeysAndHelmholtzLagrangeHolds() throws Exception {
-        MainTest.Run r = run("optics", stack(), "--json", "--object-z=-80");
+        Run r = run("optics", stack(), "--json", "--object-z=-80");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode j = new ObjectMapper().readTree(r.out());
         for (String key : new String[] {"object_z_mm", "focal_length_object_mm", "focal_length_image_mm",
@@ -63,7 +56,7 @@ class OpticsCommandTest {
 
     @Test
     void textShowsTheTableAndTheCautions() throws Exception {
-        MainTest.Run r = run("optics", stack());
+        Run r = run("optics", stack());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("focal length f1, f2").contains("principal plane H1, H2")
                 .contains("spherical aberration Cs").contains(SafetyNotice.TITLE);
@@ -71,7 +64,7 @@ class OpticsCommandTest {
 
     @Test
     void reflectionExitsOneAndSaysWhere() throws Exception {
-        MainTest.Run r = run("optics", stack(), "--set", "second=2500", "--json");
+        Run r = run("optics", stack(), "--set", "second=2500", "--json");
         assertThat(r.code()).isEqualTo(1);
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertThat(j.get("reflected").asBoolean()).isTrue();
@@ -81,10 +74,10 @@ class OpticsCommandTest {
 
     @Test
     void objectAfterTheLensIsBadUsage() throws Exception {
-        MainTest.Run r = run("optics", stack(), "--object-z", "55");
+        Run r = run("optics", stack(), "--object-z", "55");
         assertThat(r.code()).isEqualTo(2);
         assertThat(r.err()).contains("--object-z").doesNotContain("\tat ");
-        MainTest.Run missing = run("optics");
+        Run missing = run("optics");
         assertThat(missing.code()).isEqualTo(2);
     }
 
@@ -93,7 +86,7 @@ class OpticsCommandTest {
         String text = java.nio.file.Files.readString(Path.of(stack()))
                 .replace("energy_eV = 1000.0", "energy_eV = 1000.0\nstart_z_mm = 50.0");
         Path file = java.nio.file.Files.writeString(dir.resolve("late-start.toml"), text);
-        MainTest.Run r = run("optics", file.toString());
+        Run r = run("optics", file.toString());
         assertThat(r.code()).isEqualTo(2);
         assertThat(r.err()).contains("late-start.toml").contains("start_z_mm").doesNotContain("internal error");
     }

@@ -20,7 +20,7 @@ class PlanCommandTest {
     @Test
     void demoPlanWritesTheReportAndItsTables() throws IOException {
         Path out = tmp.resolve("demo");
-        MainTest.Run r = MainTest.run("plan", "--no-check", "--out", out.toString());
+        CliRun.Run r = CliRun.run("plan", "--no-check", "--out", out.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("Flood-gun einzel lens", "built-in demo", "IEC 61010-1", "Cardinal elements (lens converging", "Aberrations: Cs =", "Spot-size budget",
                 "Focusing bias", "focus = ", "Supply-stability budget (focus held within +/- 0.1 mm", "mm/V (",
@@ -51,7 +51,7 @@ class PlanCommandTest {
     @Test
     void reflectedBeamExitsOneButStillWritesTheReport() {
         Path out = tmp.resolve("mirror");
-        MainTest.Run r = MainTest.run("plan", "--no-check", "--set", "focus=-400", "--out", out.toString(), "-q");
+        CliRun.Run r = CliRun.run("plan", "--no-check", "--set", "focus=-400", "--out", out.toString(), "-q");
         assertThat(r.code()).as(r.out() + r.err()).isEqualTo(Main.EXIT_PHYSICS);
         assertThat(r.out()).contains("REFLECTED");
         assertThat(r.err()).contains("reflected");
@@ -61,8 +61,8 @@ class PlanCommandTest {
     @Test
     void badOptionsExitTwoWithAFix() throws IOException {
         Path file = Files.writeString(tmp.resolve("a-file"), "x");
-        assertThat(MainTest.run("plan", "--out", file.toString()).code()).isEqualTo(Main.EXIT_INPUT);
-        MainTest.Run r = MainTest.run("plan", "--tune", "nosuch", "--out", tmp.resolve("x").toString());
+        assertThat(CliRun.run("plan", "--out", file.toString()).code()).isEqualTo(Main.EXIT_INPUT);
+        CliRun.Run r = CliRun.run("plan", "--tune", "nosuch", "--out", tmp.resolve("x").toString());
         assertThat(r.code()).isEqualTo(Main.EXIT_INPUT);
         assertThat(r.err()).contains("--tune nosuch", "inlet, focus, outlet");
     }

@@ -1,12 +1,12 @@
 package org.axistack.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.axistack.cli.CliRun.run;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
+import org.axistack.cli.CliRun.Run;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -37,15 +37,6 @@ class SizeCommandTest {
             mesh_elements = 120
             final_mesh_elements = 160
             """;
-
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        StringWriter out = new StringWriter(), err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void writesRunnableStackFilesAndAChart(@TempDir Path dir) throws Exception {

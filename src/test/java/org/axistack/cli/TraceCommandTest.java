@@ -67,7 +67,7 @@ class TraceCommandTest {
     @Test
     void tableHasEveryRayAtEveryPlaneWithAHeaderAndTheTextShowsRadiiAndCautions() throws Exception {
         Path csv = dir.resolve("rays.csv");
-        MainTest.Run r = MainTest.run("trace", stack.toString(), "--planes=-10,0,20", "--count", "12", "--radius", "1",
+        CliRun.Run r = CliRun.run("trace", stack.toString(), "--planes=-10,0,20", "--count", "12", "--radius", "1",
                 "--table", csv.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("rms_radius_mm").contains("12 screen").contains(SafetyNotice.TITLE);
@@ -91,7 +91,7 @@ class TraceCommandTest {
 
     @Test
     void jsonCarriesPlanesStatusesAndRayEnds() throws Exception {
-        MainTest.Run r = MainTest.run("trace", stack.toString(), "--json", "--rays", "fan", "--count", "5",
+        CliRun.Run r = CliRun.run("trace", stack.toString(), "--json", "--rays", "fan", "--count", "5",
                 "--half-angle", "10", "--planes=0,20");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(r.out());
@@ -107,12 +107,12 @@ class TraceCommandTest {
 
     @Test
     void aberrationsAreFittedToTracesAndPrintedBesideTheIntegrals() throws Exception {
-        MainTest.Run t = MainTest.run("trace", stack.toString(), "--count", "4", "--radius", "0.5", "--aberrations",
+        CliRun.Run t = CliRun.run("trace", stack.toString(), "--count", "4", "--radius", "0.5", "--aberrations",
                 "--emittance", "0.001", "--energy-width", "0.5");
         assertThat(t.code()).as(t.err()).isZero();
         assertThat(t.out()).contains("spherical aberration Cs (mm)").contains("Spot budget").contains("optimum: alpha =")
                 .contains(SafetyNotice.TITLE);
-        MainTest.Run r = MainTest.run("trace", stack.toString(), "--count", "4", "--radius", "0.5", "--aberrations",
+        CliRun.Run r = CliRun.run("trace", stack.toString(), "--count", "4", "--radius", "0.5", "--aberrations",
                 "--json");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode ab = new ObjectMapper().readTree(r.out()).get("aberrations");
@@ -125,13 +125,13 @@ class TraceCommandTest {
 
     @Test
     void lostRaysExitOneUnlessAllowed() throws Exception {
-        MainTest.Run r = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
+        CliRun.Run r = CliRun.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
                 "--count", "4");
         assertThat(r.code()).isEqualTo(1);
         assertThat(r.err()).contains("4 of 4 rays did not reach the screen: 4 hit electrodes").contains("--allow-losses");
         assertThat(r.out()).contains("hit 'entry' at z = -18.00").contains("4 hit");
         Path csv = dir.resolve("lost.csv");
-        MainTest.Run ok = MainTest.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
+        CliRun.Run ok = CliRun.run("trace", stack.toString(), "--rays", "ring", "--radius", "3.9", "--slope", "50",
                 "--count", "4", "--allow-losses", "--planes=0,10", "--table", csv.toString());
         assertThat(ok.code()).isZero();
         List<CSVRecord> rows;
@@ -146,7 +146,7 @@ class TraceCommandTest {
 
     @Test
     void aMirrorSaysTheRaysTurnedBack() {
-        MainTest.Run r = MainTest.run("trace", stack.toString(), "--set", "middle=-1000", "--count", "3", "--radius", "0.5");
+        CliRun.Run r = CliRun.run("trace", stack.toString(), "--set", "middle=-1000", "--count", "3", "--radius", "0.5");
         assertThat(r.code()).isEqualTo(1);
         assertThat(r.err()).contains("3 turned back").contains("weaken that bias");
         assertThat(r.out()).contains("ray 1 turned back at z = ");
@@ -170,7 +170,7 @@ class TraceCommandTest {
             System.arraycopy(c, 0, args, 2, c.length - 1);
             args[c.length + 1] = "--table";
             args[c.length + 2] = csv.toString();
-            MainTest.Run r = MainTest.run(args);
+            CliRun.Run r = CliRun.run(args);
             assertThat(r.code()).as(String.join(" ", c)).isEqualTo(2);
             assertThat(r.err()).as(String.join(" ", c)).contains(c[c.length - 1]).doesNotContain("Exception");
             assertThat(csv).doesNotExist();

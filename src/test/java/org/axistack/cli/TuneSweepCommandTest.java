@@ -1,15 +1,15 @@
 package org.axistack.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.axistack.cli.CliRun.run;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.axistack.cli.CliRun.Run;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -24,16 +24,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 class TuneSweepCommandTest {
 
     private static final String DEMO = "lens-library/electron-flood-einzel.toml";
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void tuneJsonHasEverySolutionWithTheContractKeys() throws Exception {

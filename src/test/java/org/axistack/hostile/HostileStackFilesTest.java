@@ -1,16 +1,15 @@
 package org.axistack.hostile;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.axistack.cli.CliRun.run;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
-import org.axistack.cli.Main;
+import org.axistack.cli.CliRun.Run;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
@@ -28,15 +27,6 @@ class HostileStackFilesTest {
             "z_start_mm = -20.0", "z_end_mm = -1.0",
             "[[electrode]]", "name = \"b\"", "shape = \"tube\"", "bias_V = -300.0", "radius_mm = 5.0",
             "z_start_mm = 1.0", "z_end_mm = 20.0", "");
-
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        StringWriter out = new StringWriter(), err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     static void assertRefused(Path file, Path dir) {
         Path out = dir.resolve("out");

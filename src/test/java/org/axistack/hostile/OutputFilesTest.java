@@ -11,6 +11,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import javax.imageio.ImageIO;
+
+import org.axistack.cli.CliRun;
 import org.axistack.trace.BundleTracer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
@@ -90,7 +92,7 @@ class OutputFilesTest {
         Path out = dir.resolve("out");
         Files.createDirectories(out);
         Files.createSymbolicLink(out.resolve("geometry.png"), outside);
-        HostileStackFilesTest.Run r = HostileStackFilesTest.run("plan", "--out", out.toString());
+        CliRun.Run r = CliRun.run("plan", "--out", out.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(Files.readString(outside)).isEqualTo("keep me");
         assertThat(Files.isSymbolicLink(out.resolve("geometry.png"))).isFalse();
@@ -104,11 +106,11 @@ class OutputFilesTest {
         int one = BundleTracer.maxRaysForHeap(1), many = BundleTracer.maxRaysForHeap(100);
         assertThat(one).isPositive().isLessThanOrEqualTo(BundleTracer.MAX_RAYS);
         assertThat(many).isPositive().isLessThan(one);
-        HostileStackFilesTest.Run r = HostileStackFilesTest.run("trace", "--count", "2000000000");
+        CliRun.Run r = CliRun.run("trace", "--count", "2000000000");
         assertThat(r.code()).isEqualTo(2);
         assertThat(r.err()).contains("more than this heap can hold").contains("--count").doesNotContain("solving")
                 .doesNotContain("Exception");
-        HostileStackFilesTest.Run fan = HostileStackFilesTest.run("trace", "--rays", "fan", "--count", "100000",
+        CliRun.Run fan = CliRun.run("trace", "--rays", "fan", "--count", "100000",
                 "--azimuths", "100000");
         assertThat(fan.code()).isEqualTo(2);
         assertThat(fan.err()).contains("--azimuths");

@@ -2,17 +2,16 @@ package org.axistack.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.axistack.cli.CliRun.run;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.io.Writer;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
-import org.axistack.cli.Main;
+import org.axistack.cli.CliRun.Run;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
@@ -67,10 +66,10 @@ class MalformedStackTest {
         Files.write(file, c.bytes());
         Path out = dir.resolve("out");
         Run r = run("plan", file.toString(), "--out", out.toString());
-        assertThat(r.code).as(r.err).isEqualTo(2);
-        assertThat(r.err).startsWith("error: " + file).contains(c.contains()).contains("Fix: ");
-        assertNoTrace(r.err);
-        assertThat(r.out).isEmpty();
+        assertThat(r.code()).as(r.err()).isEqualTo(2);
+        assertThat(r.err()).startsWith("error: " + file).contains(c.contains()).contains("Fix: ");
+        assertNoTrace(r.err());
+        assertThat(r.out()).isEmpty();
         assertThat(out).doesNotExist();
     }
 
@@ -87,32 +86,23 @@ class MalformedStackTest {
         assertThatThrownBy(() -> StackReader.read(file)).isInstanceOfSatisfying(StackInputException.class,
                 e -> assertThat(e.id()).isEqualTo(StackMessage.FILE_TOO_LARGE));
         Run r = run("plan", file.toString());
-        assertThat(r.code).isEqualTo(2);
-        assertThat(r.err).contains("more than the limit of 1048576 bytes");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("more than the limit of 1048576 bytes");
     }
 
     @Test
     void missingFileAndFolderGiveExitTwo(@TempDir Path dir) {
         Run r = run("plan", dir.resolve("nope.toml").toString());
-        assertThat(r.code).isEqualTo(2);
-        assertThat(r.err).contains("nope.toml").contains("does not exist");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("nope.toml").contains("does not exist");
         Run f = run("plan", dir.toString());
-        assertThat(f.code).isEqualTo(2);
-        assertThat(f.err).contains("not a regular file");
-        assertNoTrace(r.err + f.err);
+        assertThat(f.code()).isEqualTo(2);
+        assertThat(f.err()).contains("not a regular file");
+        assertNoTrace(r.err() + f.err());
     }
 
     static void assertNoTrace(String err) {
         assertThat(err).doesNotContain("\tat ").doesNotContain("Exception");
-    }
-
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        StringWriter out = new StringWriter(), err = new StringWriter();
-        int code = Main.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
     }
 
     static List<String> ids() {
