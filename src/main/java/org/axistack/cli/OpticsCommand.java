@@ -12,6 +12,7 @@ import org.axistack.field.BiasedField;
 import org.axistack.io.StackInputException;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
+import org.axistack.optics.AberrationPolynomials;
 import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
@@ -118,6 +119,10 @@ final class OpticsCommand implements Callable<Integer> {
                 out.put("chromatic_aberration_object_side_mm", mm(ab.chromaticObject_m().getAsDouble()));
             }
             out.put("aberration_convention", ab.convention());
+            AberrationPolynomials poly = AberrationPolynomials.of(optics);
+            out.put("spherical_aberration_poly_mm", mmArray(poly.spherical_m()));
+            out.put("chromatic_aberration_poly_mm", mmArray(poly.chromatic_m()));
+            out.put("aberration_poly_convention", poly.convention());
         } else {
             out.put("spherical_aberration_mm", null);
             out.put("chromatic_aberration_mm", null);
@@ -130,6 +135,14 @@ final class OpticsCommand implements Callable<Integer> {
                     + "; change the biases (e.g. with --set) to get a real focus");
         }
         return 0;
+    }
+
+    private static double[] mmArray(double[] m) {
+        double[] out = new double[m.length];
+        for (int i = 0; i < m.length; i++) {
+            out[i] = Units.mToMm(m[i]);
+        }
+        return out;
     }
 
     private static Double mm(double z_m) {
@@ -182,8 +195,22 @@ final class OpticsCommand implements Callable<Integer> {
                     + f(out.get("chromatic_aberration_object_side_mm")) + " mm");
         }
         w.println("  convention: " + out.get("aberration_convention"));
+        if (out.get("spherical_aberration_poly_mm") instanceof double[] cs
+                && out.get("chromatic_aberration_poly_mm") instanceof double[] cc) {
+            w.println("  for any object before the lens: Cs_o = " + polynomial(cs) + " mm; Cc_o = " + polynomial(cc) + " mm");
+            w.println("  (" + out.get("aberration_poly_convention") + ")");
+        }
         w.println();
         w.println(SafetyNotice.text());
+    }
+
+    /** c0 + c1/M + ... with the signs written out. */
+    private static String polynomial(double[] c) {
+        StringBuilder b = new StringBuilder(f(c[0]));
+        for (int k = 1; k < c.length; k++) {
+            b.append(c[k] < 0 ? " - " : " + ").append(f(Math.abs(c[k]))).append(k == 1 ? "/M" : "/M^" + k);
+        }
+        return b.toString();
     }
 
     private static void row(PrintWriter w, String label, Object a, Object b) {

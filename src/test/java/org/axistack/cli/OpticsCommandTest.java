@@ -52,6 +52,23 @@ class OpticsCommandTest {
                 * (j.get("image_z_mm").asDouble() - j.get("focal_point_image_z_mm").asDouble());
         double rhs = -j.get("focal_length_object_mm").asDouble() * j.get("focal_length_image_mm").asDouble();
         assertThat(lhs).isCloseTo(rhs, within(1e-8 * Math.abs(rhs)));
+        // the 1/M polynomials (object side) reproduce the object-side coefficients at this object's magnification
+        JsonNode cs = j.get("spherical_aberration_poly_mm");
+        JsonNode cc = j.get("chromatic_aberration_poly_mm");
+        assertThat(cs.size()).isEqualTo(5);
+        assertThat(cc.size()).isEqualTo(3);
+        assertThat(j.get("reference_plane_object_z_mm").asDouble()).isGreaterThan(-80.0);
+        double inv = 1 / j.get("magnification").asDouble();
+        double csPoly = 0;
+        for (int k = 4; k >= 0; k--) {
+            csPoly = csPoly * inv + cs.get(k).asDouble();
+        }
+        double ccPoly = (cc.get(2).asDouble() * inv + cc.get(1).asDouble()) * inv + cc.get(0).asDouble();
+        double csDirect = j.get("spherical_aberration_object_side_mm").asDouble();
+        double ccDirect = j.get("chromatic_aberration_object_side_mm").asDouble();
+        assertThat(csPoly).isCloseTo(csDirect, within(1e-8 * csDirect));
+        assertThat(ccPoly).isCloseTo(ccDirect, within(1e-8 * ccDirect));
+        assertThat(j.get("aberration_poly_convention").asText()).contains("1/M");
     }
 
     @Test
