@@ -15,6 +15,7 @@ package org.axistack.beam;
 public record BoreClearance(String electrode, double bore_m, double zFrom_m, double zTo_m, double radius_m,
         double zWorst_m, double fill, Status status) {
 
+    /** The verdict on one electrode: clear, near, hit or closed. */
     public enum Status {
         /** Fill below the near-electrode threshold. */
         CLEAR,

@@ -10,6 +10,7 @@ package org.axistack.beam;
  */
 public record EnvelopeWarning(Kind kind, double z_m, String electrode, String message) {
 
+    /** The kind of warning. */
     public enum Kind {
         START_OUTSIDE_BORE, HITS_ELECTRODE, NEAR_ELECTRODE, CLOSES_AXIS, REFLECTED, INTEGRATION_FAILED;
 

@@ -9,6 +9,7 @@ package org.axistack.beam;
  */
 public record Termination(Kind kind, double z_m, String detail) {
 
+    /** The reason the integration stopped. */
     public enum Kind {
         /** The end plane was reached. */
         END_PLANE,

@@ -9,6 +9,7 @@ package org.axistack.beam;
  */
 public record Waist(double z_m, double radius_m, Kind kind) {
 
+    /** How the waist was found. */
     public enum Kind {
         /** R' = 0 located by the integrator's event detection. */
         SMOOTH,

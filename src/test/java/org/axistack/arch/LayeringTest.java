@@ -1,13 +1,25 @@
 package org.axistack.arch;
 
+import static com.tngtech.archunit.base.DescribedPredicate.not;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.belongToAnyOf;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
+import org.axistack.ui.Desktop;
+import org.axistack.ui.LensWindow;
+import org.axistack.ui.RecentFiles;
+import org.axistack.ui.RedrawBench;
 import org.junit.jupiter.api.Test;
 
-/** Physics packages never depend on input/output, the command line, plotting or Swing (architecture.md). */
+/**
+ * The layers of architecture.md: physics packages never depend on input/output, the plan, the command line,
+ * plotting or Swing; the report (charts, HTML) knows nothing of the plan use case, the window or the command
+ * line; the plan knows nothing of the command line or the window; the window knows nothing of the command
+ * line; nothing but the command line depends on it; and from outside the window only its entry points are used.
+ */
 class LayeringTest {
 
     private static final JavaClasses CLASSES = new ClassFileImporter()
@@ -19,7 +31,7 @@ class LayeringTest {
                         "org.axistack.optics..", "org.axistack.trace..", "org.axistack.beam..", "org.axistack.tune..",
                         "org.axistack.size..", "org.axistack.verify..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.axistack.io..", "org.axistack.cli..",
-                        "org.axistack.report..", "org.axistack.ui..", "java.awt..", "javax.swing..", "org.jfree..",
+                        "org.axistack.report..", "org.axistack.ui..", "org.axistack.plan..", "java.awt..", "javax.swing..", "org.jfree..",
                         "picocli..", "org.tomlj..", "com.fasterxml..", "org.apache.commons.csv..")
                 .allowEmptyShould(true)
                 .check(CLASSES);
@@ -38,6 +50,38 @@ class LayeringTest {
         noClasses().that().resideInAPackage("org.axistack.io..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.axistack.cli..", "org.axistack.ui..",
                         "org.axistack.report..", "javax.swing..")
+                .check(CLASSES);
+    }
+
+    @Test
+    void theReportKnowsNothingOfThePlanUseCaseTheWindowOrTheCommandLine() {
+        noClasses().that().resideInAPackage("org.axistack.report..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.axistack.plan..", "org.axistack.cli..",
+                        "org.axistack.ui..", "javax.swing..", "picocli..")
+                .check(CLASSES);
+    }
+
+    @Test
+    void theWindowKnowsNothingOfTheCommandLine() {
+        noClasses().that().resideInAPackage("org.axistack.ui..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.axistack.cli..", "picocli..")
+                .check(CLASSES);
+    }
+
+    @Test
+    void nothingButTheCommandLineDependsOnIt() {
+        noClasses().that().resideOutsideOfPackage("org.axistack.cli..")
+                .should().dependOnClassesThat().resideInAPackage("org.axistack.cli..")
+                .check(CLASSES);
+    }
+
+    @Test
+    void theWindowKeepsItsInsidesToItself() {
+        // the command line starts the window (Desktop, which hands back the LensWindow it opened), names its
+        // recent files (RecentFiles) and times it (RedrawBench); every other type of the window is its own business
+        noClasses().that().resideOutsideOfPackage("org.axistack.ui..")
+                .should().dependOnClassesThat(resideInAPackage("org.axistack.ui..")
+                        .and(not(belongToAnyOf(Desktop.class, LensWindow.class, RecentFiles.class, RedrawBench.class))))
                 .check(CLASSES);
     }
 }

@@ -64,7 +64,7 @@ class TuneSweepCommandTest {
         Run s = run("sweep", DEMO, "--vary", "focus", "--from=-150", "--to", "150", "--steps", "6", "--csv",
                 csv.toString(), "--quiet");
         assertThat(s.code()).as(s.err()).isZero();
-        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).build()
+        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
                 .parse(Files.newBufferedReader(csv)).getRecords();
         assertThat(rows).hasSize(7);
         CSVRecord row = rows.get(1); // -100 V

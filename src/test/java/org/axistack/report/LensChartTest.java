@@ -26,7 +26,7 @@ class LensChartTest {
         LensChart c = LensChart.create(layers);
         assertThat(c.chart().getPlot()).isInstanceOf(CombinedDomainXYPlot.class);
         assertThat(((CombinedDomainXYPlot) c.chart().getPlot()).getSubplots()).hasSize(2);
-        assertThat(c.section().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)).hasSize(2);
+        assertThat((java.util.Collection<?>) c.section().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)).hasSize(2);
         assertThat(iso.size()).isEqualTo(5); // two pieces and one NaN separator
         // the same shared z axis in both plots
         assertThat(c.potential().getDomainAxis()).isSameAs(c.section().getDomainAxis());
@@ -40,6 +40,6 @@ class LensChartTest {
         c.show(new LensChart.Layers(s.withBias("focus", -150), iso, "", LensChart.Lines.none(),
                 LensChart.Lines.none(), "", LensChart.Lines.none(), axis, List.of()));
         assertThat(c.section().getAnnotations().toString()).isNotEmpty();
-        assertThat(c.section().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)).isNull();
+        assertThat((java.util.Collection<?>) c.section().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)).isNull();
     }
 }
