@@ -67,57 +67,8 @@ public final class BemSolver {
         for (int p = 0; p < panels.size(); p++) {
             bounds[p] = PanelQuadrature.Bounds.of(panels.get(p));
         }
-        DMatrixRMaj a = new DMatrixRMaj(n, n);
-        double[] data = a.data;
-        int order = mesh.order();
-        double[] w = mesh.nodeWeights();
-        double[] tau = mesh.nodeTau();
-        AtomicInteger done = new AtomicInteger();
-        AtomicBoolean cancelled = new AtomicBoolean();
-        ThreadLocal<PanelQuadrature.Rule> rules = ThreadLocal.withInitial(PanelQuadrature.Rule::new);
-        IntStream.range(0, n).parallel().forEach(i -> {
-            if (cancelled.get()) {
-                return;
-            }
-            double zi = mesh.nodeZ(i);
-            double ri = mesh.nodeR(i);
-            int pi = i / order;
-            PanelQuadrature.Rule rule = rules.get();
-            double[] basis = new double[order];
-            int row = i * n;
-            for (int p = 0; p < panels.size(); p++) {
-                int base = p * order;
-                if (bounds[p].near(zi, ri)) {
-                    Panel pan = panels.get(p);
-                    quad.build(pan, zi, ri, p == pi ? tau[i % order] : Double.NaN, rule);
-                    double[] c = new double[order];
-                    for (int q = 0; q < rule.size; q++) {
-                        quad.basis(rule.t[q], basis);
-                        double k = 0.5 * rule.r[q] * RingKernel.potential(zi, ri, rule.z[q], rule.r[q]) * rule.w[q];
-                        for (int j = 0; j < order; j++) {
-                            c[j] += basis[j] * k;
-                        }
-                    }
-                    for (int j = 0; j < order; j++) {
-                        data[row + base + j] = c[j] * mesh.nodeJacobian(base + j);
-                    }
-                } else {
-                    for (int j = 0; j < order; j++) {
-                        int col = base + j;
-                        double rj = mesh.nodeR(col);
-                        data[row + col] = 0.5 * w[j] * rj * mesh.nodeJacobian(col)
-                                * RingKernel.potential(zi, ri, mesh.nodeZ(col), rj);
-                    }
-                }
-            }
-            int d = done.incrementAndGet();
-            if (d % 64 == 0 && !progress.update("assembling " + n + " unknowns", 0.7 * d / n)) {
-                cancelled.set(true);
-            }
-        });
-        if (cancelled.get()) {
-            throw new CancellationException("field solve cancelled");
-        }
+        DMatrixRMaj a = assemble(mesh, quad, bounds, RingKernel::potential, "assembling " + n + " unknowns", 0, 0.7,
+                progress);
         double assembleSeconds = (System.nanoTime() - t0) * 1e-9;
         DMatrixRMaj rhs = new DMatrixRMaj(n, ne);
         for (int i = 0; i < n; i++) {
@@ -161,5 +112,74 @@ public final class BemSolver {
         progress.update("done", 1.0);
         return new FieldSolution(electrodes, mesh, quad, bounds, unit, residual, seconds, assembleSeconds,
                 mirrorHalves);
+    }
+
+    /** An azimuthally integrated ring kernel, (1/2pi) Int cos(m u)/|x - x'| du for one harmonic m, 1/m. */
+    @FunctionalInterface
+    interface Kernel {
+        double at(double z, double r, double zRing, double aRing);
+    }
+
+    /**
+     * The collocation matrix of a ring kernel on the mesh (entry i, j: potential at node i of node j's basis
+     * density sigma/eps0 = 1), far panels by their own Gauss nodes, near ones (and the panel through the
+     * node) by the graded rule; parallel over rows; progress from {@code from} to {@code from + span}.
+     */
+    static DMatrixRMaj assemble(BoundaryMesh mesh, PanelQuadrature quad, PanelQuadrature.Bounds[] bounds,
+            Kernel kernel, String stage, double from, double span, SolveProgress progress) {
+        int n = mesh.size();
+        List<Panel> panels = mesh.panels();
+        DMatrixRMaj a = new DMatrixRMaj(n, n);
+        double[] data = a.data;
+        int order = mesh.order();
+        double[] w = mesh.nodeWeights();
+        double[] tau = mesh.nodeTau();
+        AtomicInteger done = new AtomicInteger();
+        AtomicBoolean cancelled = new AtomicBoolean();
+        ThreadLocal<PanelQuadrature.Rule> rules = ThreadLocal.withInitial(PanelQuadrature.Rule::new);
+        IntStream.range(0, n).parallel().forEach(i -> {
+            if (cancelled.get()) {
+                return;
+            }
+            double zi = mesh.nodeZ(i);
+            double ri = mesh.nodeR(i);
+            int pi = i / order;
+            PanelQuadrature.Rule rule = rules.get();
+            double[] basis = new double[order];
+            int row = i * n;
+            for (int p = 0; p < panels.size(); p++) {
+                int base = p * order;
+                if (bounds[p].near(zi, ri)) {
+                    Panel pan = panels.get(p);
+                    quad.build(pan, zi, ri, p == pi ? tau[i % order] : Double.NaN, rule);
+                    double[] c = new double[order];
+                    for (int q = 0; q < rule.size; q++) {
+                        quad.basis(rule.t[q], basis);
+                        double k = 0.5 * rule.r[q] * kernel.at(zi, ri, rule.z[q], rule.r[q]) * rule.w[q];
+                        for (int j = 0; j < order; j++) {
+                            c[j] += basis[j] * k;
+                        }
+                    }
+                    for (int j = 0; j < order; j++) {
+                        data[row + base + j] = c[j] * mesh.nodeJacobian(base + j);
+                    }
+                } else {
+                    for (int j = 0; j < order; j++) {
+                        int col = base + j;
+                        double rj = mesh.nodeR(col);
+                        data[row + col] = 0.5 * w[j] * rj * mesh.nodeJacobian(col)
+                                * kernel.at(zi, ri, mesh.nodeZ(col), rj);
+                    }
+                }
+            }
+            int d = done.incrementAndGet();
+            if (d % 64 == 0 && !progress.update(stage, from + span * d / n)) {
+                cancelled.set(true);
+            }
+        });
+        if (cancelled.get()) {
+            throw new CancellationException("field solve cancelled");
+        }
+        return a;
     }
 }

@@ -182,7 +182,7 @@ final class MirrorFold {
     }
 
     /** Sampled entries (every diagonal and a spread of others) keep the mirror to ENTRY_TOLERANCE. */
-    private static boolean entriesMirror(DMatrixRMaj a, int[] s) {
+    static boolean entriesMirror(DMatrixRMaj a, int[] s) {
         int n = a.numRows;
         double scale = 0;
         for (int i = 0; i < n; i++) {
