@@ -26,6 +26,7 @@ import picocli.CommandLine.Spec;
  * medians against the project's speed targets. Wall-clock times on whatever else this machine is doing.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
+        header = "Times the solve, optics, tuning and rays on this machine.",
         description = "Times the field solve, re-biasing with the axial potential, cardinal elements, tuning, a sweep"
                 + " and a 1000-ray bundle on the built-in demo lens (or STACK), with --window also the desktop window's"
                 + " redraw after a bias change; prints medians against the speed targets.")

@@ -15,10 +15,11 @@ import picocli.CommandLine.Spec;
 
 /** {@code check}: runs the built-in verification cases and prints computed, reference, error, tolerance, source. */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Runs the built-in verification cases on this machine: the field solver, the paraxial optics",
-            "and the envelope against classical closed forms (thin disk, sphere, two-tube Bessel integral,",
-            "uniform-field ray, Helmholtz-Lagrange ratio, universal beam-spread curve). Prints the computed",
-            "and reference values, the error, its tolerance and the source of each reference.",
+        header = "Runs the built-in checks against closed-form answers.",
+        description = {"Runs the built-in verification cases on this machine: the field solver, the paraxial optics"
+            + " and the envelope against classical closed forms (thin disk, sphere, two-tube Bessel integral,"
+            + " uniform-field ray, Helmholtz-Lagrange ratio, universal beam-spread curve). Prints the computed"
+            + " and reference values, the error, its tolerance and the source of each reference.",
             "Exit 1 when any case is outside its tolerance."})
 final class CheckCommand implements Callable<Integer> {
 

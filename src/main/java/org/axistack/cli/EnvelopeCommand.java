@@ -31,13 +31,14 @@ import picocli.CommandLine.Spec;
 
 /** {@code envelope STACK --current A --emittance MM_MRAD [--json]}: beam envelope with emittance and space charge. */
 @Command(name = "envelope", mixinStandardHelpOptions = true,
-        description = {"Beam envelope through the solved lens with emittance and space charge",
-            "(round-beam envelope equation), compared with zero current and with zero",
-            "emittance; bore fill per electrode; optionally the waist against current.",
-            "Emittance: edge (full) unless --rms, geometric at the start plane unless",
-            "--normalised. Without --radius-mm or --source-radius-mm the beam starts",
-            "parallel with a quarter of the narrowest open bore. Without STACK: the",
-            "built-in demo lens. Exit 1 when the beam hits an electrode or reflects."})
+        header = "Beam envelope with emittance and space charge; bore fill.",
+        description = {"Beam envelope through the solved lens with emittance and space charge"
+            + " (round-beam envelope equation), compared with zero current and with zero"
+            + " emittance; bore fill per electrode; optionally the waist against current.",
+            "Emittance: edge (full) unless --rms, geometric at the start plane unless"
+            + " --normalised. Without --radius-mm or --source-radius-mm the beam starts"
+            + " parallel with a quarter of the narrowest open bore. Without STACK: the"
+            + " built-in demo lens.", "Exit 1 when the beam hits an electrode or reflects."})
 final class EnvelopeCommand implements Callable<Integer> {
 
     @Spec

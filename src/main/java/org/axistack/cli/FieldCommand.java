@@ -32,8 +32,9 @@ import picocli.CommandLine.Spec;
  * table, electrode charges, the capacitance matrix and the largest electrode surface fields.
  */
 @Command(name = "field", mixinStandardHelpOptions = true,
-        description = {"Boundary-element field solve: axial potential and field, electrode charges,",
-            "capacitance matrix and the largest electrode surface field (for breakdown checks)."})
+        header = "Solves the field: axial potential, charges, surface field.",
+        description = {"Boundary-element field solve: axial potential and field, electrode charges,"
+            + " capacitance matrix and the largest electrode surface field (for breakdown checks)."})
 final class FieldCommand implements Callable<Integer> {
 
     @Spec

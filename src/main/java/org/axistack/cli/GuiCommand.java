@@ -13,10 +13,11 @@ import picocli.CommandLine.Spec;
 
 /** {@code gui [STACK]}: the desktop window. */
 @Command(name = "gui", mixinStandardHelpOptions = true,
-        description = {"Open the desktop window: the lens cross-section with equipotentials, rays and envelope over",
-            "the axial potential, a slider and number field per electrode bias (redrawn live from the stored",
-            "solution), the optical properties and surface-field margins, the stack text, and exports",
-            "(PNG, SVG, trajectory CSV, the HTML report of the plan command at the biases set in the window).",
+        header = "Opens the desktop window to set biases and watch rays live.",
+        description = {"Open the desktop window: the lens cross-section with equipotentials, rays and envelope over"
+            + " the axial potential, a slider and number field per electrode bias (redrawn live from the stored"
+            + " solution), the optical properties and surface-field margins, the stack text, and exports"
+            + " (PNG, SVG, trajectory CSV, the HTML report of the plan command at the biases set in the window).",
             "Without STACK it opens the built-in demo lens. Needs a display."})
 final class GuiCommand implements Callable<Integer> {
 

@@ -38,8 +38,9 @@ import picocli.CommandLine.Spec;
  * Exit 1 when the beam is reflected or the lens does not focus.
  */
 @Command(name = "optics", mixinStandardHelpOptions = true,
-        description = {"Paraxial optics of a stack: focal points, principal planes and focal lengths on both sides,",
-            "the image of an axial object, and the spherical (Cs) and chromatic (Cc) aberration coefficients.",
+        header = "Paraxial optics: focal points, principal planes, image, Cs and Cc.",
+        description = {"Paraxial optics of a stack: focal points, principal planes and focal lengths on both sides,"
+            + " the image of an axial object, and the spherical (Cs) and chromatic (Cc) aberration coefficients.",
             "Relativistic throughout. Lengths in mm in the stack's z coordinates."})
 final class OpticsCommand implements Callable<Integer> {
 

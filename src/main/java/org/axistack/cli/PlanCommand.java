@@ -31,12 +31,11 @@ import picocli.CommandLine.Spec;
  * lens has no real focus (the report is still written).
  */
 @Command(name = "plan", mixinStandardHelpOptions = true,
-        description = {"The main job: a complete lens plan with its own verification.",
-            "",
-            "Solves STACK (the built-in demo lens when omitted) and reports the cardinal elements, the image of the",
-            "stack's object, Cs and Cc, a spot-size budget, the bias of the strongest electrode that focuses on the",
-            "screen, electrode surface fields against the limits, the beam envelope and warnings; runs the built-in",
-            "verification cases; writes DIR/report.html with figures (PNG, SVG) and CSV tables beside it.",
+        header = "The main job: a complete lens plan with its own verification.",
+        description = {"Solves STACK (the built-in demo lens when omitted) and reports the cardinal elements, the image of the"
+            + " stack's object, Cs and Cc, a spot-size budget, the bias of the strongest electrode that focuses on the"
+            + " screen, electrode surface fields against the limits, the beam envelope and warnings; runs the built-in"
+            + " verification cases; writes DIR/report.html with figures (PNG, SVG) and CSV tables beside it.",
             "Exit 1 when the beam is reflected or the lens does not focus (the report is still written)."})
 final class PlanCommand implements Callable<Integer> {
 

@@ -43,8 +43,9 @@ import picocli.CommandLine.Spec;
  * limit that binds) when no design of the family meets the requirements.
  */
 @Command(name = "size", mixinStandardHelpOptions = true,
-        description = {"Sizes a lens from requirements: searches the family's dimensions (boundary-element solve per",
-            "geometry, focusing bias by the tuner, derivative-free optimiser), writes ready stack files and a chart."})
+        header = "Sizes a lens from requirements and writes ready stack files.",
+        description = {"Sizes a lens from requirements: searches the family's dimensions (boundary-element solve per"
+            + " geometry, focusing bias by the tuner, derivative-free optimiser), writes ready stack files and a chart."})
 final class SizeCommand implements Callable<Integer> {
 
     @Spec

@@ -41,8 +41,9 @@ import picocli.CommandLine.Spec;
  * solve, then re-biasing only.
  */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
-        description = {"Focal lengths, focal points, principal planes, image position and magnification, Cs and Cc",
-            "against the bias of electrode NAME (N steps from V1 to V2), as a table, a CSV file and a PNG chart.",
+        header = "Optics against one electrode's bias: table, CSV and chart.",
+        description = {"Focal lengths, focal points, principal planes, image position and magnification, Cs and Cc"
+            + " against the bias of electrode NAME (N steps from V1 to V2), as a table, a CSV file and a PNG chart.",
             "The field is solved once; every point re-biases the stored unit solutions."})
 final class SweepCommand implements Callable<Integer> {
 

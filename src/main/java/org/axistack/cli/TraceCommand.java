@@ -50,6 +50,7 @@ import picocli.CommandLine.Spec;
  * and bundles through the solved stack, a table of every ray at every plane, beam radius per plane.
  */
 @Command(name = "trace", mixinStandardHelpOptions = true,
+        header = "Traces exact rays to the screen: beam radius, ray tables.",
         description = {"Trace exact (relativistic Lorentz-force) rays through the stack's field: a bundle of rays"
             + " from the beam start to the screen, with the beam radius (rms and max) on chosen planes and, with"
             + " --table, every ray at every plane as CSV for bench alignment. Without STACK it uses the built-in"

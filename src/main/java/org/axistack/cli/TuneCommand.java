@@ -36,9 +36,10 @@ import picocli.CommandLine.Spec;
  * the range focuses there (or, with {@code --strict}, when a solution's surface field is over the limit).
  */
 @Command(name = "tune", mixinStandardHelpOptions = true,
-        description = {"Finds every bias of electrode NAME that images the object (a parallel beam unless the stack",
-            "or --object-z gives one) onto the plane z = Z, with magnification, largest surface field, and how",
-            "far the image moves per volt and per relative energy change (the supply stability the focus needs).",
+        header = "Finds the biases of one electrode that focus on a plane.",
+        description = {"Finds every bias of electrode NAME that images the object (a parallel beam unless the stack"
+            + " or --object-z gives one) onto the plane z = Z, with magnification, largest surface field, and how"
+            + " far the image moves per volt and per relative energy change (the supply stability the focus needs).",
             "With --also-vary NAME2 and --magnification or --focal-length-mm, two biases meet two conditions."})
 final class TuneCommand implements Callable<Integer> {
 
@@ -58,7 +59,7 @@ final class TuneCommand implements Callable<Integer> {
             description = "Axial object position, mm (default: the stack's [beam] object, else at infinity).")
     Double objectZ_mm;
 
-    @Option(names = "--from", paramLabel = "V", description = "Lower end of the bias range, V (default: see --help text).")
+    @Option(names = "--from", paramLabel = "V", description = "Lower end of the bias range, V. Default range: see --to.")
     Double from_V;
 
     @Option(names = "--to", paramLabel = "V", description = "Upper end of the bias range, V. Default range: +/- "

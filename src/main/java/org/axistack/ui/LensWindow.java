@@ -293,7 +293,7 @@ public final class LensWindow extends JFrame {
         cancelEnvelope();
         pending.set(biases);
         LensSession s = session;
-        live.submit(() -> {
+        submit(live, () -> {
             double[] b = pending.getAndSet(null);
             if (b == null) {
                 return;
@@ -340,7 +340,7 @@ public final class LensWindow extends JFrame {
         if (envelopeJob != null) {
             envelopeJob.cancel(true);
         }
-        envelopeJob = slow.submit(() -> {
+        envelopeJob = submit(slow, () -> {
             if (current != v) {
                 return;
             }
@@ -370,6 +370,21 @@ public final class LensWindow extends JFrame {
 
     WindowActions actions() {
         return actions;
+    }
+
+    /**
+     * Hands work to a worker, or drops it once the window has stopped its workers: a slider event or a
+     * queued redraw may still arrive on the event thread after {@link #shutdown()}, and nothing may throw there.
+     */
+    private static java.util.concurrent.Future<?> submit(ExecutorService worker, Runnable job) {
+        if (worker.isShutdown()) {
+            return null;
+        }
+        try {
+            return worker.submit(job);
+        } catch (java.util.concurrent.RejectedExecutionException closing) {
+            return null; // shut down between the check and the submit
+        }
     }
 
     /** Stops the workers (the window is closing). */

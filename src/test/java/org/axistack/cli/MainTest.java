@@ -27,6 +27,44 @@ class MainTest {
         assertThat(run().code()).isZero();
     }
 
+    /**
+     * The command list shows each command's one-line summary whole (a first description line cut
+     * mid-sentence once read "Boundary-element field solve: axial potential and field, electrode charges,"),
+     * and no option's help sends the reader back to the help it is part of. Common practice, no source.
+     */
+    @Test
+    void helpSummariesAreWholeSentencesOnOneLine() {
+        picocli.CommandLine cl = Main.commandLine();
+        String top = run("--help").out();
+        for (var e : cl.getSubcommands().entrySet()) {
+            String[] header = e.getValue().getCommandSpec().usageMessage().header();
+            assertThat(header).as(e.getKey() + " summary").hasSize(1);
+            assertThat(header[0]).as(e.getKey()).endsWith(".").doesNotContain(". ");
+            // the summary sits on the command's own line of the list, unwrapped
+            assertThat(top).as(e.getKey()).containsPattern("(?m)^  " + e.getKey() + " +"
+                    + java.util.regex.Pattern.quote(header[0]) + "$");
+            for (String d : e.getValue().getCommandSpec().usageMessage().description()) {
+                assertThat(d.strip()).as(e.getKey() + " description paragraph").matches("(?s).*[.)]$");
+            }
+            for (var o : e.getValue().getCommandSpec().options()) {
+                assertThat(String.join(" ", o.description())).as(e.getKey() + " " + o.longestName())
+                        .doesNotContain("see --help");
+            }
+        }
+    }
+
+    /** --version prints the version of this build: the project version in pom.xml (read here as text). */
+    @Test
+    void versionIsTheProjectVersion() throws Exception {
+        String pom = Files.readString(Path.of("pom.xml"));
+        java.util.regex.Matcher m = java.util.regex.Pattern
+                .compile("<artifactId>axistack</artifactId>\\s*<version>([^<]+)</version>").matcher(pom);
+        assertThat(m.find()).as("project version in pom.xml").isTrue();
+        Run r = run("--version");
+        assertThat(r.code()).isZero();
+        assertThat(r.out()).startsWith("axistack " + m.group(1) + System.lineSeparator());
+    }
+
     @Test
     void setAcceptsNegativeVoltsInBothForms(@TempDir Path dir) {
         Run a = run("plan", "--set", "focus=-140", "--no-check", "-q", "--out", dir.resolve("a").toString());
