@@ -45,8 +45,4 @@ public record EnvelopeProblem(double zStart_m, double zEnd_m, double radius_m, d
     public EnvelopeProblem withNormalisedEmittance_m_rad(double e) {
         return new EnvelopeProblem(zStart_m, zEnd_m, radius_m, slope_rad, current_A, e);
     }
-
-    public EnvelopeProblem withEnd_m(double z) {
-        return new EnvelopeProblem(zStart_m, z, radius_m, slope_rad, current_A, normalisedEmittance_m_rad);
-    }
 }

@@ -40,15 +40,7 @@ public record EnvelopeSettings(double relativeTolerance, double absoluteToleranc
         return new EnvelopeSettings(1e-12, 1e-12, 400, 1e-6, 1e-6, 0.7);
     }
 
-    public EnvelopeSettings withSamples(int n) {
-        return new EnvelopeSettings(relativeTolerance, absoluteTolerance, n, floorFraction, reflectionFraction, nearFill);
-    }
-
     public EnvelopeSettings withNearFill(double f) {
         return new EnvelopeSettings(relativeTolerance, absoluteTolerance, samples, floorFraction, reflectionFraction, f);
-    }
-
-    public EnvelopeSettings withTolerances(double rel, double abs) {
-        return new EnvelopeSettings(rel, abs, samples, floorFraction, reflectionFraction, nearFill);
     }
 }

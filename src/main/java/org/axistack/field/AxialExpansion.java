@@ -10,9 +10,13 @@ import java.util.stream.IntStream;
  * order fitted separately from its exact values, so no accuracy is lost to differentiation), for fast
  * evaluation by Clenshaw's recurrence (e.g. W. H. Press et al., Numerical Recipes, 3rd ed., sec. 5.8).
  * Interval lengths follow the distance from the axis to the nearest charge, so each expansion is analytic
- * well beyond its interval; intervals are split until the expansion matches the exact Legendre-form sum at
- * tail of every expansion is within {@link #TOLERANCE} of the unit bias's scale (the test suite checks
- * the result against the exact sum everywhere). Re-biasing combines the coefficients linearly.
+ * well beyond its interval; an interval is halved (up to three times) until the tail of its expansion (the sum of
+ * the last three coefficients) is within {@link #TOLERANCE} x 4^order of that order's largest coefficient over
+ * the range, for every unit bias. Where that does not happen, and
+ * where an electrode comes closer to the axis than {@link #EXACT_FRACTION} of the range, the exact ring sum
+ * is used instead (the test suite checks the result against the exact sum everywhere). Re-biasing combines
+ * the coefficients linearly. Built in a fork-join pool of its own, so it may be first used from any thread,
+ * including a task of the common pool.
  */
 final class AxialExpansion {
 

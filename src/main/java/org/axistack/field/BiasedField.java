@@ -9,8 +9,9 @@ import org.axistack.model.Codata2018;
 /**
  * The field of a solved stack at one set of biases: potential and field anywhere by superposing the
  * rings of the surface charge (far panels by their Gauss nodes, near panels by the graded rule of
- * {@link PanelQuadrature}), the axial potential and its derivatives from the Legendre form, electrode
- * charges and surface fields. Immutable and thread-safe.
+ * {@link PanelQuadrature}), the axial potential and its derivatives from the solution's piecewise Chebyshev
+ * expansion (the exact ring sums, derivatives of 1/rho by the Legendre recurrence, where the expansion does not
+ * reach), electrode charges and surface fields. Immutable and thread-safe.
  */
 public final class BiasedField implements Field, AxialField {
 

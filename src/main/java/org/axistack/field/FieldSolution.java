@@ -113,16 +113,17 @@ public final class FieldSolution {
         return residual;
     }
 
-    /** Wall-clock seconds for mesh, assembly, factorisation and unit solves. */
     /** Whether the stack was found mirror-symmetric and solved as two half-size systems. */
     public boolean solvedAsMirrorHalves() {
         return mirrorHalves;
     }
 
+    /** Wall-clock seconds for mesh, assembly, factorisation and unit solves. */
     public double solveSeconds() {
         return solveSeconds;
     }
 
+    /** Wall-clock seconds of the matrix assembly alone (part of {@link #solveSeconds()}). */
     public double assembleSeconds() {
         return assembleSeconds;
     }

@@ -43,8 +43,4 @@ public record Beam(Particle particle, double energy_eV, OptionalDouble startZ_m,
     public Beam withObjectZ_m(OptionalDouble newObjectZ_m) {
         return new Beam(particle, energy_eV, startZ_m, newObjectZ_m);
     }
-
-    public Beam withStartZ_m(OptionalDouble newStartZ_m) {
-        return new Beam(particle, energy_eV, newStartZ_m, objectZ_m);
-    }
 }

@@ -109,10 +109,6 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         return new Stack(title, beam, electrodes, screenZ_m, mesh, newLimits);
     }
 
-    public Stack withScreenZ_m(OptionalDouble z) {
-        return new Stack(title, beam, electrodes, z, mesh, limits);
-    }
-
     /**
      * The stack with every length multiplied by k (&gt; 0): electrodes, beam start and object points, screen.
      * Mesh settings (element counts and edge levels) are kept, so the mesh scales with the geometry.

@@ -211,8 +211,4 @@ public final class HtmlReport {
     static String field(double v_per_m, SurfaceFieldCheck c) {
         return (c.warning() ? "!" : "") + Html.g(Units.vPerMToVPerMm(v_per_m));
     }
-
-    static List<String> cardinalRow(String what, double a, double b) {
-        return List.of(what, mm(a), mm(b));
-    }
 }

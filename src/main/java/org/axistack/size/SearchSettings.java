@@ -21,10 +21,6 @@ public record SearchSettings(int evaluations, int meshElements, int finalElement
         return new SearchSettings(30, 250, 600, 16, Runtime.getRuntime().availableProcessors());
     }
 
-    public SearchSettings withEvaluations(int n) {
-        return new SearchSettings(n, meshElements, finalElements, biasSamples, threads);
-    }
-
     public SearchSettings withMesh(int coarse, int fine) {
         return new SearchSettings(evaluations, coarse, fine, biasSamples, threads);
     }

@@ -35,8 +35,4 @@ public record TraceSettings(double relativeTolerance, int maxEvaluations, double
     public TraceSettings withRecordPath(boolean record) {
         return new TraceSettings(relativeTolerance, maxEvaluations, checkFraction, record);
     }
-
-    public TraceSettings withMaxEvaluations(int n) {
-        return new TraceSettings(relativeTolerance, n, checkFraction, recordPath);
-    }
 }

@@ -60,10 +60,6 @@ public final class Tracer {
         return settings;
     }
 
-    public Tracer withSettings(TraceSettings newSettings) {
-        return new Tracer(field, geometry, newSettings);
-    }
-
     private static String mm(double z_m) {
         return Fmt.mm(z_m);
     }

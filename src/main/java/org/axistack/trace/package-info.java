@@ -14,10 +14,10 @@
  * slow boundary-element field, each with a measured or stated error: {@link
  * org.axistack.trace.AxialTable} (axial derivatives tabulated, Hermite-interpolated), {@link
  * org.axistack.trace.NearAxisField} (the near-axis power series to r^6, first omitted term as the
- * estimate), {@link org.axistack.trace.HybridField} (series where its estimate is below a tolerance,
- * direct field elsewhere) and {@link org.axistack.trace.FieldMap} (a bicubic Hermite map of the
- * difference between the field and the series; direct field near electrodes). The trace command uses
- * table + series + map; {@code --exact} uses the direct field.
+ * estimate) and {@link org.axistack.trace.FieldMap} (a bicubic Hermite map of the difference between the
+ * field and the series; direct field near electrodes). The trace command uses table + series + map;
+ * {@code --exact} uses the direct field. (The tests also use a series-or-direct switch, HybridField, kept in
+ * the test tree.)
  *
  * <p>Ray sets ({@link org.axistack.trace.RaySets}, {@link org.axistack.trace.RaySet}) are traced in
  * parallel by {@link org.axistack.trace.BundleTracer} with progress and cancellation ({@link
