@@ -61,7 +61,8 @@ final class OpticsCommand implements Callable<Integer> {
     public Integer call() throws StackInputException {
         Stack stack = input.load(spec.commandLine());
         PrintWriter err = spec.commandLine().getErr();
-        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, json)).biased();
+        org.axistack.field.SolveProgress progress = SolveReporter.to(err, json);
+        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), progress).biased();
         OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("stack", input.shownAs());
@@ -129,6 +130,7 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("chromatic_aberration_mm", null);
             out.put("aberration_convention", "undefined for an afocal lens");
         }
+        DeflectionOutput.put(out, stack, field, optics, progress);
         print(out);
         if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
             throw new OutcomeException("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
@@ -201,6 +203,7 @@ final class OpticsCommand implements Callable<Integer> {
             w.println("  for any object before the lens: Cs_o = " + polynomial(cs) + " mm; Cc_o = " + polynomial(cc) + " mm");
             w.println("  (" + out.get("aberration_poly_convention") + ")");
         }
+        DeflectionOutput.print(w, out);
         w.println();
         w.println(SafetyNotice.text());
     }

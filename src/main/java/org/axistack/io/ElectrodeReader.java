@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.Set;
 import org.axistack.model.Contour;
 import org.axistack.model.Electrode;
+import org.axistack.model.Sectors;
 import org.axistack.model.Segment;
 import org.axistack.model.ZR;
 import org.tomlj.TomlArray;
@@ -17,7 +18,11 @@ import org.tomlj.TomlArray;
 /** Maps one [[electrode]] table to an {@link Electrode}, converting millimetres to metres. */
 final class ElectrodeReader {
 
-    static final List<String> COMMON = List.of("name", "shape", "bias_V");
+    static final List<String> COMMON = List.of("name", "shape", "bias_V", "sectors", "sector_biases_V",
+            "split_rotation_deg", "slit_width_mm", "deflection_x_V", "deflection_y_V");
+    /** Keys that only a split electrode (sectors = N) takes. */
+    static final List<String> SECTOR_KEYS = List.of("sector_biases_V", "split_rotation_deg", "slit_width_mm",
+            "deflection_x_V", "deflection_y_V");
     /** Shape keyword to its own keys (besides the common ones); order is the order of the docs. */
     static final Map<String, List<String>> SHAPE_KEYS = new LinkedHashMap<>();
 
@@ -55,7 +60,21 @@ final class ElectrodeReader {
             }
         }
         t.rejectUnknown(allowed);
-        double bias = t.requireNumber("bias_V", "V", -Limits.MAX_BIAS_V, Limits.MAX_BIAS_V, "-1400.0");
+        for (String k : SECTOR_KEYS) {
+            if (t.has(k) && !t.has("sectors")) {
+                throw t.error(StackMessage.SECTOR_KEY_WITHOUT_SECTORS, k, Map.of("key", k));
+            }
+        }
+        if (t.has("sector_biases_V")) {
+            for (String k : List.of("bias_V", "deflection_x_V", "deflection_y_V")) {
+                if (t.has(k)) {
+                    throw t.error(StackMessage.CONFLICTING_SECTOR_KEYS, k, Map.of("first", "sector_biases_V", "second", k));
+                }
+            }
+        }
+        // a split electrode given by its sector biases: its round bias (their mean) is set by the Stack
+        double bias = t.has("sector_biases_V") ? 0
+                : t.requireNumber("bias_V", "V", -Limits.MAX_BIAS_V, Limits.MAX_BIAS_V, "-1400.0");
         try {
             return switch (shape) {
                 case "tube" -> tube(t, name, bias);
@@ -68,6 +87,51 @@ final class ElectrodeReader {
         } catch (IllegalArgumentException e) {
             throw t.error(StackMessage.MODEL_REJECTED, null, Map.of("what", shape, "detail", e.getMessage()));
         }
+    }
+
+    /**
+     * The sectors of a split electrode (null when the table has no sectors key): sector_biases_V, or bias_V with
+     * deflection_x_V / deflection_y_V; split_rotation_deg and slit_width_mm optional.
+     */
+    static Sectors sectors(TableFields t, Electrode e) throws StackInputException {
+        if (!t.has("sectors")) {
+            return null;
+        }
+        int n = (int) t.requireInteger("sectors", Sectors.MIN_COUNT, Sectors.MAX_COUNT, "4");
+        double minR = e.contour().minR_m();
+        if (!(minR > 0)) {
+            throw t.error(StackMessage.SPLIT_ON_AXIS, "sectors", Map.of("name", e.name()));
+        }
+        double rot = Math.toRadians(t.has("split_rotation_deg")
+                ? t.requireNumber("split_rotation_deg", "deg", -360, 360, "45.0") : 0);
+        double slit = Units.mmToM(t.thickness("slit_width_mm", "0.2"));
+        double arc = 2 * Math.PI * minR / n;
+        if (slit >= arc) {
+            throw t.error(StackMessage.SLIT_TOO_WIDE, "slit_width_mm",
+                    Map.of("slit", fmt(Units.mToMm(slit)), "arc", fmt(Units.mToMm(arc))));
+        }
+        if (!t.has("sector_biases_V")) {
+            double dx = t.has("deflection_x_V")
+                    ? t.requireNumber("deflection_x_V", "V", -Limits.MAX_BIAS_V, Limits.MAX_BIAS_V, "25.0") : 0;
+            double dy = t.has("deflection_y_V")
+                    ? t.requireNumber("deflection_y_V", "V", -Limits.MAX_BIAS_V, Limits.MAX_BIAS_V, "-10.0") : 0;
+            return Sectors.fromDifferentials(n, rot, slit, e.bias_V(), dx, dy);
+        }
+        String key = "sector_biases_V";
+        Object v = t.table().get(List.of(key));
+        if (!(v instanceof TomlArray arr)) {
+            throw t.error(StackMessage.WRONG_TYPE, key, Map.of("expected", "an array of numbers", "found",
+                    TableFields.typeName(v), "example", "sector_biases_V = [120.0, 80.0, 120.0, 80.0]"));
+        }
+        if (arr.size() != n) {
+            throw t.error(StackMessage.SECTOR_BIAS_COUNT, key, Map.of("count", arr.size(), "sectors", n));
+        }
+        List<Double> biases = new ArrayList<>();
+        for (int i = 0; i < arr.size(); i++) {
+            double x = t.toNumber(arr.get(i), key, "[120.0, 80.0, 120.0, 80.0]", t.line(key));
+            biases.add(t.checkRange(x, key, "V", -Limits.MAX_BIAS_V, Limits.MAX_BIAS_V, "120.0", t.line(key)));
+        }
+        return new Sectors(n, rot, slit, biases);
     }
 
     private static Electrode tube(TableFields t, String name, double bias) throws StackInputException {

@@ -24,6 +24,7 @@ import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
 import org.axistack.model.MeshSettings;
 import org.axistack.model.Particle;
+import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 import org.axistack.model.SurfaceFieldLimits;
 import org.tomlj.Toml;
@@ -204,7 +205,8 @@ public final class StackReader {
             throw new StackInputException(StackMessage.MISSING_BEAM, source, 0, null, null, Map.of());
         }
         Beam beam = beam(new TableFields(source, beamTable, "[beam]", lineOf(toml, "beam")));
-        List<Electrode> electrodes = electrodes(toml, top, text);
+        Map<String, Sectors> sectors = new LinkedHashMap<>();
+        List<Electrode> electrodes = electrodes(toml, top, text, sectors);
 
         OptionalDouble screen = OptionalDouble.empty();
         TomlTable screenTable = table(top, "screen", false, "[screen]");
@@ -229,7 +231,7 @@ public final class StackReader {
         if (limTable != null) {
             limits = limits(new TableFields(source, limTable, "[limits]", lineOf(toml, "limits")));
         }
-        return new Stack(title == null ? "" : title, beam, electrodes, screen, mesh, limits);
+        return new Stack(title == null ? "" : title, beam, electrodes, screen, mesh, limits, sectors);
     }
 
     static TomlTable table(TableFields top, String key, boolean required, String label)
@@ -319,8 +321,8 @@ public final class StackReader {
         return l.checkRange(x, key, "V/mm", 0, Limits.MAX_FIELD_V_PER_MM, example, l.line(key));
     }
 
-    private static List<Electrode> electrodes(TomlParseResult toml, TableFields top, String text)
-            throws StackInputException {
+    private static List<Electrode> electrodes(TomlParseResult toml, TableFields top, String text,
+            Map<String, Sectors> sectors) throws StackInputException {
         String source = top.source();
         Object v = toml.get(List.of("electrode"));
         if (v == null) {
@@ -354,6 +356,11 @@ public final class StackReader {
             int line = arr.inputPositionOf(i) == null ? 0 : arr.inputPositionOf(i).line();
             TableFields t = new TableFields(source, arr.getTable(i), "[[electrode]]", line).withText(text);
             Electrode e = ElectrodeReader.read(t);
+            Sectors sec = ElectrodeReader.sectors(t, e);
+            if (sec != null) {
+                e = e.withBias_V(sec.common_V());
+                sectors.put(e.name(), sec);
+            }
             Integer other = seen.putIfAbsent(e.name(), line);
             if (other != null) {
                 throw t.error(StackMessage.DUPLICATE_NAME, "name", Map.of("name", e.name(), "other", other));

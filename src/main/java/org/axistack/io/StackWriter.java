@@ -10,6 +10,7 @@ import org.axistack.model.Electrode;
 import org.axistack.model.MeshSettings;
 import org.axistack.model.Particle;
 import org.axistack.model.Segment;
+import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 import org.axistack.model.SurfaceFieldLimits;
 import org.axistack.model.ZR;
@@ -39,7 +40,12 @@ public final class StackWriter {
             sb.append("\n[[electrode]]\n");
             sb.append("name = ").append(quote(e.name())).append('\n');
             sb.append("shape = ").append(quote(e.shape())).append('\n');
-            sb.append("bias_V = ").append(num(e.bias_V())).append('\n');
+            Sectors sec = s.sectors().get(e.name());
+            if (sec == null) {
+                sb.append("bias_V = ").append(num(e.bias_V())).append('\n');
+            } else {
+                sectors(sb, sec);
+            }
             electrode(sb, e);
         }
         if (s.screenZ_m().isPresent()) {
@@ -131,6 +137,21 @@ public final class StackWriter {
     }
 
     /** A TOML float with 15 significant digits. */
+    private static void sectors(StringBuilder sb, Sectors sec) {
+        sb.append("sectors = ").append(sec.count()).append('\n');
+        sb.append("sector_biases_V = [");
+        for (int i = 0; i < sec.count(); i++) {
+            sb.append(i == 0 ? "" : ", ").append(num(sec.biases_V().get(i)));
+        }
+        sb.append("]\n");
+        if (sec.rotation_rad() != 0) {
+            sb.append("split_rotation_deg = ").append(num(Math.toDegrees(sec.rotation_rad()))).append('\n');
+        }
+        if (sec.slitWidth_m() != 0) {
+            sb.append("slit_width_mm = ").append(mm(sec.slitWidth_m())).append('\n');
+        }
+    }
+
     static String num(double x) {
         if (x == 0) {
             return "0.0";

@@ -16,9 +16,11 @@ import java.util.Set;
  * @param screenZ_m  optional observation plane
  * @param mesh       boundary-element mesh settings
  * @param limits     surface-field limits for breakdown warnings
+ * @param sectors    split electrodes by name (empty: every electrode round); a split electrode's bias_V is the
+ *                   mean of its sector biases (set here), its round part
  */
 public record Stack(String title, Beam beam, List<Electrode> electrodes, OptionalDouble screenZ_m,
-        MeshSettings mesh, SurfaceFieldLimits limits) {
+        MeshSettings mesh, SurfaceFieldLimits limits, Map<String, Sectors> sectors) {
 
     public Stack {
         title = title == null ? "" : title;
@@ -38,10 +40,40 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         screenZ_m = screenZ_m == null ? OptionalDouble.empty() : screenZ_m;
         mesh = mesh == null ? MeshSettings.defaults() : mesh;
         limits = limits == null ? SurfaceFieldLimits.defaults() : limits;
+        sectors = sectors == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sectors));
+        if (!sectors.isEmpty()) {
+            List<Electrode> list = new ArrayList<>();
+            for (Electrode e : electrodes) {
+                Sectors sec = sectors.get(e.name());
+                if (sec != null && e.contour().minR_m() <= 0) {
+                    throw new IllegalArgumentException("split electrode '" + e.name() + "' reaches the axis");
+                }
+                list.add(sec == null ? e : e.withBias_V(sec.common_V()));
+            }
+            for (String n : sectors.keySet()) {
+                if (!names.contains(n)) {
+                    throw new IllegalArgumentException("sectors for unknown electrode '" + n + "'");
+                }
+            }
+            electrodes = List.copyOf(list);
+        }
+    }
+
+    public Stack(String title, Beam beam, List<Electrode> electrodes, OptionalDouble screenZ_m, MeshSettings mesh,
+            SurfaceFieldLimits limits) {
+        this(title, beam, electrodes, screenZ_m, mesh, limits, Map.of());
     }
 
     public Stack(String title, Beam beam, List<Electrode> electrodes) {
         this(title, beam, electrodes, OptionalDouble.empty(), MeshSettings.defaults(), SurfaceFieldLimits.defaults());
+    }
+
+    /** The stack with electrode {@code name} split (or its sectors replaced). */
+    public Stack withSectors(String name, Sectors s) {
+        electrode(name);
+        Map<String, Sectors> m = new java.util.LinkedHashMap<>(sectors);
+        m.put(name, s);
+        return new Stack(title, beam, electrodes, screenZ_m, mesh, limits, m);
     }
 
     public int indexOf(String electrodeName) {
@@ -83,7 +115,7 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         for (String n : biases_V.keySet()) {
             electrode(n);
         }
-        return new Stack(title, beam, list, screenZ_m, mesh, limits);
+        return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list));
     }
 
     public Stack withBiases(double[] biases_V) {
@@ -94,19 +126,19 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         for (int i = 0; i < biases_V.length; i++) {
             list.add(electrodes.get(i).withBias_V(biases_V[i]));
         }
-        return new Stack(title, beam, list, screenZ_m, mesh, limits);
+        return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list));
     }
 
     public Stack withBeam(Beam newBeam) {
-        return new Stack(title, newBeam, electrodes, screenZ_m, mesh, limits);
+        return new Stack(title, newBeam, electrodes, screenZ_m, mesh, limits, sectors);
     }
 
     public Stack withMesh(MeshSettings newMesh) {
-        return new Stack(title, beam, electrodes, screenZ_m, newMesh, limits);
+        return new Stack(title, beam, electrodes, screenZ_m, newMesh, limits, sectors);
     }
 
     public Stack withLimits(SurfaceFieldLimits newLimits) {
-        return new Stack(title, beam, electrodes, screenZ_m, mesh, newLimits);
+        return new Stack(title, beam, electrodes, screenZ_m, mesh, newLimits, sectors);
     }
 
     /**
@@ -139,7 +171,34 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
     private Stack transformed(java.util.function.UnaryOperator<Electrode> e, java.util.function.DoubleUnaryOperator z) {
         List<Electrode> list = electrodes.stream().map(e).toList();
         Beam b = new Beam(beam.particle(), beam.energy_eV(), map(beam.startZ_m(), z), map(beam.objectZ_m(), z));
-        return new Stack(title, b, list, map(screenZ_m, z), mesh, limits);
+        double k = Math.abs(z.applyAsDouble(1) - z.applyAsDouble(0));
+        Map<String, Sectors> m = new java.util.LinkedHashMap<>();
+        sectors.forEach((n, s) -> m.put(n, s.scaled(k)));
+        return new Stack(title, b, list, map(screenZ_m, z), mesh, limits, m);
+    }
+
+    /**
+     * Sectors following new electrode biases: a split electrode whose bias changed has every sector moved by the
+     * change (differentials kept).
+     */
+    private Map<String, Sectors> shiftedSectors(List<Electrode> newElectrodes) {
+        if (sectors.isEmpty()) {
+            return sectors;
+        }
+        Map<String, Sectors> m = new java.util.LinkedHashMap<>();
+        for (Electrode e : newElectrodes) {
+            Sectors s = sectors.get(e.name());
+            if (s != null) {
+                double dv = e.bias_V() - s.common_V();
+                m.put(e.name(), dv == 0 ? s : s.shifted_V(dv));
+            }
+        }
+        return m;
+    }
+
+    /** Whether any electrode is split into sectors. */
+    public boolean hasSectors() {
+        return !sectors.isEmpty();
     }
 
     private static OptionalDouble map(OptionalDouble v, java.util.function.DoubleUnaryOperator f) {

@@ -134,6 +134,21 @@ final class MalformedStacks {
         add(c, "ring wire thicker than ring", replaceB("shape = \"ring\"\nbias_V = 1.0\nz_mm = 5.0\nradius_mm = 2.0\nwire_radius_mm = 3.0"),
                 WIRE_TOO_THICK, 20, "wire_radius_mm", "thinner wire");
         add(c, "disk radius missing", replaceB("shape = \"disk\"\nbias_V = 1.0\nz_mm = 5.0"), MISSING_KEY, 14, "radius_mm", "radius_mm");
+        // split electrodes (sectors)
+        add(c, "deflection without sectors", replaceB("shape = \"tube\"\nbias_V = 1.0\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\ndeflection_x_V = 3.0"),
+                SECTOR_KEY_WITHOUT_SECTORS, 21, "deflection_x_V", "sectors = N");
+        add(c, "bias and sector biases", replaceB("shape = \"tube\"\nbias_V = 1.0\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\nsectors = 4\nsector_biases_V = [1.0, 2.0, 3.0, 4.0]"),
+                CONFLICTING_SECTOR_KEYS, 17, "bias_V", "cannot be given together");
+        add(c, "too few sector biases", replaceB("shape = \"tube\"\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\nsectors = 4\nsector_biases_V = [1.0, 2.0, 3.0]"),
+                SECTOR_BIAS_COUNT, 21, "sector_biases_V", "has 3 values but the electrode has 4 sectors");
+        add(c, "split disk on the axis", replaceB("shape = \"disk\"\nbias_V = 1.0\nz_mm = 25.0\nradius_mm = 8.0\nsectors = 2"),
+                SPLIT_ON_AXIS, 20, "sectors", "reaches the axis");
+        add(c, "slit wider than a sector", replaceB("shape = \"tube\"\nbias_V = 1.0\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\nsectors = 16\nslit_width_mm = 2.5"),
+                SLIT_TOO_WIDE, 22, "slit_width_mm", "narrower than 1.963");
+        add(c, "too many sectors", replaceB("shape = \"tube\"\nbias_V = 1.0\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\nsectors = 17"),
+                OUT_OF_RANGE, 21, "sectors", "17");
+        add(c, "sector bias not a number", replaceB("shape = \"tube\"\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\nsectors = 2\nsector_biases_V = [1.0, \"x\"]"),
+                WRONG_TYPE, 21, "sector_biases_V", "number");
         // geometry between electrodes
         add(c, "thick tubes overlapping", edit("z_end_mm = -1.0", "z_end_mm = 5.0\nwall_mm = 1.0").replace("z_end_mm = 20.0", "z_end_mm = 20.0\nwall_mm = 1.0"),
                 OVERLAP, 6, null, "overlap");

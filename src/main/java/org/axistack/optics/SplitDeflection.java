@@ -1,0 +1,100 @@
+package org.axistack.optics;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.function.DoubleUnaryOperator;
+
+import org.axistack.field.SectorField;
+import org.axistack.model.Sectors;
+
+/**
+ * Deflection of the central ray by the split electrodes of a stack, to first order in the sector biases: the
+ * unit responses of {@link CentralRayDeflection} to each split electrode's dipole function, recombined for any
+ * sector biases through their harmonic-1 coefficients (so re-biasing costs a few multiplications per sector).
+ * Only the dipole harmonic enters at first order; the quadrupole and higher harmonics act on rays off the axis
+ * (second and higher order in the offset). Immutable.
+ */
+public final class SplitDeflection {
+
+    /**
+     * Offset at a plane per volt of an electrode's x and y differential bias (the patterns cos(theta_s) and
+     * sin(theta_s) of {@link Sectors#fromDifferentials}), m/V.
+     */
+    public record PerVolt(int electrode, double xPerVx_m, double yPerVx_m, double xPerVy_m, double yPerVy_m) {
+    }
+
+    private final List<Integer> electrodes;
+    private final Map<Integer, Sectors> layout;
+    private final CentralRayDeflection response;
+
+    private SplitDeflection(List<Integer> electrodes, Map<Integer, Sectors> layout, CentralRayDeflection response) {
+        this.electrodes = electrodes;
+        this.layout = layout;
+        this.response = response;
+    }
+
+    /**
+     * Integrates the unit responses from zStart (central ray on the axis and parallel to it) to the planes.
+     *
+     * @param field  the solved harmonics of the split electrodes (at least m = 1)
+     * @param u      acceleration potential of the round field at the stack's biases
+     * @param planes ascending planes after zStart, m
+     */
+    public static SplitDeflection of(SectorField field, AccelerationPotential u, double zStart, double[] planes) {
+        List<Integer> es = new ArrayList<>(field.split().keySet());
+        List<DoubleUnaryOperator> dip = new ArrayList<>();
+        for (int e : es) {
+            dip.add(z -> field.unitDipole_V_per_m(e, z));
+        }
+        return new SplitDeflection(List.copyOf(es), field.split(), CentralRayDeflection.of(u, zStart, planes, dip));
+    }
+
+    /** Split electrode indices, in the order of the responses. */
+    public List<Integer> electrodes() {
+        return electrodes;
+    }
+
+    public double[] planes_m() {
+        return response.planes_m();
+    }
+
+    /** {x, y, x', y'} of the central ray at plane p for the given sector biases (by electrode index), m and rad. */
+    public double[] ray(int plane, Map<Integer, List<Double>> sectorBiases_V) {
+        int k = electrodes.size();
+        double[] a = new double[k];
+        double[] b = new double[k];
+        for (int i = 0; i < k; i++) {
+            int e = electrodes.get(i);
+            List<Double> v = sectorBiases_V.get(e);
+            if (v != null) {
+                double[] ab = layout.get(e).harmonic(1, v);
+                a[i] = ab[0];
+                b[i] = ab[1];
+            }
+        }
+        return new double[] {response.offset_m(plane, a), response.offset_m(plane, b), response.slope_rad(plane, a),
+            response.slope_rad(plane, b)};
+    }
+
+    /** Offset per volt of each differential bias of split electrode e at plane p. */
+    public PerVolt perVolt(int plane, int electrode) {
+        int i = electrodes.indexOf(electrode);
+        if (i < 0) {
+            throw new IllegalArgumentException("electrode " + electrode + " is not split");
+        }
+        Sectors s = layout.get(electrode);
+        double[] hx = s.harmonic(1, boxed(s.xPattern()));
+        double[] hy = s.harmonic(1, boxed(s.yPattern()));
+        double xi = response.unitOffset_m(plane, i);
+        return new PerVolt(electrode, hx[0] * xi, hx[1] * xi, hy[0] * xi, hy[1] * xi);
+    }
+
+    private static List<Double> boxed(double[] v) {
+        List<Double> l = new ArrayList<>();
+        for (double x : v) {
+            l.add(x);
+        }
+        return l;
+    }
+}
