@@ -4,7 +4,6 @@ import java.util.List;
 
 import org.axistack.mesh.BoundaryMesh;
 import org.axistack.mesh.Panel;
-import org.axistack.model.Codata2018;
 
 /**
  * The field of a solved stack at one set of biases: potential and field anywhere by superposing the
@@ -141,13 +140,7 @@ public final class BiasedField implements Field, AxialField {
 
     /** Charge on each electrode, C. */
     public double[] charges_C() {
-        BoundaryMesh mesh = solution.mesh();
-        double[] q = new double[solution.electrodes().size()];
-        double fourPiEps0 = 4 * Math.PI * Codata2018.EPSILON0_F_PER_M;
-        for (int j = 0; j < strength.length; j++) {
-            q[mesh.electrodeOf(j)] += fourPiEps0 * strength[j];
-        }
-        return q;
+        return solution.electrodeCharges_C(strength);
     }
 
     /** sigma/eps0 at node j (total over both faces for a sheet), V/m. */

@@ -48,12 +48,25 @@ public final class FieldSolution {
             }
         }
         capacitance = new double[ne][ne];
-        double fourPiEps0 = 4 * Math.PI * Codata2018.EPSILON0_F_PER_M;
         for (int k = 0; k < ne; k++) {
-            for (int j = 0; j < n; j++) {
-                capacitance[mesh.electrodeOf(j)][k] += fourPiEps0 * unitStrength[k][j];
+            double[] q = electrodeCharges_C(unitStrength[k]);
+            for (int i = 0; i < ne; i++) {
+                capacitance[i][k] = q[i];
             }
         }
+    }
+
+    /**
+     * Charge on each electrode, C, from node ring strengths lambda_j = Q_j/(4 pi eps0) (V m): the one place
+     * where ring strengths become coulombs.
+     */
+    double[] electrodeCharges_C(double[] strength) {
+        double fourPiEps0 = 4 * Math.PI * Codata2018.EPSILON0_F_PER_M;
+        double[] q = new double[electrodes.size()];
+        for (int j = 0; j < strength.length; j++) {
+            q[mesh.electrodeOf(j)] += fourPiEps0 * strength[j];
+        }
+        return q;
     }
 
     /** The field for the electrodes' own biases. */

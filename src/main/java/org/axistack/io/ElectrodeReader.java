@@ -47,7 +47,8 @@ final class ElectrodeReader {
         List<String> own = SHAPE_KEYS.get(shape);
         if (own == null) {
             throw t.error(StackMessage.UNKNOWN_SHAPE, "shape",
-                    Map.of("shape", shape, "suggestion", TableFields.suggestion(shape, SHAPE_KEYS.keySet())));
+                    Map.of("shape", shape, "suggestion", TableFields.suggestion(shape, SHAPE_KEYS.keySet()),
+                            "shapes", String.join(", ", Electrode.SHAPES)));
         }
         Set<String> allowed = new LinkedHashSet<>(COMMON);
         allowed.addAll(own);

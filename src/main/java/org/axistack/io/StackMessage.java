@@ -64,7 +64,7 @@ public enum StackMessage {
     SLIT_TOO_WIDE("slit_width_mm ({slit} mm) is not narrower than one sector at the electrode's smallest radius ({arc} mm of arc)",
             "make the slits narrower than {arc} mm, or use fewer sectors"),
     UNKNOWN_SHAPE("unknown shape '{shape}'{suggestion}",
-            "use one of: tube, aperture, disk, ring, outline"),
+            "use one of: {shapes}"),
     KEY_NOT_FOR_SHAPE("the key '{key}' does not apply to shape '{shape}'",
             "remove it; the keys for {shape} are: {allowed}"),
     UNKNOWN_PARTICLE("unknown particle '{particle}'{suggestion}",

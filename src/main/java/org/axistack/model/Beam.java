@@ -29,7 +29,7 @@ public record Beam(Particle particle, double energy_eV, OptionalDouble startZ_m,
 
     /** Kinetic energy at 0 V divided by |q|, V: the acceleration potential where phi = 0. */
     public double energyPerCharge_V() {
-        return energy_eV * Codata2018.ELEMENTARY_CHARGE_C / particle.absCharge_C();
+        return particle.energyPerCharge_V(energy_eV);
     }
 
     public Beam withEnergy_eV(double newEnergy_eV) {

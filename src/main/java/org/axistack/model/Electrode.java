@@ -27,8 +27,14 @@ public sealed interface Electrode permits Electrode.Tube, Electrode.Aperture, El
     /** The meridian outline the solver meshes. */
     Contour contour();
 
-    /** Shape keyword, as written in stack files. */
+    /** Shape keyword, as written in stack files: one of {@link #SHAPES}. */
     String shape();
+
+    /**
+     * The shape keywords of stack files, one per permitted record (same order), as the reader, writer and
+     * messages name them: the one list of shapes (a test ties it to the records and the reader's keys).
+     */
+    List<String> SHAPES = List.of("tube", "aperture", "disk", "ring", "outline");
 
     private static void requireName(String name) {
         if (name == null || name.isBlank()) {

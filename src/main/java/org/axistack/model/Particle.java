@@ -62,6 +62,19 @@ public record Particle(String label, double mass_kg, double charge_C) {
         return mass_kg * SPEED_OF_LIGHT_M_PER_S * SPEED_OF_LIGHT_M_PER_S / absCharge_C();
     }
 
+    /**
+     * Kinetic energy per charge, V: an energy in eV divided by the charge state (T/|q|). The one place where
+     * electron-volts become volts of potential for this particle; {@link #energy_eV} is the inverse.
+     */
+    public double energyPerCharge_V(double energy_eV) {
+        return energy_eV * ELEMENTARY_CHARGE_C / absCharge_C();
+    }
+
+    /** Kinetic energy in eV of a kinetic energy per charge in volts (the inverse of {@link #energyPerCharge_V}). */
+    public double energy_eV(double energyPerCharge_V) {
+        return energyPerCharge_V * absCharge_C() / ELEMENTARY_CHARGE_C;
+    }
+
     /** Charge state in units of e (rounded), signed. */
     public int chargeNumber() {
         return (int) Math.round(charge_C / ELEMENTARY_CHARGE_C);

@@ -2,7 +2,6 @@ package org.axistack.trace;
 
 import java.util.OptionalDouble;
 
-import org.axistack.model.Codata2018;
 import org.axistack.model.Particle;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
@@ -111,8 +110,7 @@ public final class TracedAberrations {
         res = Math.sqrt(res / HEIGHTS);
 
         double phiEnd = tracer.field().potential_V(zEnd_m, 0);
-        double tImage = (energy_eV * Codata2018.ELEMENTARY_CHARGE_C / particle.absCharge_C()
-                - particle.chargeSign() * phiEnd) * particle.absCharge_C() / Codata2018.ELEMENTARY_CHARGE_C;
+        double tImage = particle.energy_eV(particle.energyPerCharge_V(energy_eV) - particle.chargeSign() * phiEnd);
         double[] fd = new double[4];
         double[] steps = {ENERGY_STEP, -ENERGY_STEP, 2 * ENERGY_STEP, -2 * ENERGY_STEP};
         for (int i = 0; i < 4; i++) {

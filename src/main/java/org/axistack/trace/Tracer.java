@@ -94,7 +94,7 @@ public final class Tracer {
     public double validateStart(Particle particle, RayStart ray, TraceTargets targets) {
         checkPlacement(geometry, ray, targets);
         double r = ray.r_m();
-        double w = ray.energy_eV() * E / particle.absCharge_C();
+        double w = particle.energyPerCharge_V(ray.energy_eV());
         double phi0 = field.potential_V(ray.z_m(), r);
         double t = w - particle.chargeSign() * phi0;
         if (!(t > 0)) {
@@ -149,7 +149,7 @@ public final class Tracer {
         double[] y0 = {ray.x_m(), ray.y_m(), ray.z_m(), uMag * ray.dirX(), uMag * ray.dirY(), uMag * ray.dirZ()};
         double beta0 = uMag / Math.sqrt(1 + uMag * uMag);
 
-        Run run = new Run(particle, ray, targets, progress, ray.energy_eV() * E / particle.absCharge_C());
+        Run run = new Run(particle, ray, targets, progress, particle.energyPerCharge_V(ray.energy_eV()));
         double scale = geometry.scale_m();
         double[] absTol = new double[6], relTol = new double[6];
         for (int i = 0; i < 6; i++) {
