@@ -155,7 +155,9 @@ public final class FieldSolution {
 
     /**
      * The piecewise Chebyshev expansion of the unit axial potentials, built on first use over the stack's
-     * extent widened by half its length on each side.
+     * extent widened by half its length on each side. Safe to call first from any thread, a task of the common
+     * fork-join pool included: the build runs in a pool of its own (AxialExpansion), so callers that go parallel
+     * need not build it beforehand.
      */
     AxialExpansion axialExpansion() {
         AxialExpansion x = axialExpansion;

@@ -55,9 +55,6 @@ public final class BiasSweep {
         SweepPoint[] out = new SweepPoint[n];
         AtomicInteger done = new AtomicInteger();
         AtomicBoolean cancelled = new AtomicBoolean();
-        // build the solution's lazy axial expansion on this thread before going parallel (it uses the common pool
-        // itself; building it inside a pool worker could leave it waiting for the blocked workers)
-        solution.withBiases(base).axial(0.5 * (stack.minZ_m() + stack.maxZ_m()), 0, new double[1]);
         IntStream.range(0, n).parallel().forEach(i -> {
             if (cancelled.get()) {
                 return;

@@ -82,10 +82,7 @@ public final class BiasTuner {
             grid[i] = range.from_V() + range.width_V() * i / (SCAN_POINTS - 1);
         }
         FocusProbe.Point[] first = new FocusProbe.Point[SCAN_POINTS];
-        // first point on this thread: it builds the solution's lazy axial expansion, which itself runs on the common
-        // pool; building it from inside a pool worker could leave the build waiting for the blocked workers
-        first[0] = scanEval.apply(grid[0]);
-        IntStream.range(1, SCAN_POINTS).parallel().forEach(i -> first[i] = scanEval.apply(grid[i]));
+        IntStream.range(0, SCAN_POINTS).parallel().forEach(i -> first[i] = scanEval.apply(grid[i]));
         for (int i = 0; i < SCAN_POINTS; i++) {
             scan.put(grid[i], first[i]);
         }

@@ -42,4 +42,20 @@ class AxialExpansionConcurrencyTest {
             outside.shutdownNow();
         }
     }
+
+    @Test
+    @Timeout(value = 120, unit = TimeUnit.SECONDS)
+    void aSweepStartedInsideAPoolTaskOnAFreshSolutionFinishes() throws Exception {
+        // the case that once needed callers to build the expansion before going parallel: a bias sweep (parallel
+        // over the common pool) run from inside a common-pool task, first use of the solution's expansion
+        List<Electrode> es = List.of(new Electrode.Tube("a", 0, 0.004, -0.03, -0.001, 0),
+                new Electrode.Tube("b", 0, 0.004, 0.001, 0.03, 0));
+        FieldSolution s = BemSolver.solve(es, new MeshSettings(200, 4), SolveProgress.NONE);
+        org.axistack.model.Stack stack = new org.axistack.model.Stack("two tubes",
+                new org.axistack.model.Beam(org.axistack.model.Particle.electron(), 1000), es);
+        var points = java.util.concurrent.ForkJoinPool.commonPool().submit(() -> org.axistack.tune.BiasSweep.run(s,
+                stack, "b", 500, 2000, 8, java.util.OptionalDouble.empty(), org.axistack.tune.BiasSweep.Progress.NONE))
+                .get(100, TimeUnit.SECONDS);
+        assertThat(points).hasSize(9);
+    }
 }
