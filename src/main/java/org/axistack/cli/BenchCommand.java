@@ -121,6 +121,7 @@ final class BenchCommand implements Callable<Integer> {
             cardinal[i] = (System.nanoTime() - t) * 1e-9;
         }
         row(out, "cardinal elements for a new bias set", median(cardinal), 0.005);
+        probeRow(out, stack, sol);
         tuneRows(out, stack, sol);
         bundleRow(out, stack, sol);
         if (sizing != null) {
@@ -147,6 +148,34 @@ final class BenchCommand implements Callable<Integer> {
         org.axistack.ui.RedrawBench.Result r = org.axistack.ui.RedrawBench.run(input.path(), 20, 40);
         row(out, "window: bias change to redraw (median of " + r.changes() + ")", r.median_ms() / 1000, 0.050);
         out.println("    " + r.describe());
+    }
+
+    /**
+     * The probe-current curve (50 currents from 1 pA to 1 uA, optimum aperture angle each, reduced brightness
+     * 1e5 A/(m^2 sr V), 1 eV) after the optics: the lens data (Cs, Cc polynomials) once, outside the timing.
+     */
+    private void probeRow(PrintWriter out, Stack stack, FieldSolution sol) {
+        org.axistack.probe.ProbeWorkingPoint wp;
+        try {
+            wp = org.axistack.probe.ProbeWorkingPoint.of("as given", stack.biases_V(),
+                    ParaxialOptics.of(sol.withBiases(stack.biases_V()), stack), stack.beam().objectZ_m(),
+                    stack.beam().particle());
+        } catch (RuntimeException e) {
+            out.println("  (no probe-curve row: " + e.getMessage() + ")");
+            return;
+        }
+        org.axistack.probe.ProbeModel model = new org.axistack.probe.ProbeModel(wp.lens(),
+                new org.axistack.probe.ProbeSource(1e5, 1, java.util.OptionalDouble.empty()), 1e-4, 0.05);
+        double[] t = new double[Math.max(repeat, 20)];
+        for (int i = 0; i < t.length; i++) {
+            long t0 = System.nanoTime();
+            model.curve(1e-12, 1e-6, 50);
+            t[i] = (System.nanoTime() - t0) * 1e-9;
+        }
+        row(out, "probe-current curve, 50 currents, optimum angle each", median(t), 0.050);
+        long t0 = System.nanoTime();
+        org.axistack.optics.AberrationPolynomials.of(ParaxialOptics.of(sol.withBiases(stack.biases_V()), stack));
+        row(out, "  (optics + Cs, Cc polynomials for that lens, once)", (System.nanoTime() - t0) * 1e-9, Double.NaN);
     }
 
     /**

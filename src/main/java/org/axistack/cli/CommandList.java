@@ -19,6 +19,7 @@ final class CommandList {
                 new EnvelopeCommand(),
                 new TuneCommand(),
                 new SweepCommand(),
+                new ProbeCommand(),
                 new SizeCommand(),
                 new BenchCommand(),
                 new CheckCommand(),

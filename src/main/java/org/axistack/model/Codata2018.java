@@ -9,6 +9,8 @@ public final class Codata2018 {
     public static final double ELEMENTARY_CHARGE_C = 1.602176634e-19;
     /** Speed of light in vacuum, m/s (exact). */
     public static final double SPEED_OF_LIGHT_M_PER_S = 299_792_458.0;
+    /** Planck constant, J s (exact since the 2019 SI redefinition). */
+    public static final double PLANCK_J_S = 6.62607015e-34;
     /** Vacuum electric permittivity, F/m. */
     public static final double EPSILON0_F_PER_M = 8.8541878128e-12;
     /** Electron mass, kg. */

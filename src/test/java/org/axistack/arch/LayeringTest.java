@@ -29,7 +29,7 @@ class LayeringTest {
     void physicsKnowsNothingOfFilesWindowsOrTheCommandLine() {
         noClasses().that().resideInAnyPackage("org.axistack.model..", "org.axistack.mesh..", "org.axistack.field..",
                         "org.axistack.optics..", "org.axistack.trace..", "org.axistack.beam..", "org.axistack.tune..",
-                        "org.axistack.size..", "org.axistack.verify..")
+                        "org.axistack.size..", "org.axistack.verify..", "org.axistack.probe..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.axistack.io..", "org.axistack.cli..",
                         "org.axistack.report..", "org.axistack.ui..", "org.axistack.plan..", "java.awt..", "javax.swing..", "org.jfree..",
                         "picocli..", "org.tomlj..", "com.fasterxml..", "org.apache.commons.csv..")
