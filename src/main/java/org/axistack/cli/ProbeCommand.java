@@ -44,10 +44,11 @@ import picocli.CommandLine.Spec;
  * each bias that focuses on the screen; optional CSV, PNG and SVG in a folder.
  */
 @Command(name = "probe", mixinStandardHelpOptions = true,
-        description = {"Focused-probe plan: the smallest probe (FW50 diameter, root-power-sum of Barth and Kruit) at each",
-            "current and the aperture angle that gives it, from the source brightness and energy spread,",
-            "diffraction, and the lens's spherical and chromatic aberration; for the biases as given and for every",
-            "bias of the tuned electrode that focuses on the screen. Quadrature sum shown for comparison."})
+        header = "Focused-probe plan: smallest probe and its aperture angle against beam current.",
+        description = {"The smallest probe (FW50 diameter, root-power-sum of Barth and Kruit) at each current and the"
+            + " aperture angle that gives it, from the source brightness and energy spread, diffraction, and the lens's"
+            + " spherical and chromatic aberration, with the quadrature sum for comparison.",
+            "Computed for the biases as given and for every bias of the tuned electrode that focuses on the screen."})
 final class ProbeCommand implements Callable<Integer> {
 
     @Spec
