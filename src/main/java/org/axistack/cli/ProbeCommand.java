@@ -44,7 +44,7 @@ import picocli.CommandLine.Spec;
  * each bias that focuses on the screen; optional CSV, PNG and SVG in a folder.
  */
 @Command(name = "probe", mixinStandardHelpOptions = true,
-        header = "Focused-probe plan: smallest probe and its aperture angle against beam current.",
+        header = "Smallest probe and its aperture angle at each beam current.",
         description = {"The smallest probe (FW50 diameter, root-power-sum of Barth and Kruit) at each current and the"
             + " aperture angle that gives it, from the source brightness and energy spread, diffraction, and the lens's"
             + " spherical and chromatic aberration, with the quadrature sum for comparison.",
