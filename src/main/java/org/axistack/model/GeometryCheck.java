@@ -5,7 +5,7 @@ import java.util.List;
 
 /**
  * Pure geometric sanity checks of a stack's meridian outlines: outlines that cross themselves, and
- * electrodes that overlap or touch. Arcs are flattened into 16 chords each;
+ * electrodes that overlap or touch. Arcs are flattened into 16 chords each ({@link Outlines});
  * segment distances and crossings use the standard orientation (signed-area) tests of computational
  * geometry (de Berg et al., Computational Geometry, 3rd ed., ch. 2). Containment uses the even-odd
  * ray-crossing rule.
@@ -113,17 +113,8 @@ public final class GeometryCheck {
 
     /** Vertices of the flattened outline; a closed contour repeats its first vertex at the end. */
     static double[][] flatten(Contour c) {
-        List<double[]> pts = new ArrayList<>();
-        ZR s0 = c.segments().get(0).start();
-        pts.add(new double[] {s0.z_m(), s0.r_m()});
-        for (Segment s : c.segments()) {
-            int n = s instanceof Segment.Arc ? ARC_PIECES : 1;
-            for (int k = 1; k <= n; k++) {
-                ZR p = k == n ? s.end() : s.at((double) k / n);
-                pts.add(new double[] {p.z_m(), p.r_m()});
-            }
-        }
-        return pts.toArray(new double[0][]);
+        return Outlines.vertices(c, arc -> ARC_PIECES).stream().map(p -> new double[] {p.z_m(), p.r_m()})
+                .toArray(double[][]::new);
     }
 
     private static ZR selfCrossing(double[][] p, boolean closed, double tol) {
@@ -259,7 +250,7 @@ public final class GeometryCheck {
                     ? new double[] {(q[0] + other[k + 1][0]) / 2, (q[1] + other[k + 1][1]) / 2} : q;
             for (double[] t : new double[][] {q, mid}) {
                 if (distanceToPolyline(t, ring) > tol) {
-                    if (contains(ring, t)) {
+                    if (Outlines.contains(ring, t[0], t[1])) {
                         return new ZR(t[0], t[1]);
                     }
                     if (onePoint) {
@@ -277,21 +268,6 @@ public final class GeometryCheck {
             d = Math.min(d, pointSegment(t, ring[k], ring[k + 1]));
         }
         return d;
-    }
-
-    /** Even-odd rule; ring's last vertex equals its first. */
-    private static boolean contains(double[][] ring, double[] t) {
-        boolean in = false;
-        for (int k = 0; k + 1 < ring.length; k++) {
-            double[] p = ring[k], q = ring[k + 1];
-            if ((p[1] > t[1]) != (q[1] > t[1])) {
-                double zCross = p[0] + (t[1] - p[1]) * (q[0] - p[0]) / (q[1] - p[1]);
-                if (t[0] < zCross) {
-                    in = !in;
-                }
-            }
-        }
-        return in;
     }
 
     private static boolean boxesNear(double[] a, double[] b, double[] c, double[] d, double tol) {

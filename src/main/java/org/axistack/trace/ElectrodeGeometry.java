@@ -6,6 +6,7 @@ import java.util.Optional;
 
 import org.axistack.model.Contour;
 import org.axistack.model.Electrode;
+import org.axistack.model.Outlines;
 import org.axistack.model.Segment;
 import org.axistack.model.Stack;
 import org.axistack.model.ZR;
@@ -42,7 +43,7 @@ public final class ElectrodeGeometry {
     }
 
     /** A polygon bounding a solid electrode (closed outline, or open outline closed along the axis). */
-    private record SolidOutline(String electrode, double[] z, double[] r) {
+    private record SolidOutline(String electrode, double[][] ring) {
     }
 
     /**
@@ -94,12 +95,7 @@ public final class ElectrodeGeometry {
             ps.addAll(own);
             bs.add(body(own));
             if (!c.isSheet()) {
-                double[] z = new double[pts.size()], r = new double[pts.size()];
-                for (int i = 0; i < pts.size(); i++) {
-                    z[i] = pts.get(i).z_m();
-                    r[i] = pts.get(i).r_m();
-                }
-                ss.add(new SolidOutline(e.name(), z, r));
+                ss.add(new SolidOutline(e.name(), Outlines.solidRing(c, Outlines.vertices(c, ElectrodeGeometry::chords))));
             }
             zlo = Math.min(zlo, c.minZ_m());
             zhi = Math.max(zhi, c.maxZ_m());
@@ -129,25 +125,20 @@ public final class ElectrodeGeometry {
 
     /** Vertices of a contour, arcs subdivided; closed contours repeat the first point at the end. */
     private static List<ZR> polyline(Contour c) {
-        List<ZR> pts = new ArrayList<>();
-        pts.add(c.segments().get(0).start());
-        for (Segment s : c.segments()) {
-            int n = 1;
-            if (s instanceof Segment.Arc arc) {
-                double sweep = arc.length_m() / arc.radius_m();
-                // sagitta of a chord spanning angle d: R (1 - cos(d/2)) ~ R d^2 / 8
-                double d = Math.sqrt(8 * ARC_SAGITTA_FRACTION);
-                n = (int) Math.ceil(sweep / d);
-            }
-            for (int k = 1; k <= n; k++) {
-                pts.add(k == n ? s.end() : s.at((double) k / n));
-            }
-        }
+        List<ZR> pts = new ArrayList<>(Outlines.vertices(c, ElectrodeGeometry::chords));
         if (!c.closed() && !c.isSheet()) {
             // open outline with both ends on the axis: close it along the axis
             pts.add(pts.get(0));
         }
         return pts;
+    }
+
+    /** Chords for an arc: enough that each chord's sagitta stays below ARC_SAGITTA_FRACTION of the radius. */
+    private static int chords(Segment.Arc arc) {
+        double sweep = arc.length_m() / arc.radius_m();
+        // sagitta of a chord spanning angle d: R (1 - cos(d/2)) ~ R d^2 / 8
+        double d = Math.sqrt(8 * ARC_SAGITTA_FRACTION);
+        return (int) Math.ceil(sweep / d);
     }
 
     public double regionZMin_m() {
@@ -218,18 +209,7 @@ public final class ElectrodeGeometry {
     }
 
     private static boolean contains(SolidOutline s, double z, double r) {
-        boolean in = false;
-        int n = s.z().length;
-        for (int i = 0, j = n - 1; i < n; j = i++) {
-            double zi = s.z()[i], ri = s.r()[i], zj = s.z()[j], rj = s.r()[j];
-            if ((ri > r) != (rj > r)) {
-                double zc = zi + (r - ri) * (zj - zi) / (rj - ri);
-                if (z < zc) {
-                    in = !in;
-                }
-            }
-        }
-        return in;
+        return Outlines.contains(s.ring(), z, r);
     }
 
     /**
