@@ -21,12 +21,14 @@ import org.junit.jupiter.api.Timeout;
  */
 class AxialExpansionConcurrencyTest {
 
+    /** Two coaxial tubes with a 2 mm gap, both at 0 V (each test sets its biases). */
+    private static final List<Electrode> TWO_TUBES = List.of(new Electrode.Tube("a", 0, 0.004, -0.03, -0.001, 0),
+            new Electrode.Tube("b", 0, 0.004, 0.001, 0.03, 0));
+
     @Test
     @Timeout(value = 120, unit = TimeUnit.SECONDS)
     void firstUseFromPoolTasksAndOutsideThreadsDoesNotDeadlock() throws Exception {
-        List<Electrode> es = List.of(new Electrode.Tube("a", 0, 0.004, -0.03, -0.001, 0),
-                new Electrode.Tube("b", 500, 0.004, 0.001, 0.03, 0));
-        FieldSolution s = BemSolver.solve(es, new MeshSettings(200, 4), SolveProgress.NONE);
+        FieldSolution s = BemSolver.solve(TWO_TUBES, new MeshSettings(200, 4), SolveProgress.NONE);
         ExecutorService outside = Executors.newFixedThreadPool(3);
         try {
             Future<Double> f = outside.submit(() -> s.withBiases(new double[] {-250, 250}).axialPotential_V(0.0));
@@ -48,11 +50,9 @@ class AxialExpansionConcurrencyTest {
     void aSweepStartedInsideAPoolTaskOnAFreshSolutionFinishes() throws Exception {
         // the case that once needed callers to build the expansion before going parallel: a bias sweep (parallel
         // over the common pool) run from inside a common-pool task, first use of the solution's expansion
-        List<Electrode> es = List.of(new Electrode.Tube("a", 0, 0.004, -0.03, -0.001, 0),
-                new Electrode.Tube("b", 0, 0.004, 0.001, 0.03, 0));
-        FieldSolution s = BemSolver.solve(es, new MeshSettings(200, 4), SolveProgress.NONE);
+        FieldSolution s = BemSolver.solve(TWO_TUBES, new MeshSettings(200, 4), SolveProgress.NONE);
         org.axistack.model.Stack stack = new org.axistack.model.Stack("two tubes",
-                new org.axistack.model.Beam(org.axistack.model.Particle.electron(), 1000), es);
+                new org.axistack.model.Beam(org.axistack.model.Particle.electron(), 1000), TWO_TUBES);
         var points = java.util.concurrent.ForkJoinPool.commonPool().submit(() -> org.axistack.tune.BiasSweep.run(s,
                 stack, "b", 500, 2000, 8, java.util.OptionalDouble.empty(), org.axistack.tune.BiasSweep.Progress.NONE))
                 .get(100, TimeUnit.SECONDS);

@@ -3,9 +3,12 @@ package org.axistack.io;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.axistack.model.Contour;
 import org.axistack.model.Electrode;
+import org.axistack.model.ZR;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -24,46 +27,12 @@ class ShapeListTest {
         assertThat(StackMessage.UNKNOWN_SHAPE.format(Map.of("shape", "tub", "suggestion", "",
                 "shapes", String.join(", ", Electrode.SHAPES))))
                 .endsWith("Fix: use one of: tube, aperture, disk, ring, outline.");
-        // every shape read from a stack file reports its own keyword
-        String text = """
-                [beam]
-                particle = "electron"
-                energy_eV = 100
-                [[electrode]]
-                name = "t"
-                shape = "tube"
-                bias_V = 0
-                radius_mm = 5.0
-                z_start_mm = -45.0
-                z_end_mm = -4.0
-                [[electrode]]
-                name = "ap"
-                shape = "aperture"
-                bias_V = 0
-                z_mm = 20.0
-                hole_radius_mm = 1.0
-                outer_radius_mm = 12.0
-                [[electrode]]
-                name = "d"
-                shape = "disk"
-                bias_V = 0
-                z_mm = 40.0
-                radius_mm = 8.0
-                [[electrode]]
-                name = "r"
-                shape = "ring"
-                bias_V = 0
-                z_mm = 30.0
-                radius_mm = 9.0
-                wire_radius_mm = 0.25
-                [[electrode]]
-                name = "o"
-                shape = "outline"
-                bias_V = 0
-                closed = false
-                points_mm = [[0.0, 15.0], [4.0, 15.0]]
-                """;
-        for (Electrode e : StackReader.parse(text, "all-shapes.toml").electrodes()) {
+        // every record reports its own keyword (one of each shape, as the reader makes them)
+        Contour line = Contour.polyline(false, new ZR(0, 0.015), new ZR(0.004, 0.015));
+        List<Electrode> each = List.of(new Electrode.Tube("t", 0, 0.005, -0.045, -0.004, 0),
+                new Electrode.Aperture("ap", 0, 0.020, 0.001, 0.012, 0), new Electrode.Disk("d", 0, 0.040, 0.008, 0.001),
+                new Electrode.Ring("r", 0, 0.030, 0.009, 0.00025), new Electrode.Outline("o", 0, line));
+        for (Electrode e : each) {
             assertThat(e.shape()).isEqualTo(e.getClass().getSimpleName().toLowerCase(Locale.ROOT));
         }
     }
