@@ -131,6 +131,7 @@ final class BenchCommand implements Callable<Integer> {
         if (probeBundle) {
             probeBundleRow(out, stack, sol);
         }
+        SteeringBench.rows(stack, sol, demo.median_s(), repeat, out, (w, s, tg) -> row(out, w, s, tg));
         if (sizing != null) {
             org.axistack.size.Requirements req = org.axistack.io.RequirementsReader.read(sizing);
             long t = System.nanoTime();
