@@ -132,6 +132,7 @@ final class BenchCommand implements Callable<Integer> {
             probeBundleRow(out, stack, sol);
         }
         SteeringBench.rows(stack, sol, demo.median_s(), repeat, out, (w, s, tg) -> row(out, w, s, tg));
+        misalignRows(out, stack, sol);
         if (sizing != null) {
             org.axistack.size.Requirements req = org.axistack.io.RequirementsReader.read(sizing);
             long t = System.nanoTime();
@@ -281,6 +282,46 @@ final class BenchCommand implements Callable<Integer> {
         org.axistack.tune.BiasSweep.run(sol, stack, name, from, to, 999, stack.beam().objectZ_m(),
                 org.axistack.tune.BiasSweep.Progress.NONE);
         row(out, "1000-point sweep of '" + name + "' (once)", (System.nanoTime() - t) * 1e-9, 5.0);
+    }
+
+    /**
+     * Misalignment responses (decentre and tilt of every electrode, central-ray shifts at the screen) after the
+     * round solve: the harmonic-1 factorisation and the responses timed apart; on the stack and, when it has
+     * fewer than five electrodes, on the stack with grounded apertures added beyond both ends until it has five.
+     */
+    private void misalignRows(PrintWriter out, Stack stack, FieldSolution sol) {
+        java.util.List<org.axistack.model.Electrode> es = new java.util.ArrayList<>(stack.electrodes());
+        double bore = stack.minBore_m();
+        double outer = 0;
+        for (org.axistack.model.Electrode e : es) {
+            outer = Math.max(outer, e.contour().maxR_m());
+        }
+        double lo = stack.minZ_m();
+        double hi = stack.maxZ_m();
+        for (int i = 0; es.size() < 5; i++) {
+            double z = i % 2 == 0 ? lo - bore * (1 + i) : hi + bore * (1 + i);
+            es.add(new org.axistack.model.Electrode.Aperture("bench_end_" + i, 0, z, bore, 1.5 * outer, 0.1 * bore));
+        }
+        misalignRow(out, stack, sol, stack.electrodes().size() + " electrodes");
+        if (es.size() > stack.electrodes().size()) {
+            Stack five = new Stack(stack.title(), stack.beam(), es, stack.screenZ_m(), stack.mesh(), stack.limits());
+            misalignRow(out, five, BemSolver.solve(es, stack.mesh(), SolveProgress.NONE),
+                    "5 electrodes (grounded end apertures added)");
+        }
+    }
+
+    private void misalignRow(PrintWriter out, Stack stack, FieldSolution sol, String what) {
+        double screen = stack.screenZ_m().orElse(stack.maxZ_m() + (stack.maxZ_m() - stack.minZ_m()));
+        double[] factor = new double[repeat];
+        double[] responses = new double[repeat];
+        for (int i = 0; i < repeat; i++) {
+            org.axistack.optics.MisalignmentStudy st = org.axistack.optics.MisalignmentStudy.run(stack, sol, null,
+                    screen, 5e-5, SolveProgress.NONE);
+            factor[i] = st.factorSeconds();
+            responses[i] = st.responseSeconds();
+        }
+        row(out, "harmonic-1 factorisation, " + what + " (" + sol.unknowns() + " unknowns)", median(factor), Double.NaN);
+        row(out, "  then every decentre and tilt response + central-ray shift", median(responses), 1.0);
     }
 
     /** Median wall time of {@code repeat} solves of one geometry, and the last solution. */

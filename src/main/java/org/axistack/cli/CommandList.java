@@ -20,6 +20,7 @@ final class CommandList {
                 new TuneCommand(),
                 new SweepCommand(),
                 new ProbeCommand(),
+                new MisalignCommand(),
                 new SizeCommand(),
                 new BenchCommand(),
                 new CheckCommand(),

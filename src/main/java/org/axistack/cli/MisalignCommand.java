@@ -1,0 +1,215 @@
+package org.axistack.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.axistack.field.BemSolver;
+import org.axistack.field.FieldSolution;
+import org.axistack.io.AlignmentTableCsv;
+import org.axistack.io.AtomicFiles;
+import org.axistack.io.StackInputException;
+import org.axistack.io.Units;
+import org.axistack.model.Stack;
+import org.axistack.optics.MisalignmentBudget;
+import org.axistack.optics.MisalignmentStudy;
+import org.axistack.optics.ReflectionException;
+import org.axistack.optics.StartPlaneException;
+import org.axistack.plan.PlanAnalysis;
+import org.axistack.report.SafetyNotice;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code misalign [STACK] [--allowed-shift MM] [--focus NAME] [--screen-z Z] [--csv FILE] [--json]}: how far the
+ * spot moves at the screen per 0.01 mm decentre and per mrad tilt of each electrode, how it walks when the focus
+ * bias changes, and the machining tolerance budget (first-order harmonic-1 responses, misalignment.md).
+ */
+@Command(name = "misalign", mixinStandardHelpOptions = true,
+        header = "Electrode decentre and tilt sensitivity and the tolerance budget.",
+        description = {"For every electrode: the displacement and slope of the central ray at the screen per 0.01 mm"
+            + " decentre and per mrad tilt, the spot walk per volt of the focus bias, and the decentre and tilt"
+            + " tolerances that keep the spot within the allowed displacement (errors independent, added in"
+            + " quadrature).",
+            "First-order (linear) responses of the solved field from one harmonic-1 factorisation; lengths in mm in"
+            + " the stack's z coordinates."})
+final class MisalignCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    StackInput input;
+
+    @Option(names = "--allowed-shift", paramLabel = "MM", defaultValue = "0.05",
+            description = "Allowed spot displacement at the screen, mm (default 0.05).")
+    double allowed_mm;
+
+    @Option(names = "--focus", paramLabel = "NAME",
+            description = "Electrode whose bias focuses, for the spot walk (default: the most strongly biased one).")
+    String focus;
+
+    @Option(names = "--screen-z", paramLabel = "Z",
+            description = "Screen plane in mm (default: the stack's [screen], else the image-side reference plane).")
+    Double screen_mm;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Write the bench alignment table to this CSV file.")
+    Path csv;
+
+    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
+    boolean json;
+
+    @Option(names = "--quiet", description = "No progress on standard error.")
+    boolean quiet;
+
+    @Override
+    public Integer call() throws StackInputException, IOException {
+        CommandLine cl = spec.commandLine();
+        Stack stack = input.loadOrDemo();
+        if (!(allowed_mm > 0) || !Double.isFinite(allowed_mm)) {
+            throw new CommandLine.ParameterException(cl, "--allowed-shift must be a positive number of mm, got "
+                    + allowed_mm);
+        }
+        if (screen_mm != null && !Double.isFinite(screen_mm)) {
+            throw new CommandLine.ParameterException(cl, "--screen-z must be a number of mm");
+        }
+        String focusName = focus != null ? focus : PlanAnalysis.strongest(stack);
+        if (focus != null && stack.indexOf(focus) < 0) {
+            throw new CommandLine.ParameterException(cl, "--focus " + focus + ": no such electrode in " + input.shownAs()
+                    + "; choose one of " + String.join(", ", stack.names()));
+        }
+        PrintWriter err = cl.getErr();
+        boolean silent = quiet || json;
+        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, silent));
+        MisalignmentStudy study;
+        double screen;
+        String screenFrom;
+        try {
+            // the screen default needs the optics' image-side plane: a first pass finds it only when no plane is given
+            if (screen_mm != null) {
+                screen = Units.mmToM(screen_mm);
+                screenFrom = "--screen-z";
+            } else if (stack.screenZ_m().isPresent()) {
+                screen = stack.screenZ_m().getAsDouble();
+                screenFrom = "[screen] of the stack";
+            } else {
+                screen = org.axistack.optics.ParaxialOptics.of(sol.withBiases(stack.biases_V()), stack).zEnd_m();
+                screenFrom = "image-side reference plane (no [screen] in the stack)";
+            }
+            study = MisalignmentStudy.run(stack, sol, focusName, screen, Units.mmToM(allowed_mm),
+                    SolveReporter.to(err, silent));
+        } catch (StartPlaneException e) {
+            throw new CommandLine.ParameterException(cl, input.shownAs() + ": [beam] start_z_mm = "
+                    + PlanCommand.num(Units.mToMm(e.startZ_m())) + " mm cannot be used: rays must start before the lens"
+                    + " exit plane; set start_z_mm in the field-free entrance region or remove it");
+        } catch (ReflectionException e) {
+            throw new OutcomeException(e.getMessage() + "; lower the retarding bias or raise the beam energy");
+        }
+        MisalignmentBudget b = study.budget();
+        if (csv != null) {
+            AtomicFiles.writeString(csv, AlignmentTableCsv.text(b));
+        }
+        PrintWriter out = cl.getOut();
+        if (json) {
+            json(out, study, screenFrom);
+        } else {
+            text(out, stack, study, screenFrom);
+        }
+        out.flush();
+        return 0;
+    }
+
+    private void json(PrintWriter out, MisalignmentStudy study, String screenFrom) {
+        MisalignmentBudget b = study.budget();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("stack", input.shownAs());
+        m.put("screen_z_mm", Units.mToMm(b.screenZ_m()));
+        m.put("screen_from", screenFrom);
+        m.put("allowed_shift_mm", Units.mToMm(b.allowed_m()));
+        m.put("focus_electrode", b.focusElectrode() >= 0 ? b.rows().get(b.focusElectrode()).name() : null);
+        m.put("assumption", MisalignmentBudget.assumption());
+        m.put("tightest_decentre_electrode", b.rows().get(b.tightestDecentre()).name());
+        m.put("tightest_tilt_electrode", b.rows().get(b.tightestTilt()).name());
+        List<Map<String, Object>> rows = new ArrayList<>();
+        for (Object[] r : AlignmentTableCsv.rows(b)) {
+            Map<String, Object> row = new LinkedHashMap<>();
+            for (int i = 0; i < AlignmentTableCsv.HEADER.size(); i++) {
+                row.put(AlignmentTableCsv.HEADER.get(i), r[i]);
+            }
+            rows.add(row);
+        }
+        m.put("rows", rows);
+        m.put("factor_seconds", study.factorSeconds());
+        m.put("response_seconds", study.responseSeconds());
+        m.put("study_seconds", study.totalSeconds());
+        try {
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(m));
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private void text(PrintWriter w, Stack stack, MisalignmentStudy study, String screenFrom) {
+        MisalignmentBudget b = study.budget();
+        w.println("Misalignment of " + stack.title() + " (" + input.shownAs() + ")");
+        w.println("Screen: z = " + num(Units.mToMm(b.screenZ_m())) + " mm (" + screenFrom + "); allowed spot shift "
+                + num(Units.mToMm(b.allowed_m())) + " mm");
+        String focusName = b.focusElectrode() >= 0 ? b.rows().get(b.focusElectrode()).name() : null;
+        w.println("Central ray: enters on the mechanical axis at z = " + num(Units.mToMm(study.optics().zStart_m()))
+                + " mm; focus electrode for the walk: " + (focusName == null ? "none (every bias is 0 V)" : focusName));
+        w.println();
+        w.println(String.format(Locale.ROOT, "%-12s %14s %14s %14s %14s %16s %16s %12s %12s", "electrode",
+                "shift um", "slope urad", "shift um", "slope urad", "walk um/V", "walk um/V", "decentre", "tilt"));
+        w.println(String.format(Locale.ROOT, "%-12s %29s %29s %33s %25s", "",
+                "per 0.01 mm decentre", "per mrad tilt", "(decentre, tilt)", "tolerance mm, mrad"));
+        for (MisalignmentBudget.Row r : b.rows()) {
+            w.println(String.format(Locale.ROOT, "%-12s %14s %14s %14s %14s %16s %16s %12s %12s", r.name(),
+                    num(r.decentreShift() * 1e-5 * 1e6), num(r.decentreSlope() * 1e-5 * 1e6),
+                    num(r.tiltShift() * 1e-3 * 1e6), num(r.tiltSlope() * 1e-3 * 1e6),
+                    num(r.decentreWalk_per_V() * 1e-5 * 1e6), num(r.tiltWalk_per_V() * 1e-3 * 1e6),
+                    num(Units.mToMm(r.decentreTolerance_m())), num(r.tiltTolerance_rad() * 1e3)));
+        }
+        w.println();
+        w.println("Tightest: decentre of " + b.rows().get(b.tightestDecentre()).name() + " ("
+                + num(Units.mToMm(b.rows().get(b.tightestDecentre()).decentreTolerance_m())) + " mm), tilt of "
+                + b.rows().get(b.tightestTilt()).name() + " ("
+                + num(b.rows().get(b.tightestTilt()).tiltTolerance_rad() * 1e3) + " mrad).");
+        w.println("Tolerances alone (only that error present): "
+                + String.join(", ", b.rows().stream().map(r -> r.name() + " " + num(Units.mToMm(r.decentreAlone_m()))
+                        + " mm / " + num(r.tiltAlone_rad() * 1e3) + " mrad").toList()) + ".");
+        w.println("Budget: " + MisalignmentBudget.assumption() + ".");
+        w.println("Tilts turn about a transverse axis through the middle of each electrode's z extent. Walk: change of");
+        w.println("the shift per volt of the focus bias (central difference over +-"
+                + num(MisalignmentStudy.FOCUS_STEP_V) + " V): an electrode whose walk is large moves the spot as the");
+        w.println("beam is refocused. Method and accuracy: misalignment.md (first order; neglected terms of relative");
+        w.println("size misalignment / electrode scale). Harmonic-1 factorisation " + num(study.factorSeconds())
+                + " s, responses " + num(study.responseSeconds()) + " s.");
+        if (csv != null) {
+            w.println("CSV: " + csv);
+        }
+        w.println();
+        w.println(SafetyNotice.text());
+    }
+
+    static String num(double x) {
+        if (!Double.isFinite(x)) {
+            return Double.isNaN(x) ? "-" : "unlimited";
+        }
+        return String.format(Locale.ROOT, "%.4g", x);
+    }
+}

@@ -1,0 +1,71 @@
+package org.axistack.io;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.axistack.optics.MisalignmentBudget;
+
+/**
+ * The bench alignment table: RFC 4180 CSV (Commons CSV), one row per electrode and motion, units in the column
+ * names: the central ray's displacement and slope at the screen per unit misalignment (0.01 mm of decentre,
+ * 1 mrad of tilt), the spot walk per volt of the focus bias, and the budget and single-error tolerances. Empty
+ * cells where there is no value (no focus electrode, or an unlimited tolerance).
+ */
+public final class AlignmentTableCsv {
+
+    /** Column names, with their units. */
+    public static final List<String> HEADER = List.of("electrode", "motion", "unit", "screen_z_mm",
+            "screen_shift_um_per_unit", "screen_slope_urad_per_unit", "walk_um_per_unit_per_focus_V",
+            "tolerance_budget", "tolerance_alone", "tolerance_unit");
+
+    /** 0.01 mm of decentre, m. */
+    public static final double DECENTRE_UNIT_M = 1e-5;
+    /** 1 mrad of tilt. */
+    public static final double TILT_UNIT_RAD = 1e-3;
+
+    private AlignmentTableCsv() {
+    }
+
+    /** The rows in {@link #HEADER} order; null where there is no value. */
+    public static List<Object[]> rows(MisalignmentBudget b) {
+        List<Object[]> out = new ArrayList<>();
+        double z = Units.mToMm(b.screenZ_m());
+        for (MisalignmentBudget.Row r : b.rows()) {
+            out.add(new Object[] {r.name(), "decentre", "0.01 mm", z, finite(r.decentreShift() * DECENTRE_UNIT_M * 1e6),
+                finite(r.decentreSlope() * DECENTRE_UNIT_M * 1e6), finite(r.decentreWalk_per_V() * DECENTRE_UNIT_M * 1e6),
+                finite(Units.mToMm(r.decentreTolerance_m())), finite(Units.mToMm(r.decentreAlone_m())), "mm"});
+            out.add(new Object[] {r.name(), "tilt", "1 mrad", z, finite(r.tiltShift() * TILT_UNIT_RAD * 1e6),
+                finite(r.tiltSlope() * TILT_UNIT_RAD * 1e6), finite(r.tiltWalk_per_V() * TILT_UNIT_RAD * 1e6),
+                finite(r.tiltTolerance_rad() * 1e3), finite(r.tiltAlone_rad() * 1e3), "mrad"});
+        }
+        return out;
+    }
+
+    /** The whole table as CSV text. */
+    public static String text(MisalignmentBudget b) {
+        StringWriter sw = new StringWriter();
+        try (CSVPrinter p = new CSVPrinter(sw, CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new))
+                .get())) {
+            for (Object[] r : rows(b)) {
+                for (int i = 0; i < r.length; i++) {
+                    if (r[i] == null) {
+                        r[i] = "";
+                    }
+                }
+                p.printRecord(r);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return sw.toString();
+    }
+
+    private static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}
