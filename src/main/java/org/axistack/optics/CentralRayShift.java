@@ -31,18 +31,31 @@ public final class CentralRayShift {
     private final double[] nodeZ;
     /** F(z') times the quadrature weight, [2k + motion][node], 1/m per unit motion. */
     private final double[][] source;
+    /** Height and slope at the end of the quadrature range per unit slope at each node: T_12, T_22. */
+    private final double[] toEndHeight;
+    private final double[] toEndSlope;
 
     private final MisalignmentResponse response;
     private final int intervals;
+    /** End of the quadrature range (the optics' image-side plane, or a plane inside it), m. */
+    private final double rangeEnd;
 
     private CentralRayShift(MisalignmentResponse response, ParaxialOptics optics, int intervals, int electrodes,
-            double[] nodeZ, double[][] source) {
+            double[] nodeZ, double[][] source, double rangeEnd) {
         this.response = response;
         this.intervals = intervals;
         this.optics = optics;
         this.electrodes = electrodes;
         this.nodeZ = nodeZ;
         this.source = source;
+        this.rangeEnd = rangeEnd;
+        toEndHeight = new double[nodeZ.length];
+        toEndSlope = new double[nodeZ.length];
+        for (int j = 0; j < nodeZ.length; j++) {
+            TransferMatrix t = optics.transfer(nodeZ[j], rangeEnd);
+            toEndHeight[j] = t.b();
+            toEndSlope[j] = t.d();
+        }
     }
 
     /** The central-ray shifts of every response, default quadrature (96 intervals). */
@@ -89,7 +102,7 @@ public final class CentralRayShift {
                 src[2 * k + 1][j] = factor * dip[k][1];
             }
         });
-        return new CentralRayShift(response, optics, intervals, ne, z, src);
+        return new CentralRayShift(response, optics, intervals, ne, z, src, zEnd);
     }
 
     /** The paraxial optics the shifts are computed in. */
@@ -107,7 +120,7 @@ public final class CentralRayShift {
         if (electrode < 0 || electrode >= electrodes) {
             throw new IllegalArgumentException("electrode index " + electrode + " outside 0.." + (electrodes - 1));
         }
-        if (z_m < nodeZ[nodeZ.length - 1]) {
+        if (z_m < rangeEnd) {
             if (!(z_m > optics.zStart_m())) {
                 return new double[] {0, 0};
             }
@@ -117,10 +130,10 @@ public final class CentralRayShift {
         double x = 0;
         double s = 0;
         for (int j = 0; j < nodeZ.length; j++) {
-            TransferMatrix t = optics.transfer(nodeZ[j], z_m);
-            x += t.b() * f[j];
-            s += t.d() * f[j];
+            x += toEndHeight[j] * f[j];
+            s += toEndSlope[j] * f[j];
         }
-        return new double[] {x, s};
+        // beyond the end of the range the field is taken as free (the optics' image-side plane): a drift
+        return new double[] {x + (z_m - rangeEnd) * s, s};
     }
 }
