@@ -108,6 +108,10 @@ final class EnvelopeCommand implements Callable<Integer> {
     public Integer call() throws StackInputException {
         CommandLine cl = spec.commandLine();
         Stack stack = input.loadOrDemo();
+        OutputCheck.file(cl, "--csv", csv);
+        OutputCheck.file(cl, "--png", png);
+        OutputCheck.file(cl, "--scan-csv", scanCsv);
+        OutputCheck.file(cl, "--scan-png", scanPng);
         EnvelopeRequest req = request(stack, cl);
         EnvelopeSolver solver = new EnvelopeSolver(nearFill == null ? org.axistack.beam.EnvelopeSettings.defaults()
                 : checked(cl, () -> org.axistack.beam.EnvelopeSettings.defaults().withNearFill(nearFill)));

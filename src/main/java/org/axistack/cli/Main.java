@@ -87,6 +87,16 @@ public final class Main implements Runnable {
             err.println(b.getMessage() + ".");
             return EXIT_PHYSICS;
         }
+        if (ex instanceof org.axistack.io.OutputPathException o) {
+            err.println("error: " + o.getMessage() + ".");
+            return EXIT_INPUT;
+        }
+        if (ex instanceof java.io.IOException || ex instanceof java.io.UncheckedIOException) {
+            // the file system refused (full, read-only, permissions): not a bug; atomic writes left earlier files whole
+            err.println("error: a file could not be written or read: " + ex.getMessage()
+                    + ". Files already in place were left as they were; free space or choose another place.");
+            return EXIT_INPUT;
+        }
         if (ex instanceof OutcomeException o) {
             err.println(o.getMessage());
             return EXIT_PHYSICS;

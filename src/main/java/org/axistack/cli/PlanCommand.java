@@ -2,7 +2,6 @@ package org.axistack.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -92,9 +91,7 @@ final class PlanCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--tune " + tune + ": no electrode of that name; the stack has "
                     + String.join(", ", stack.names()));
         }
-        if (Files.exists(out) && !Files.isDirectory(out)) {
-            throw new CommandLine.ParameterException(cl, "--out " + out + " exists and is not a folder; choose a folder");
-        }
+        OutputCheck.folder(cl, "--out", out, org.axistack.report.HtmlReport.FILE);
         PrintWriter w = cl.getOut();
         PrintWriter err = cl.getErr();
         LensPlan plan = PlanAnalysis.solveAndRun(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV,
@@ -111,6 +108,8 @@ final class PlanCommand implements Callable<Integer> {
         Path html;
         try {
             html = PlanFolder.write(plan, out);
+        } catch (org.axistack.io.OutputPathException e) {
+            throw new CommandLine.ParameterException(cl, "--out: " + e.getMessage());
         } catch (IOException | java.io.UncheckedIOException e) {
             throw new CommandLine.ParameterException(cl,
                     "--out " + out + ": cannot write there (" + e.getMessage() + "); choose a folder you can write to");

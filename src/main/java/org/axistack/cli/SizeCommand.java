@@ -72,6 +72,7 @@ final class SizeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws StackInputException, IOException {
         Requirements req = RequirementsReader.read(file);
+        OutputCheck.folder(spec.commandLine(), "--out", out != null ? out : Path.of(stem(file) + "-sized"), null);
         if (objective != null) {
             Objective o = Objective.byKeyword(objective);
             if (o == null) {

@@ -95,6 +95,8 @@ final class SweepCommand implements Callable<Integer> {
         if (steps < 1 || steps > 100000) {
             throw new CommandLine.ParameterException(cl, "--steps must be 1..100000");
         }
+        OutputCheck.file(cl, "--csv", csv);
+        OutputCheck.file(cl, "--png", png);
         OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         PrintWriter err = cl.getErr();
         boolean silent = quiet || json;

@@ -150,6 +150,7 @@ final class TraceCommand implements Callable<Integer> {
     @Override
     public Integer call() throws StackInputException {
         Stack stack = input.loadOrDemo();
+        OutputCheck.file(spec.commandLine(), "--table", table);
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         Beam beam = stack.beam();

@@ -3,16 +3,21 @@ package org.axistack.hostile;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.BufferedReader;
+import java.io.IOException;
 import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
 import java.util.concurrent.TimeUnit;
 import javax.imageio.ImageIO;
 
 import org.axistack.cli.CliRun;
+import org.axistack.io.AtomicFiles;
 import org.axistack.trace.BundleTracer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
@@ -51,48 +56,91 @@ class OutputFilesTest {
         assertThat(Files.readString(target)).isEqualTo("old,table\n1,2\n");
     }
 
-    /**
-     * The real command killed at some moment of its run: every output file is either the old one or a whole
-     * new PNG (readable to the end); never a torn one.
-     */
-    @Test
-    @Timeout(value = 120, unit = TimeUnit.SECONDS)
-    void aKilledPlanRunLeavesOldOrWholeFiles(@TempDir Path dir) throws Exception {
-        Path out = dir.resolve("out");
-        Files.createDirectories(out);
-        byte[] old = "not yet drawn".getBytes(StandardCharsets.UTF_8);
-        Path png = out.resolve("geometry.png");
-        for (int attempt = 0; attempt < 3; attempt++) {
-            Files.write(png, old);
-            Process p = java("org.axistack.cli.Main", "512m", "plan", "--out", out.toString());
-            long t0 = System.nanoTime();
-            // kill as soon as a temporary file shows up (mid-write), or after a few seconds
-            while (p.isAlive() && System.nanoTime() - t0 < 8e9) {
-                try (var s = Files.list(out)) {
-                    if (s.anyMatch(f -> f.getFileName().toString().endsWith(".part"))) {
-                        break;
-                    }
-                }
-                Thread.sleep(1);
-            }
-            p.destroyForcibly();
-            p.waitFor(20, TimeUnit.SECONDS);
-            byte[] now = Files.readAllBytes(png);
-            if (!java.util.Arrays.equals(now, old)) {
-                assertThat(ImageIO.read(png.toFile())).as("a whole PNG").isNotNull();
+    /** What a folder holds: each file's name with its identity on disk (device and inode). */
+    private static Map<String, Object> snapshot(Path dir) throws IOException {
+        Map<String, Object> m = new TreeMap<>();
+        try (var s = Files.list(dir)) {
+            for (Path f : (Iterable<Path>) s::iterator) {
+                m.put(f.getFileName().toString(), Files.readAttributes(f, BasicFileAttributes.class).fileKey());
             }
         }
+        return m;
     }
 
-    /** A link planted in the output folder is replaced, not followed: the file it points to is untouched. */
+    /**
+     * The plan killed (SIGKILL) at random moments of its run into a folder holding a complete report: after the
+     * kill and the recovery the next run does first, the folder is the whole old set (the same files, the same
+     * inodes) or the whole new set (no file of the old set, every file the new report links present, the new
+     * bias in stack.toml); no temporary file or folder remains. One kill is aimed at the write phase (as soon as
+     * the hidden new folder appears); the other moments are drawn from a fixed seed over the length of a run.
+     */
+    @Test
+    @Timeout(value = 300, unit = TimeUnit.SECONDS)
+    void aKilledPlanLeavesTheWholeOldOrTheWholeNewReport(@TempDir Path dir) throws Exception {
+        Path stack = Files.writeString(dir.resolve("lens.toml"), OutputPathsTest.STACK);
+        Path out = dir.resolve("out");
+        long t0 = System.nanoTime();
+        CliRun.Run first = CliRun.run("plan", stack.toString(), "--no-check", "-q", "--out", out.toString());
+        assertThat(first.code()).as(first.err()).isZero();
+        double runSeconds = (System.nanoTime() - t0) * 1e-9 + 1.0; // plus the start of a new JVM
+        java.util.Random random = new java.util.Random(20261205L);
+        int wholeOld = 0, wholeNew = 0;
+        for (int attempt = 0; attempt < 4; attempt++) {
+            Map<String, Object> old = snapshot(out);
+            String bias = Integer.toString(-250 - 10 * attempt);
+            Process p = java("org.axistack.cli.Main", "512m", "plan", stack.toString(), "--no-check", "-q", "--set",
+                    "b=" + bias, "--out", out.toString());
+            long start = System.nanoTime();
+            double killAt = attempt == 0 ? Double.POSITIVE_INFINITY : 0.3 + random.nextDouble() * 1.2 * runSeconds;
+            while (p.isAlive() && (System.nanoTime() - start) * 1e-9 < Math.min(killAt, 60)) {
+                if (attempt == 0) {
+                    try (var s = Files.list(dir)) {
+                        if (s.anyMatch(f -> f.getFileName().toString().startsWith(".out.new-"))) {
+                            Thread.sleep(random.nextInt(300));
+                            break;
+                        }
+                    }
+                }
+                Thread.sleep(2);
+            }
+            p.destroyForcibly();
+            assertThat(p.waitFor(20, TimeUnit.SECONDS)).isTrue();
+            AtomicFiles.recoverFolder(out); // what the next run does first
+            Map<String, Object> now = snapshot(out);
+            if (now.equals(old)) {
+                wholeOld++;
+            } else {
+                wholeNew++;
+                for (var e : now.entrySet()) {
+                    assertThat(old.containsValue(e.getValue())).as("attempt " + attempt + ": " + e.getKey()
+                            + " of the old set beside the new report").isFalse();
+                }
+                String html = Files.readString(out.resolve("report.html"));
+                java.util.regex.Matcher m = java.util.regex.Pattern.compile("(?:src|href)=\"([^\":#]+)\"").matcher(html);
+                while (m.find()) {
+                    assertThat(out.resolve(m.group(1))).as("linked from the report").exists();
+                }
+                assertThat(Files.readString(out.resolve("stack.toml"))).contains("bias_V = " + bias);
+            }
+            try (var s = Files.list(dir)) {
+                assertThat(s.map(f -> f.getFileName().toString()).sorted().toList()).as("attempt " + attempt)
+                        .containsExactly("lens.toml", "out");
+            }
+        }
+        assertThat(wholeOld + wholeNew).isEqualTo(4);
+    }
+
+    /** A link planted in the report folder is replaced with the rest of the set, never followed: its target stays. */
     @Test
     void outputNeverFollowsALinkOutOfTheFolder(@TempDir Path dir) throws Exception {
+        Path stack = Files.writeString(dir.resolve("lens.toml"), OutputPathsTest.STACK);
         Path outside = dir.resolve("precious.png");
         Files.writeString(outside, "keep me");
         Path out = dir.resolve("out");
         Files.createDirectories(out);
+        Files.writeString(out.resolve("report.html"), "an earlier report");
         Files.createSymbolicLink(out.resolve("geometry.png"), outside);
-        CliRun.Run r = CliRun.run("plan", "--out", out.toString());
+        CliRun.Run r = CliRun.run("plan", stack.toString(), "--no-check", "-q", "--out", out.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(Files.readString(outside)).isEqualTo("keep me");
         assertThat(Files.isSymbolicLink(out.resolve("geometry.png"))).isFalse();
