@@ -13,8 +13,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.beam.BoreClearance;
 import org.axistack.beam.EnvelopeCurve;
 import org.axistack.beam.EnvelopePoint;
@@ -24,6 +22,7 @@ import org.axistack.beam.ScanPoint;
 import org.axistack.beam.ScanResult;
 import org.axistack.beam.Waist;
 import org.axistack.io.AtomicFiles;
+import org.axistack.io.CsvTable;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.report.SafetyNotice;
@@ -223,14 +222,14 @@ final class EnvelopeOutput {
 
     static void writeEnvelopeCsv(Path file, EnvelopeStudyResult r) throws IOException {
         AtomicFiles.write(file, out -> {
-            try (CSVPrinter p = new CSVPrinter(new OutputStreamWriter(out, StandardCharsets.UTF_8), CSVFormat.RFC4180)) {
-                p.printRecord("z_mm", "radius_mm", "slope_mrad", "radius_zero_current_mm", "radius_zero_emittance_mm",
-                        "perveance", "emittance_mm_mrad");
+            try (CsvTable.Writer p = CsvTable.writer(new OutputStreamWriter(out, StandardCharsets.UTF_8), List.of("z_mm",
+                    "radius_mm", "slope_mrad", "radius_zero_current_mm", "radius_zero_emittance_mm", "perveance",
+                    "emittance_mm_mrad"))) {
                 for (EnvelopePoint e : r.full().points()) {
-                    p.printRecord(mm(e.z_m()), mm(e.radius_m()), Units.radToMrad(e.slope_rad()),
+                    p.row(java.util.Arrays.asList(mm(e.z_m()), mm(e.radius_m()), Units.radToMrad(e.slope_rad()),
                             r.emittanceOnly().covers(e.z_m()) ? mm(r.emittanceOnly().at(e.z_m()).radius_m()) : "",
                             r.spaceChargeOnly().covers(e.z_m()) ? mm(r.spaceChargeOnly().at(e.z_m()).radius_m()) : "",
-                            e.perveance(), e.emittance_m_rad() * 1e6);
+                            e.perveance(), e.emittance_m_rad() * 1e6));
                 }
             }
         });
@@ -238,12 +237,12 @@ final class EnvelopeOutput {
 
     static void writeScanCsv(Path file, ScanResult s) throws IOException {
         AtomicFiles.write(file, out -> {
-            try (CSVPrinter p = new CSVPrinter(new OutputStreamWriter(out, StandardCharsets.UTF_8), CSVFormat.RFC4180)) {
-                p.printRecord("current_A", "waist_z_mm", "waist_radius_mm", "end_radius_mm", "termination");
+            try (CsvTable.Writer p = CsvTable.writer(new OutputStreamWriter(out, StandardCharsets.UTF_8),
+                    List.of("current_A", "waist_z_mm", "waist_radius_mm", "end_radius_mm", "termination"))) {
                 for (ScanPoint x : s.points()) {
-                    p.printRecord(x.current_A(), x.waist().map(w -> (Object) mm(w.z_m())).orElse(""),
+                    p.row(java.util.Arrays.asList(x.current_A(), x.waist().map(w -> (Object) mm(w.z_m())).orElse(""),
                             x.waist().map(w -> (Object) mm(w.radius_m())).orElse(""), mm(x.endRadius_m()),
-                            x.termination().kind().name().toLowerCase(Locale.ROOT));
+                            x.termination().kind().name().toLowerCase(Locale.ROOT)));
                 }
             }
         });

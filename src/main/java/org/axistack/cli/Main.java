@@ -73,7 +73,7 @@ public final class Main implements Runnable {
     private static int onExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parsed) {
         PrintWriter err = cl.getErr();
         if (ex instanceof StackInputException s) {
-            err.println("error: " + s.getMessage());
+            err.println("error: " + org.axistack.io.TextSafety.printable(s.getMessage()));
             return EXIT_INPUT;
         }
         if (ex instanceof CommandLine.ParameterException p) {
@@ -88,12 +88,12 @@ public final class Main implements Runnable {
             return EXIT_PHYSICS;
         }
         if (ex instanceof org.axistack.io.OutputPathException o) {
-            err.println("error: " + o.getMessage() + ".");
+            err.println("error: " + org.axistack.io.TextSafety.printable(o.getMessage()) + ".");
             return EXIT_INPUT;
         }
         if (ex instanceof java.io.IOException || ex instanceof java.io.UncheckedIOException) {
             // the file system refused (full, read-only, permissions): not a bug; atomic writes left earlier files whole
-            err.println("error: a file could not be written or read: " + ex.getMessage()
+            err.println("error: a file could not be written or read: " + org.axistack.io.TextSafety.printable(ex.getMessage())
                     + ". Files already in place were left as they were; free space or choose another place.");
             return EXIT_INPUT;
         }
@@ -113,7 +113,7 @@ public final class Main implements Runnable {
     private static int onParameterException(CommandLine.ParameterException ex, String[] args) {
         CommandLine cl = ex.getCommandLine();
         PrintWriter err = cl.getErr();
-        err.println("error: " + ex.getMessage() + ". Fix: see '" + cl.getCommandSpec().qualifiedName() + " --help'.");
+        err.println("error: " + org.axistack.io.TextSafety.printable(ex.getMessage()) + ". Fix: see '" + cl.getCommandSpec().qualifiedName() + " --help'.");
         CommandLine.UnmatchedArgumentException.printSuggestions(ex, err);
         return EXIT_INPUT;
     }

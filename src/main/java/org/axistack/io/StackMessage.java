@@ -89,6 +89,9 @@ public enum StackMessage {
             "list the corners as points_mm = [[z1, r1], [z2, r2], ...]"),
     DUPLICATE_NAME("the name '{name}' is already used by the electrode at line {other}",
             "give every electrode its own name (the names are used by --set)"),
+    CONTROL_CHARACTER("character {index} of the text is the control character {code}, which a terminal would act on"
+            + " (clear the screen, retitle the window) and files would carry",
+            "remove it (in TOML it may be written as an escape such as \\u001b): names and text hold printable characters only"),
     BLANK_NAME("the electrode name is empty",
             "give the electrode a short name such as \"focus\""),
     BAD_POINT("point {index} is not [z, r] or [z, r, via_z, via_r] in millimetres",

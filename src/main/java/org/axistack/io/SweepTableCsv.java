@@ -1,16 +1,11 @@
 package org.axistack.io;
 
-import java.io.IOException;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.util.List;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.tune.SweepPoint;
 
 /**
- * The table of a bias sweep (optics against one bias): RFC 4180 CSV (Commons CSV) with unit-named columns, one row
+ * The table of a bias sweep (optics against one bias): RFC 4180 CSV ({@link CsvTable}) with unit-named columns, one row
  * per point, empty cells where a point has no value. Shared by the sweep command (its --csv file and JSON rows), the
  * plan report's sweep.csv and the desktop window's report export.
  */
@@ -35,22 +30,11 @@ public final class SweepTableCsv {
 
     /** The whole table as CSV text. */
     public static String text(List<SweepPoint> points) {
-        StringWriter sw = new StringWriter();
-        try (CSVPrinter p = new CSVPrinter(sw, CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new))
-                .get())) {
-            for (SweepPoint pt : points) {
-                Object[] r = row(pt);
-                for (int i = 0; i < r.length; i++) {
-                    if (r[i] == null) {
-                        r[i] = "";
-                    }
-                }
-                p.printRecord(r);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        List<List<Object>> rows = new java.util.ArrayList<>();
+        for (SweepPoint pt : points) {
+            rows.add(java.util.Arrays.asList(row(pt)));
         }
-        return sw.toString();
+        return CsvTable.text(HEADER, rows);
     }
 
     private static Double mm(double m) {

@@ -168,6 +168,11 @@ final class TableFields {
             throw error(StackMessage.WRONG_TYPE, key, Map.of("expected", "text in double quotes", "found",
                     typeName(v), "example", key + " = " + example));
         }
+        int bad = TextSafety.firstUnsafe(s);
+        if (bad >= 0) {
+            throw error(StackMessage.CONTROL_CHARACTER, key, Map.of("code", TextSafety.describe(s.codePointAt(bad)),
+                    "index", s.codePointCount(0, bad) + 1));
+        }
         return s;
     }
 

@@ -8,14 +8,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.trace.BundleResult;
 import org.axistack.trace.RayPoint;
 import org.axistack.trace.TableRow;
 
 /**
- * The trajectory table of {@code trace --table}: every ray at every plane, RFC 4180 CSV (Commons CSV)
+ * The trajectory table of {@code trace --table}: every ray at every plane, RFC 4180 CSV ({@link CsvTable})
  * with a header whose names carry units, written atomically (temporary file, then move). Shared by the
  * trace command and the desktop window.
  */
@@ -30,9 +28,9 @@ public final class TraceTableCsv {
     public static void write(Path file, BundleResult res) throws IOException {
         AtomicFiles.write(file, os -> {
             Writer w = new OutputStreamWriter(os, StandardCharsets.UTF_8);
-            try (CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(HEADER).get())) {
+            try (CsvTable.Writer csv = CsvTable.writer(w, List.of(HEADER))) {
                 for (TableRow row : res.tableRows()) {
-                    csv.printRecord(cells(row));
+                    csv.row(cells(row));
                 }
             }
         });

@@ -107,8 +107,21 @@ public final class GeometryChart {
             for (boolean mirror : new boolean[] {false, true}) {
                 Path2D path = path(c, mirror);
                 if (sheet) {
-                    plot.addAnnotation(new XYShapeAnnotation(path, new BasicStroke(3.5f, BasicStroke.CAP_BUTT,
-                            BasicStroke.JOIN_ROUND), paint, null), false);
+                    // a sheet is drawn segment by segment: a shape annotation maps its bounding box onto the data
+                    // area, which for a straight sheet (a tube of zero wall: zero height) divides 0 by 0 and gives
+                    // NaN coordinates (missing from the PNG, NaN in the SVG)
+                    BasicStroke stroke = new BasicStroke(3.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND);
+                    double[] prev = null;
+                    for (java.awt.geom.PathIterator it = path.getPathIterator(null); !it.isDone(); it.next()) {
+                        double[] q = new double[6];
+                        int type = it.currentSegment(q);
+                        double[] pt = {q[0], q[1]};
+                        if (type == java.awt.geom.PathIterator.SEG_LINETO && prev != null) {
+                            plot.addAnnotation(new org.jfree.chart.annotations.XYLineAnnotation(prev[0], prev[1], pt[0],
+                                    pt[1], stroke, paint), false);
+                        }
+                        prev = type == java.awt.geom.PathIterator.SEG_CLOSE ? prev : pt;
+                    }
                 } else {
                     plot.addAnnotation(new XYShapeAnnotation(path, new BasicStroke(1f), darker(paint), paint), false);
                 }

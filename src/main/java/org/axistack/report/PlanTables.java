@@ -1,14 +1,11 @@
 package org.axistack.report;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
+import org.axistack.io.CsvTable;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
@@ -128,14 +125,6 @@ final class PlanTables {
     }
 
     private static String csv(List<String> header, List<List<Object>> rows) {
-        StringBuilder b = new StringBuilder();
-        try (CSVPrinter p = new CSVPrinter(b, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get())) {
-            for (List<Object> r : rows) {
-                p.printRecord(r);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        return b.toString();
+        return CsvTable.text(header, rows);
     }
 }

@@ -121,6 +121,10 @@ final class MalformedStacks {
         add(c, "bias missing", edit("bias_V = 0.0\n", ""), MISSING_KEY, 6, "bias_V", "bias_V");
         add(c, "name missing", edit("name = \"a\"\n", ""), MISSING_KEY, 6, "name", "name");
         add(c, "blank name", edit("name = \"a\"", "name = \"  \""), BLANK_NAME, 7, "name", "empty");
+        add(c, "name with an escape sequence", edit("name = \"a\"", "name = \"a\\u001b]0;owned\\u0007\""), CONTROL_CHARACTER, 7, "name", "U+001B (escape)");
+        add(c, "name with a NUL", edit("name = \"a\"", "name = \"a\\u0000\""), CONTROL_CHARACTER, 7, "name", "U+0000 (NUL)");
+        add(c, "name with a bidi override", edit("name = \"a\"", "name = \"a\\u202Eb\""), CONTROL_CHARACTER, 7, "name", "U+202E");
+        add(c, "title with a bell", edit("title = \"t\"", "title = \"lens\\u0007\""), CONTROL_CHARACTER, 1, "title", "U+0007 (bell)");
         add(c, "name is a number", edit("name = \"a\"", "name = 7"), WRONG_TYPE, 7, "name", "the number 7");
         add(c, "duplicate names", edit("name = \"b\"", "name = \"a\""), DUPLICATE_NAME, 15, "name", "line 6");
         add(c, "unknown electrode key", edit("radius_mm = 5.0", "radius_m = 5.0"), UNKNOWN_KEY, 10, "radius_m", "did you mean 'radius_mm'");
