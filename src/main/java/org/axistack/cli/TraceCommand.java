@@ -192,6 +192,21 @@ final class TraceCommand implements Callable<Integer> {
             throw usage(e.getMessage());
         }
 
+        if (!exact) {
+            double step = mapStepMm != null ? Units.mmToM(mapStepMm) : bore / 40;
+            if (!(step > 0) || !Double.isFinite(step)) {
+                throw usage("--map-step must be a positive number of mm");
+            }
+            double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, screenZ) - 4 * step);
+            double z1 = Math.min(geometry.regionZMax_m(), screenZ + 4 * step);
+            double nodes = FieldMap.nodeCount(z0, z1, bore, step);
+            if (nodes > FieldMap.MAX_NODES) {
+                throw usage(String.format(Locale.ROOT, "--map-step %s mm would make a field map of %.3g nodes, more than"
+                        + " the limit of %d: use a step of at least %s mm (or --exact)", num(Units.mToMm(step)), nodes,
+                        FieldMap.MAX_NODES, String.format(Locale.ROOT, "%.3g", Units.mToMm(Math.sqrt(Math.max(z1 - z0,
+                                step) * bore / FieldMap.MAX_NODES) * 1.05))));
+            }
+        }
         err.println("solving the field (" + stack.mesh().targetElements() + " elements) ...");
         BiasedField biased = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, false))
                 .withBiases(stack.biases_V());

@@ -200,7 +200,12 @@ final class ElectrodeReader {
         for (int i = 1; i < pts.size(); i++) {
             Pt a = pts.get(i - 1), b = pts.get(i);
             if (samePoint(a, b)) {
-                throw t.errorAt(StackMessage.REPEATED_POINT, b.line(), key, Map.of("index", i + 1, "z", fmt(b.z()), "r", fmt(b.r())));
+                double gap = Math.hypot(a.z() - b.z(), a.r() - b.r());
+                String relation = gap == 0 ? "repeats" : "is only " + fmt(gap) + " mm, less than the smallest size of "
+                        + fmt(Limits.MIN_SIZE_MM) + " mm, from";
+                throw t.errorAt(StackMessage.REPEATED_POINT, b.line(), key, Map.of("index", i + 1, "z", fmt(b.z()),
+                        "r", fmt(b.r()), "relation", relation, "pz", fmt(a.z()), "pr", fmt(a.r()), "min",
+                        fmt(Limits.MIN_SIZE_MM)));
             }
             ZR za = zr(a), zb = zr(b);
             if (b.via() == null) {
@@ -215,6 +220,18 @@ final class ElectrodeReader {
         }
         if (closed && !closesOnItself) {
             segs.add(new Segment.Line(zr(pts.get(pts.size() - 1)), zr(pts.get(0))));
+        }
+        if (closed) {
+            // an edge along the axis has no area of revolution: its surface charge rings shrink to nothing and the
+            // collocation matrix becomes singular; the same solid is an open outline from the axis to the axis
+            for (int i = 0; i < pts.size(); i++) {
+                Pt a = pts.get(i), b = pts.get((i + 1) % pts.size());
+                boolean straight = i + 1 == pts.size() || b.via() == null;
+                if (a.r() == 0 && b.r() == 0 && straight && a.z() != b.z()) {
+                    throw t.errorAt(StackMessage.AXIS_EDGE, a.line(), key, Map.of("from", fmt(Math.min(a.z(), b.z())),
+                            "to", fmt(Math.max(a.z(), b.z()))));
+                }
+            }
         }
         return new Contour(segs, closed);
     }

@@ -92,14 +92,18 @@ public enum StackMessage {
     CONTROL_CHARACTER("character {index} of the text is the control character {code}, which a terminal would act on"
             + " (clear the screen, retitle the window) and files would carry",
             "remove it (in TOML it may be written as an escape such as \\u001b): names and text hold printable characters only"),
+    AXIS_EDGE("the closed outline runs along the axis from z = {from} mm to z = {to} mm; a surface on the axis has no"
+            + " area of revolution, so the field cannot be solved",
+            "write the solid as an open outline (closed = false) that starts on the axis, goes round the shape and"
+            + " ends on the axis, without the edge along r = 0"),
     BLANK_NAME("the electrode name is empty",
             "give the electrode a short name such as \"focus\""),
     BAD_POINT("point {index} is not [z, r] or [z, r, via_z, via_r] in millimetres",
             "write each point as two numbers, or four for an arc through (via_z, via_r)"),
     NEGATIVE_RADIUS("point {index} has r = {r} mm, below the axis",
             "the meridian outline lives in r >= 0 (the axis is r = 0); correct the point"),
-    REPEATED_POINT("point {index} repeats the previous point (z = {z} mm, r = {r} mm)",
-            "remove the repeated point"),
+    REPEATED_POINT("point {index} (z = {z} mm, r = {r} mm) {relation} the previous point (z = {pz} mm, r = {pr} mm)",
+            "remove the point, or move it at least {min} mm from the previous one"),
     ARC_COLLINEAR("point {index}: the arc's via point lies on the straight line between its ends",
             "move the via point off the chord, or write the point as [z, r] for a straight segment"),
     SELF_CROSSING("the outline crosses or touches itself near z = {z} mm, r = {r} mm",
@@ -167,7 +171,12 @@ public enum StackMessage {
 
     /** "problem. Fix: fix." with the placeholders filled; a missing value is an error in the caller. */
     public String format(Map<String, ?> values) {
-        return fill(problem, values) + ". Fix: " + fill(fix, values) + ".";
+        return tidy(fill(problem, values)) + ". Fix: " + tidy(fill(fix, values)) + ".";
+    }
+
+    /** One space between words where an empty value (a unitless number's unit) left two or one before a stop. */
+    private static String tidy(String s) {
+        return s.replaceAll(" {2,}", " ").replaceAll(" +([.,;:)])", "$1").strip();
     }
 
     private String fill(String template, Map<String, ?> values) {

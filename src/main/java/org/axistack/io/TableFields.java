@@ -284,11 +284,19 @@ final class TableFields {
         return l;
     }
 
+    /** A number for a message: plain decimal notation (0.0005, not 5.0E-4), whole numbers without a point. */
     static String fmt(double x) {
+        if (!Double.isFinite(x)) {
+            return String.valueOf(x);
+        }
         if (x == Math.rint(x) && Math.abs(x) < 1e15) {
             return String.valueOf((long) x);
         }
-        return String.valueOf(x);
+        java.math.BigDecimal d = java.math.BigDecimal.valueOf(x);
+        if (Math.abs(x) >= 1e-9 && Math.abs(x) < 1e15) {
+            return d.round(new java.math.MathContext(12)).stripTrailingZeros().toPlainString();
+        }
+        return d.round(new java.math.MathContext(6)).toString().replace("E+", " x 10^").replace("E-", " x 10^-");
     }
 
     static List<String> keys(Set<String> s) {

@@ -53,6 +53,20 @@ public final class FieldMap implements Field {
      * @param step_m   largest node spacing, m
      * @param progress told about the fraction done as rays (done, total) = (nodes done, nodes); may cancel
      */
+    /** Most nodes a map may have (three arrays of doubles: about 100 MB). */
+    public static final int MAX_NODES = 4_000_000;
+
+    /**
+     * The number of nodes of a map over [zMin, zMax] x [0, rMax] with this step, computed in floating point so that
+     * a tiny step gives a huge number (never an overflowed one); infinity for a step that is not positive.
+     */
+    public static double nodeCount(double zMin_m, double zMax_m, double rMax_m, double step_m) {
+        if (!(step_m > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return (Math.max(1, Math.ceil((zMax_m - zMin_m) / step_m)) + 1) * (Math.max(1, Math.ceil(rMax_m / step_m)) + 1);
+    }
+
     public FieldMap(Field source, Field base, ElectrodeGeometry geometry, double zMin_m, double zMax_m,
             double rMax_m, double step_m, TraceProgress progress) {
         if (!(zMax_m > zMin_m) || !(rMax_m > 0) || !(step_m > 0) || !Double.isFinite(zMax_m - zMin_m + rMax_m)) {
@@ -60,12 +74,14 @@ public final class FieldMap implements Field {
         }
         this.source = source;
         this.base = base;
+        double count = nodeCount(zMin_m, zMax_m, rMax_m, step_m);
+        if (count > MAX_NODES) {
+            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT, "field map too fine: %.3g nodes,"
+                    + " more than %d; use a larger step", count, MAX_NODES));
+        }
         this.nz = Math.max(1, (int) Math.ceil((zMax_m - zMin_m) / step_m));
         this.nr = Math.max(1, (int) Math.ceil(rMax_m / step_m));
         long nodes = (long) (nz + 1) * (nr + 1);
-        if (nodes > 4_000_000) {
-            throw new IllegalArgumentException("field map too fine: " + nodes + " nodes; use a larger step");
-        }
         this.z0 = zMin_m;
         this.hz = (zMax_m - zMin_m) / nz;
         this.hr = rMax_m / nr;

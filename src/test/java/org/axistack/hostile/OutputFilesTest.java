@@ -164,6 +164,19 @@ class OutputFilesTest {
         assertThat(fan.err()).contains("--azimuths");
     }
 
+    /** A tiny field-map step is refused before the solve with the node count (no overflow) and the smallest step. */
+    @Test
+    @Timeout(value = 30, unit = TimeUnit.SECONDS)
+    void aTinyMapStepIsRefusedUpFront() {
+        for (String step : new String[] {"1e-9", "1e-300", "0.0001"}) {
+            CliRun.Run r = CliRun.run("trace", "--count", "3", "--map-step", step);
+            assertThat(r.code()).as(r.err()).isEqualTo(2);
+            assertThat(r.err()).contains("--map-step").contains("more than the limit of 4000000").contains("use a step of at least")
+                    .doesNotContain("solving").doesNotContain("4611686018427387904").doesNotContain("E-");
+        }
+        assertThat(org.axistack.trace.FieldMap.nodeCount(0, 0.1, 0.01, 1e-12)).isGreaterThan(1e18).isFinite();
+    }
+
     /** In a 256 MB heap the solver refuses a mesh the dense matrix would not fit, with the fix in the message. */
     @Test
     @Timeout(value = 120, unit = TimeUnit.SECONDS)

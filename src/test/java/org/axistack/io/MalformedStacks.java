@@ -172,6 +172,10 @@ final class MalformedStacks {
                 TOO_FEW_POINTS, 19, "points_mm", "at least 2");
         add(c, "outline repeats a point", replaceB("shape = \"outline\"\nbias_V = 1.0\nclosed = false\npoints_mm = [[5.0, 8.0], [5.0, 8.0], [9.0, 8.0]]"),
                 REPEATED_POINT, 19, "points_mm", "point 2");
+        add(c, "outline point 0.5 um from the previous", replaceB("shape = \"outline\"\nbias_V = 1.0\nclosed = false\npoints_mm = [[5.0, 8.0], [5.0005, 8.0], [9.0, 8.0]]"),
+                REPEATED_POINT, 19, "points_mm", "point 2 (z = 5.0005 mm, r = 8 mm) is only 0.0005 mm, less than the smallest size of 0.001 mm, from the previous point (z = 5 mm, r = 8 mm)");
+        add(c, "closed outline with an edge on the axis", replaceB("shape = \"outline\"\nbias_V = 1.0\nclosed = true\npoints_mm = [[5.0, 0.0], [9.0, 0.0], [9.0, 3.0], [5.0, 3.0]]"),
+                AXIS_EDGE, 19, "points_mm", "open outline (closed = false)");
         add(c, "outline arc with collinear via", replaceB("shape = \"outline\"\nbias_V = 1.0\nclosed = false\npoints_mm = [[5.0, 8.0], [9.0, 8.0, 7.0, 8.0]]"),
                 ARC_COLLINEAR, 19, "points_mm", "via point");
         add(c, "outline without closed", replaceB("shape = \"outline\"\nbias_V = 1.0\npoints_mm = [[5.0, 8.0], [9.0, 8.0]]"),
@@ -187,6 +191,7 @@ final class MalformedStacks {
         add(c, "outline with too many points", replaceB(many + "]"), TOO_MANY_POINTS, 19, "points_mm", "600");
         // other tables
         add(c, "mesh budget too large", append("[mesh]\ntarget_elements = 100000\n"), OUT_OF_RANGE, 22, "target_elements", "12000");
+        add(c, "mesh budget a million", append("[mesh]\ntarget_elements = 1000000\n"), OUT_OF_RANGE, 22, "target_elements", "1000000 is outside the accepted range 8 to 12000. Fix");
         add(c, "mesh budget fractional", append("[mesh]\ntarget_elements = 1200.5\n"), WRONG_TYPE, 22, "target_elements", "whole number");
         add(c, "mesh key misspelt", append("[mesh]\nedge_level = 10\n"), UNKNOWN_KEY, 22, "edge_level", "did you mean 'edge_levels'");
         add(c, "limits in the wrong order", append("[limits]\ncomfort_surface_field_V_per_mm = 8000.0\naggressive_surface_field_V_per_mm = 4000.0\n"),
