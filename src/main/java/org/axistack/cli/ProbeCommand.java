@@ -136,7 +136,7 @@ final class ProbeCommand implements Callable<Integer> {
         ProbeStudy study = ProbeStudy.run(solution, stack, settings, stack.screenZ_m().isPresent() ? name : null);
         if (out != null) {
             String title = "Probe current against size: " + stack.title();
-            AtomicFiles.writeFolder(out, dir -> {
+            AtomicFiles.writeFolder(out, "probe.csv", n -> n.startsWith("probe."), dir -> {
                 AtomicFiles.writeString(AtomicFiles.inside(dir, "probe.csv"), ProbeTableCsv.text(study));
                 ChartFiles.writePng(ProbeChart.of(study, title), 1000, 700, AtomicFiles.inside(dir, "probe.png"));
                 ChartFiles.writeSvg(ProbeChart.of(study, title), 1000, 700, AtomicFiles.inside(dir, "probe.svg"));
