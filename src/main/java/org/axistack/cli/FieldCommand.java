@@ -52,7 +52,7 @@ final class FieldCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws StackInputException {
-        Stack stack = input.load(spec.commandLine());
+        Stack stack = input.loadOrDemo();
         double[] range = axisRange(stack);
         PrintWriter out = spec.commandLine().getOut();
         FieldSolution solution = BemSolver.solve(stack.electrodes(), stack.mesh(),

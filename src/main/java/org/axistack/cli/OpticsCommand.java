@@ -57,9 +57,18 @@ final class OpticsCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
     boolean json;
 
+    @Option(names = "--accuracy", paramLabel = "REL", defaultValue = "1e-5",
+            description = "Relative accuracy asked of the cardinal elements (default ${DEFAULT-VALUE} of f); exit 1 when"
+                    + " the estimated error is larger.")
+    double accuracy;
+
     @Override
     public Integer call() throws StackInputException {
-        Stack stack = input.load(spec.commandLine());
+        if (!(accuracy > 0 && accuracy < 1)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--accuracy must lie between 0 and 1 (a relative error, e.g. 1e-5), got " + accuracy);
+        }
+        Stack stack = input.loadOrDemo();
         PrintWriter err = spec.commandLine().getErr();
         org.axistack.field.SolveProgress progress = SolveReporter.to(err, json);
         BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), progress).biased();
@@ -73,8 +82,8 @@ final class OpticsCommand implements Callable<Integer> {
             optics = ParaxialOptics.of(field, stack);
         } catch (StartPlaneException e) {
             throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
-                    "%s: [beam] start_z_mm = %s mm cannot be used: rays must start before the lens exit plane"
-                            + " (usable %s .. %s mm); set start_z_mm in the field-free entrance region or remove it",
+                    "%s: [beam] start_z_mm = %s mm cannot be used (traced range %s .. %s mm); give a finite start"
+                            + " before the screen, or remove it",
                     input.shownAs(), PlanCommand.num(Units.mToMm(e.startZ_m())),
                     PlanCommand.num(Units.mToMm(e.usableFromZ_m())), PlanCommand.num(Units.mToMm(e.usableToZ_m()))));
         } catch (ReflectionException e) {
@@ -83,10 +92,20 @@ final class OpticsCommand implements Callable<Integer> {
             print(out);
             throw new OutcomeException(e.getMessage() + "; lower the retarding bias or raise the beam energy");
         }
-        if (objectZ.isPresent() && !(objectZ.getAsDouble() < optics.zEnd_m())) {
+        double exit = optics.lensExitZ_m(stack.maxZ_m());
+        String exitIs = optics.imageEnd().rule() == org.axistack.optics.FieldEnd.Rule.FAR_FIELD
+                ? "the end of the last electrode" : "where the lens field is taken as ended inside the exit tube";
+        if (stack.beam().startZ_m().isPresent() && !(stack.beam().startZ_m().getAsDouble() < exit)) {
             throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
-                    "--object-z %s mm lies at or after the image-side reference plane (%s mm); give an object before it",
-                    PlanCommand.num(Units.mToMm(objectZ.getAsDouble())), PlanCommand.num(Units.mToMm(optics.zEnd_m()))));
+                    "%s: [beam] start_z_mm = %s mm lies after the lens (z = %s mm is %s); set start_z_mm before"
+                            + " the lens or remove it", input.shownAs(),
+                    PlanCommand.num(Units.mToMm(stack.beam().startZ_m().getAsDouble())), PlanCommand.num(Units.mToMm(exit)),
+                    exitIs));
+        }
+        if (objectZ.isPresent() && !(objectZ.getAsDouble() < exit)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
+                    "--object-z %s mm lies at or after the lens (z = %s mm is %s); give an object before it",
+                    PlanCommand.num(Units.mToMm(objectZ.getAsDouble())), PlanCommand.num(Units.mToMm(exit)), exitIs));
         }
         CardinalElements c = optics.cardinal();
         out.put("reflected", false);
@@ -94,7 +113,13 @@ final class OpticsCommand implements Callable<Integer> {
         out.put("lens_kind", c.kind().name().toLowerCase(Locale.ROOT));
         out.put("reference_plane_object_z_mm", mm(c.zStart_m()));
         out.put("reference_plane_image_z_mm", mm(c.zEnd_m()));
+        out.put("field_end_object", c.objectEnd().rule().key());
+        out.put("field_end_image", c.imageEnd().rule().key());
+        out.put("field_ends", org.axistack.optics.OpticsAccuracy.ends(c));
         out.put("plane_sensitivity", c.planeSensitivity());
+        out.put("far_field_share", c.farFieldShare());
+        out.put("error_estimate", c.errorEstimate());
+        out.put("accuracy_requested", accuracy);
         out.put("object_z_mm", objectZ.isPresent() ? mm(objectZ.getAsDouble()) : null);
         out.put("focal_length_object_mm", mm(c.focalLengthObject_m()));
         out.put("focal_length_image_mm", mm(c.focalLengthImage_m()));
@@ -110,9 +135,10 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("magnification", finite(im.lateralMagnification()));
             out.put("angular_magnification", finite(im.angularMagnification()));
             out.put("real_image_z_mm", im.realImageZ_m().isPresent() ? mm(im.realImageZ_m().getAsDouble()) : null);
+            out.put("real_magnification", finite(im.realLateralMagnification()));
         }
         if (c.kind() != CardinalElements.Kind.AFOCAL) {
-            Aberrations ab = objectZ.isPresent() && Double.isFinite(optics.imaging(objectZ.getAsDouble()).imageZ_m())
+            Aberrations ab = objectZ.isPresent() && objectZ.getAsDouble() < optics.zEnd_m() && Double.isFinite(optics.imaging(objectZ.getAsDouble()).imageZ_m())
                     ? optics.aberrations(objectZ.getAsDouble()) : optics.aberrations();
             out.put("spherical_aberration_mm", mm(ab.sphericalImage_m()));
             out.put("chromatic_aberration_mm", mm(ab.chromaticImage_m()));
@@ -131,7 +157,14 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("aberration_convention", "undefined for an afocal lens");
         }
         DeflectionOutput.put(out, stack, field, optics, progress);
+        java.util.List<String> warnings = new java.util.ArrayList<>();
+        org.axistack.optics.OpticsAccuracy.shortfall(c, accuracy).ifPresent(warnings::add);
+        org.axistack.optics.OpticsAccuracy.closeTheLens(c).ifPresent(warnings::add);
+        out.put("warnings", warnings);
         print(out);
+        org.axistack.optics.OpticsAccuracy.shortfall(c, accuracy).ifPresent(w -> {
+            throw new OutcomeException(w);
+        });
         if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
             throw new OutcomeException("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
                     + "): a parallel beam leaves " + (c.kind() == CardinalElements.Kind.AFOCAL ? "parallel" : "diverging")
@@ -177,19 +210,28 @@ final class OpticsCommand implements Callable<Integer> {
         w.println("  relativistic paraxial ray equation; lens " + out.get("lens_kind")
                 + ("converging".equals(out.get("lens_kind")) || out.get("real_focus_image_z_mm") == null ? ""
                         : " asymptotically, but the real ray crosses the axis inside the field (a strong lens)"));
-        w.println(String.format(Locale.ROOT, "  reference planes (taken as field-free): z = %s and %s mm; moving them inward"
-                + " changes the results by %.1e (relative)", f(out.get("reference_plane_object_z_mm")),
-                f(out.get("reference_plane_image_z_mm")), (Double) out.get("plane_sensitivity")));
+        w.println("  asymptotic cardinal elements (where the rays' straight asymptotes meet); the field ends:");
+        for (Object line : (java.util.List<?>) out.get("field_ends")) {
+            w.println("    " + line);
+        }
+        w.println(String.format(Locale.ROOT, "  estimated error %.1e of f (asked: %.0e)%s", (Double) out.get("error_estimate"),
+                (Double) out.get("accuracy_requested"), (Double) out.get("far_field_share") > 0
+                        ? String.format(Locale.ROOT, "; the far field beyond the traced range contributes %.1e",
+                                (Double) out.get("far_field_share"))
+                        : String.format(Locale.ROOT, "; moving the ended planes inward changes the results by %.1e",
+                                (Double) out.get("plane_sensitivity"))));
         w.println("                      object side       image side");
         row(w, "focal length f1, f2", out.get("focal_length_object_mm"), out.get("focal_length_image_mm"));
         row(w, "focal point F1, F2", out.get("focal_point_object_z_mm"), out.get("focal_point_image_z_mm"));
         row(w, "principal plane H1, H2", out.get("principal_plane_object_z_mm"), out.get("principal_plane_image_z_mm"));
         row(w, "real axis crossing", out.get("real_focus_object_z_mm"), out.get("real_focus_image_z_mm"));
-        w.println("  (mm; focal lengths positive when converging; F, H are z positions)");
+        w.println("  (mm; focal lengths positive when converging; F, H are z positions; the real axis crossing is where");
+        w.println("   the ray that enters (leaves) parallel, traced in the full field, crosses the axis)");
         if (out.get("object_z_mm") != null) {
-            w.println("  object at z = " + f(out.get("object_z_mm")) + " mm: image at z = " + f(out.get("image_z_mm"))
-                    + " mm, lateral magnification " + f(out.get("magnification")) + ", angular magnification "
-                    + f(out.get("angular_magnification")));
+            w.println("  object at z = " + f(out.get("object_z_mm")) + " mm: real image at z = " + f(out.get("real_image_z_mm"))
+                    + " mm (traced in the full field), magnification there " + f(out.get("real_magnification")));
+            w.println("    asymptotic image at z = " + f(out.get("image_z_mm")) + " mm, lateral magnification "
+                    + f(out.get("magnification")) + ", angular magnification " + f(out.get("angular_magnification")));
         }
         w.println("  spherical aberration Cs = " + f(out.get("spherical_aberration_mm")) + " mm, chromatic aberration Cc = "
                 + f(out.get("chromatic_aberration_mm")) + " mm");
@@ -204,6 +246,9 @@ final class OpticsCommand implements Callable<Integer> {
             w.println("  (" + out.get("aberration_poly_convention") + ")");
         }
         DeflectionOutput.print(w, out);
+        for (Object warning : (java.util.List<?>) out.get("warnings")) {
+            w.println("  WARNING: " + warning);
+        }
         w.println();
         w.println(SafetyNotice.text());
     }

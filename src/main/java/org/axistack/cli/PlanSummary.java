@@ -64,8 +64,10 @@ final class PlanSummary {
     }
 
     private static void imaging(PrintWriter w, Imaging im) {
-        w.println(String.format(Locale.ROOT, "Image of the object at z = %s mm: z = %s mm, lateral magnification %s",
-                g(Units.mToMm(im.objectZ_m())), g(Units.mToMm(im.imageZ_m())), g(im.lateralMagnification())));
+        w.println(String.format(Locale.ROOT, "Image of the object at z = %s mm: real image at z = %s mm (traced in the full"
+                + " field), magnification %s; asymptotic image z = %s mm, lateral magnification %s",
+                g(Units.mToMm(im.objectZ_m())), g(Units.mToMm(im.realImageZ_m().orElse(Double.NaN))),
+                g(im.realLateralMagnification()), g(Units.mToMm(im.imageZ_m())), g(im.lateralMagnification())));
     }
 
     private static void aberrations(PrintWriter w, Aberrations a) {

@@ -43,8 +43,15 @@ final class SizeText {
             dims.append(String.format(Locale.ROOT, " %s %.4g mm,", e.getKey(), e.getValue() * 1e3));
         }
         w.println(dims.substring(0, dims.length() - 1));
-        w.printf(Locale.ROOT, "  image z %.4f mm, focal length f2 %.4g mm%s%n", d.imageZ_m() * 1e3, d.focalLength_m() * 1e3,
-                Double.isNaN(d.magnification()) ? "" : String.format(Locale.ROOT, ", magnification %.4g", d.magnification()));
+        w.printf(Locale.ROOT, "  real image z %.4f mm, focal length f2 %.4g mm%s (optics error estimate %.1e of f)%n",
+                d.imageZ_m() * 1e3, d.focalLength_m() * 1e3,
+                Double.isNaN(d.magnification()) ? "" : String.format(Locale.ROOT, ", magnification %.4g", d.magnification()),
+                d.opticsError());
+        if (d.opticsError() > org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED) {
+            w.printf(Locale.ROOT, "  WARNING: the optics of this design carry an estimated error of %.1e of f, more than %.0e;"
+                    + " run optics on the written stack for the reason%n", d.opticsError(),
+                    org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED);
+        }
         w.printf(Locale.ROOT, "  Cs %.4g mm, Cc %.4g mm, largest surface field %.0f V/mm (margin %.2f), length %.4g mm%n",
                 d.spherical_m() * 1e3, d.chromatic_m() * 1e3, d.maxSurfaceField_V_per_m() / 1e3, d.fieldMargin(),
                 d.length_m() * 1e3);

@@ -174,6 +174,8 @@ final class TuneReport {
         m.put("axis_crossings_before_image", s.axisCrossings());
         m.put("focal_length_image_mm", mm(s.cardinal().focalLengthImage_m()));
         m.put("focal_point_image_z_mm", mm(s.cardinal().focalPointImageZ_m()));
+        m.put("optics_error_estimate", s.cardinal().errorEstimate());
+        m.put("field_ends", org.axistack.optics.OpticsAccuracy.ends(s.cardinal()));
         Map<String, Double> biases = new LinkedHashMap<>();
         for (int i = 0; i < stack.electrodes().size(); i++) {
             biases.put(stack.electrodes().get(i).name(), s.biases_V()[i]);
@@ -205,6 +207,10 @@ final class TuneReport {
                         Units.vPerMToVPerMm(s.surfaceFieldCheck() == SurfaceFieldCheck.ABOVE_AGGRESSIVE
                                 ? stack.limits().aggressive_V_per_m() : stack.limits().comfort_V_per_m())));
             }
+            org.axistack.optics.OpticsAccuracy.shortfall(s.cardinal(), org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED)
+                    .map(t -> String.format(Locale.ROOT, "bias %.3f V: %s", s.bias_V(), t)).ifPresent(w::add);
+            org.axistack.optics.OpticsAccuracy.closeTheLens(s.cardinal())
+                    .filter(t -> w.stream().noneMatch(x -> x.endsWith(t))).map(t -> "at the focus: " + t).ifPresent(w::add);
             if (s.axisCrossings() > 0) {
                 w.add(String.format(Locale.ROOT, "bias %.3f V: the beam crosses the axis %d time(s) inside the lens before"
                         + " the image (a very strong lens, near a mirror): extremely sensitive to the supply", s.bias_V(),

@@ -17,6 +17,28 @@ public interface AxialField {
      */
     void axial(double z_m, int order, double[] out);
 
+    /**
+     * The multipole model of the field far from its charges, when the field comes from a finite set of charges
+     * (a solved stack); empty for fields given in closed form, whose far field is not known.
+     */
+    default java.util.Optional<FarField> farField() {
+        return java.util.Optional.empty();
+    }
+
+    /**
+     * Whether the axis at z runs inside a tube-like electrode (one that surrounds the axis at least its own bore
+     * radius before and after z), so a weak field there may be taken as the end of the lens. Fields without
+     * geometry answer true: the field's decay alone decides for them.
+     */
+    default boolean insideTube(double z_m) {
+        return true;
+    }
+
+    /** Whether an electrode closes the axis somewhere in [from, to] (fields without geometry: never). */
+    default boolean axisBlocked(double from_m, double to_m) {
+        return false;
+    }
+
     /** Axial potential V(z), V. */
     default double axialPotential_V(double z_m) {
         double[] out = new double[1];

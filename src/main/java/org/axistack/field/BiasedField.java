@@ -75,6 +75,11 @@ public final class BiasedField implements Field, AxialField {
             throw new IllegalArgumentException("derivative order must be 0.." + MAX_ORDER);
         }
         if (order <= AxialExpansion.ORDER) {
+            FarField ff = far();
+            if (ff.covers(z_m)) {
+                ff.axial(z_m, order, out);
+                return;
+            }
             AxialExpansion x = solution.axialExpansion();
             if (z_m >= x.zMin() && z_m <= x.zMax()) {
                 double[][][] c = combined;
@@ -88,6 +93,49 @@ public final class BiasedField implements Field, AxialField {
             }
         }
         exactAxial(z_m, order, out);
+    }
+
+    @Override
+    public boolean insideTube(double z_m) {
+        for (org.axistack.model.Electrode e : solution.electrodes()) {
+            org.axistack.model.Contour c = e.contour();
+            double bore = c.minR_m();
+            if (bore > 0 && c.minZ_m() <= z_m - bore && c.maxZ_m() >= z_m + bore) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    @Override
+    public boolean axisBlocked(double from_m, double to_m) {
+        for (org.axistack.model.Electrode e : solution.electrodes()) {
+            org.axistack.model.Contour c = e.contour();
+            if (c.minR_m() <= 0 && c.maxZ_m() >= from_m && c.minZ_m() <= to_m) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private volatile FarField far;
+
+    /**
+     * The multipole expansion of this field's charges, used on the axis beyond
+     * {@link FarField#startDistance_m()} from its centre (there it equals the exact sum to round-off).
+     */
+    @Override
+    public java.util.Optional<FarField> farField() {
+        return java.util.Optional.of(far());
+    }
+
+    private FarField far() {
+        FarField f = far;
+        if (f == null) {
+            f = solution.farField(biases);
+            far = f;
+        }
+        return f;
     }
 
     /** Exact axial potential (no expansion), V. */

@@ -171,12 +171,66 @@ public final class FieldSolution {
                         hi = Math.max(hi, e.contour().maxZ_m());
                     }
                     double span = Math.max(hi - lo, 1e-6);
-                    x = AxialExpansion.build(this, lo - 0.5 * span, hi + 0.5 * span);
+                    // as far as the far-field series starts, so the axis is covered without the exact sum
+                    double reach = FarField.FACTOR * chargeRadius();
+                    x = AxialExpansion.build(this, Math.min(lo - 0.5 * span, chargeCentre() - reach),
+                            Math.max(hi + 0.5 * span, chargeCentre() + reach));
                     axialExpansion = x;
                 }
             }
         }
         return x;
+    }
+
+    private volatile double[][] unitMoments;
+    private volatile double[] unitAbsStrength;
+
+    /** Centre of the far-field expansion: midway between the extreme charge rings in z, m. */
+    double chargeCentre() {
+        double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+        for (int j = 0; j < mesh.size(); j++) {
+            lo = Math.min(lo, mesh.nodeZ(j));
+            hi = Math.max(hi, mesh.nodeZ(j));
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /** Largest distance of a charge ring from (chargeCentre, 0), m. */
+    double chargeRadius() {
+        double z0 = chargeCentre();
+        double rad = 0;
+        for (int j = 0; j < mesh.size(); j++) {
+            rad = Math.max(rad, Math.hypot(mesh.nodeZ(j) - z0, mesh.nodeR(j)));
+        }
+        return rad;
+    }
+
+    /** The far-field multipole expansion for the given biases (unit moments computed once). */
+    FarField farField(double[] biases) {
+        double[][] m = unitMoments;
+        double[] abs = unitAbsStrength;
+        double z0 = chargeCentre();
+        double rad = chargeRadius();
+        if (m == null || abs == null) {
+            int n = mesh.size();
+            double[] z = new double[n];
+            double[] r = new double[n];
+            for (int j = 0; j < n; j++) {
+                z[j] = mesh.nodeZ(j);
+                r[j] = mesh.nodeR(j);
+            }
+            m = new double[unitStrength.length][];
+            abs = new double[unitStrength.length];
+            for (int e = 0; e < m.length; e++) {
+                m[e] = FarField.moments(z, r, unitStrength[e], z0, rad);
+                for (double l : unitStrength[e]) {
+                    abs[e] += Math.abs(l);
+                }
+            }
+            unitMoments = m;
+            unitAbsStrength = abs;
+        }
+        return FarField.combine(z0, rad, m, abs, biases);
     }
 
     /** Axial derivatives of every unit solution at z: out[e][n], computed together (shared geometry). */

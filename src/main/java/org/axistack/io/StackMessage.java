@@ -114,6 +114,9 @@ public enum StackMessage {
             "leave an insulating gap between them (lenses usually keep 1 mm or more), or give them the same bias"),
     MODEL_REJECTED("the values do not describe a valid {what} ({detail})",
             "check this table's numbers against the stack file format in the README"),
+    START_AFTER_LENS("the beam starts at z = {start} mm, at or after the end of the lens (its last electrode ends at"
+            + " z = {end} mm)", "set start_z_mm before the lens (upstream of the first electrode, or inside the lens"
+            + " field if the beam really starts there), or remove it"),
     LIMITS_ORDER("the aggressive limit ({aggressive} V/mm) is below the comfort limit ({comfort} V/mm)",
             "make aggressive_surface_field_V_per_mm at least comfort_surface_field_V_per_mm"),
     SET_SYNTAX("--set '{arg}' is not of the form NAME=VOLTS",

@@ -207,6 +207,12 @@ public final class StackReader {
         Beam beam = beam(new TableFields(source, beamTable, "[beam]", lineOf(toml, "beam")));
         Map<String, Sectors> sectors = new LinkedHashMap<>();
         List<Electrode> electrodes = electrodes(toml, top, text, sectors);
+        double lensEnd = electrodes.stream().mapToDouble(e -> e.contour().maxZ_m()).max().orElse(Double.NaN);
+        if (beam.startZ_m().isPresent() && !(beam.startZ_m().getAsDouble() < lensEnd)) {
+            TableFields b = new TableFields(source, beamTable, "[beam]", lineOf(toml, "beam"));
+            throw b.error(StackMessage.START_AFTER_LENS, "start_z_mm", Map.of("start",
+                    fmt(Units.mToMm(beam.startZ_m().getAsDouble())), "end", fmt(Units.mToMm(lensEnd))));
+        }
 
         OptionalDouble screen = OptionalDouble.empty();
         TomlTable screenTable = table(top, "screen", false, "[screen]");

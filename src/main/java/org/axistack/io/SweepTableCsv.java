@@ -15,7 +15,7 @@ public final class SweepTableCsv {
     public static final List<String> HEADER = List.of("bias_V", "status", "focal_length_object_mm",
             "focal_length_image_mm", "focal_point_object_z_mm", "focal_point_image_z_mm", "principal_plane_object_z_mm",
             "principal_plane_image_z_mm", "image_z_mm", "magnification", "spherical_aberration_mm",
-            "chromatic_aberration_mm");
+            "chromatic_aberration_mm", "real_image_z_mm", "error_estimate");
 
     private SweepTableCsv() {
     }
@@ -25,7 +25,8 @@ public final class SweepTableCsv {
         return new Object[] {p.bias_V(), p.status(), mm(p.focalLengthObject_m()), mm(p.focalLengthImage_m()),
             mm(p.focalPointObjectZ_m()), mm(p.focalPointImageZ_m()), mm(p.principalPlaneObjectZ_m()),
             mm(p.principalPlaneImageZ_m()), mm(p.imageZ_m()), Double.isFinite(p.magnification()) ? p.magnification() : null,
-            mm(p.sphericalAberration_m()), mm(p.chromaticAberration_m())};
+            mm(p.sphericalAberration_m()), mm(p.chromaticAberration_m()), mm(p.realImageZ_m()),
+            Double.isFinite(p.errorEstimate()) ? p.errorEstimate() : null};
     }
 
     /** The whole table as CSV text. */

@@ -21,7 +21,8 @@ import java.util.OptionalDouble;
  * s'(z_o) = 1) replaces u: Cs_o = -Integral s sqrt(U*) F3[s] dz / sqrt(U*_o),
  * Cc_o = U_o Integral s sqrt(U*) K[s] dz / sqrt(U*_o). Vr = m c^2/|q| is infinite non-relativistically.
  *
- * <p>Quadrature: composite 8-point Gauss-Legendre over the traced range, panels doubled until the integrals
+ * <p>Quadrature: composite 8-point Gauss-Legendre over the traced range and, on open sides, over the far-field
+ * tails in s = 1/|z - z0| out to infinity (issue 23), panels doubled until the integrals
  * change by less than 1e-10 relative (the change reached is reported).
  */
 final class AberrationIntegrals {
@@ -39,10 +40,13 @@ final class AberrationIntegrals {
     static Aberrations atInfinity(ParaxialOptics optics) {
         CardinalElements c = optics.cardinal();
         requireFocusing(c);
-        double z0 = optics.zStart_m();
-        double[] integrals = integrals(optics, z -> optics.ray(z0, 1, 0, z));
+        // the ray that enters parallel at unit height (along its asymptote from infinity on an open object side)
+        double[] integrals = integrals(optics, z -> {
+            TransferMatrix t = optics.fromObjectAsymptote(z);
+            return new double[] {t.a(), t.c()};
+        }, Double.NEGATIVE_INFINITY);
         AccelerationPotential p = optics.potential();
-        double u2 = p.u_V(optics.zEnd_m());
+        double u2 = c.uImage_V();
         double s2 = Math.sqrt(p.uStar(u2));
         double f2 = c.focalLengthImage_m();
         double cs = -Math.pow(f2, 4) * integrals[0] / s2;
@@ -59,9 +63,10 @@ final class AberrationIntegrals {
                     "the object at z = %.4f mm is imaged to infinity: object-side aberrations are undefined",
                     objectZ_m * 1e3));
         }
-        double[] integrals = integrals(optics, z -> optics.ray(objectZ_m, 0, 1, z));
+        double[] integrals = integrals(optics, z -> optics.ray(objectZ_m, 0, 1, z), objectZ_m);
         AccelerationPotential p = optics.potential();
-        double uo = p.u_V(Math.max(objectZ_m, optics.zStart_m()));
+        boolean drift = objectZ_m < optics.zStart_m() && optics.objectTail() == null;
+        double uo = p.u_V(drift ? optics.zStart_m() : objectZ_m);
         double so = Math.sqrt(p.uStar(uo));
         double cs = -integrals[0] / so;
         double cc = uo * integrals[1] / so;
@@ -76,10 +81,30 @@ final class AberrationIntegrals {
         }
     }
 
-    /** {spherical integral, chromatic integral, last relative change} for the ray given by z -> (r, r'). */
-    private static double[] integrals(ParaxialOptics optics, java.util.function.DoubleFunction<double[]> ray) {
-        double a = optics.zStart_m();
+    /**
+     * {spherical integral, chromatic integral, last relative change} for the ray given by z -> (r, r'), from
+     * fromZ on: over the traced range between the reference planes in z and, on open sides, over the far-field
+     * tails in s = 1/|z - z0| (dz = ds/s^2; the integrands fall off like 1/|z|^2 there, so the s-form is finite).
+     */
+    private static double[] integrals(ParaxialOptics optics, java.util.function.DoubleFunction<double[]> ray,
+            double fromZ) {
+        java.util.List<double[]> parts = new java.util.ArrayList<>(); // {t0, t1, kind, centre, side}
+        double a = Math.max(fromZ, optics.zStart_m());
         double b = optics.zEnd_m();
+        if (a < b) {
+            parts.add(new double[] {a, b, 0, 0, 0});
+        }
+        FarTail in = optics.objectTail();
+        if (in != null && fromZ < optics.zStart_m()) {
+            double sFrom = Double.isFinite(fromZ) ? 1 / Math.abs(fromZ - in.centreZ_m()) : 0;
+            parts.add(new double[] {sFrom, 1 / Math.abs(optics.zStart_m() - in.centreZ_m()), 1, in.centreZ_m(), -1});
+        }
+        FarTail out = optics.imageTail();
+        if (out != null) {
+            double sFrom = fromZ > optics.zEnd_m() ? 1 / Math.abs(fromZ - out.centreZ_m()) : Double.POSITIVE_INFINITY;
+            double sTo = Math.min(sFrom, 1 / Math.abs(optics.zEnd_m() - out.centreZ_m()));
+            parts.add(new double[] {0, sTo, 1, out.centreZ_m(), +1});
+        }
         AccelerationPotential p = optics.potential();
         double inverseRest = 1 / p.restPotential_V();
         double[] d = new double[5];
@@ -87,15 +112,22 @@ final class AberrationIntegrals {
         double change = Double.POSITIVE_INFINITY;
         for (int panels = 64; panels <= 8192; panels *= 2) {
             double[] sum = new double[2];
-            double h = (b - a) / panels;
-            for (int k = 0; k < panels; k++) {
-                double mid = a + (k + 0.5) * h;
-                for (int j = 0; j < GL_X.length; j++) {
-                    double z = mid + 0.5 * h * GL_X[j];
-                    double w = 0.5 * h * GL_W[j];
-                    double[] r = ray.apply(z);
-                    p.derivatives(z, 4, d);
-                    integrand(d, inverseRest, r[0], r[1], sum, w);
+            for (double[] part : parts) {
+                double h = (part[1] - part[0]) / panels;
+                for (int k = 0; k < panels; k++) {
+                    double mid = part[0] + (k + 0.5) * h;
+                    for (int j = 0; j < GL_X.length; j++) {
+                        double t = mid + 0.5 * h * GL_X[j];
+                        double w = 0.5 * h * GL_W[j];
+                        double z = t;
+                        if (part[2] == 1) {
+                            z = part[3] + part[4] / t;
+                            w /= t * t;
+                        }
+                        double[] r = ray.apply(z);
+                        p.derivatives(z, 4, d);
+                        integrand(d, inverseRest, r[0], r[1], sum, w);
+                    }
                 }
             }
             if (prev != null) {

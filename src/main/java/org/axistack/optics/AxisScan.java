@@ -53,51 +53,52 @@ final class AxisScan {
     }
 
     /**
-     * Going outward from the strongest point of the lens on each side: the first sample where the field weight
-     * has fallen below fraction x its peak (one sample further out, clipped to the scanned range); if it never
-     * does, the sample where it is smallest (the most nearly field-free place, e.g. the middle of a short drift
-     * tube whose open mouth leaks field). Stopping there keeps the planes inside drift tubes instead of running
-     * on to the tube mouths. Returns {zStart, zEnd}.
+     * Where the field ends on each side ({@link ParaxialOptics#auto} describes the rule). Going outward from the
+     * strongest point of the lens: the first sample where the weight has fallen below fraction x its peak ends
+     * the field there (one sample further out); failing that, the weakest sample ends it if it lies inside the
+     * range, at most tubeDepth x the peak, with the weight rising again beyond it (a drift tube before its
+     * mouth); otherwise the side is open. Returns {objectEnd, imageEnd}.
      */
-    double[] fieldFreePlanes(double fraction) {
+    FieldEnd[] ends(double fraction, double tubeDepth, boolean farModel) {
+        int last = z.length - 1;
         if (!(weight[peak] > 0)) {
-            return new double[] {z[0], z[z.length - 1]}; // no field at all: the whole range is field-free
+            // no field at all: the whole range is field-free
+            return new FieldEnd[] {new FieldEnd(FieldEnd.Rule.TUBE_PLANE, z[0]), new FieldEnd(FieldEnd.Rule.TUBE_PLANE, z[last])};
         }
+        FieldEnd left = side(-1, fraction, tubeDepth, farModel);
+        FieldEnd right = side(+1, fraction, tubeDepth, farModel);
+        if (!(right.z_m() > left.z_m())) {
+            return new FieldEnd[] {new FieldEnd(left.rule(), z[0]), new FieldEnd(right.rule(), z[last])};
+        }
+        return new FieldEnd[] {left, right};
+    }
+
+    private FieldEnd side(int dir, double fraction, double tubeDepth, boolean farModel) {
+        int last = z.length - 1;
+        int end = dir > 0 ? last : 0;
         double limit = weight[peak] * fraction;
-        int right = z.length - 1;
-        int bestRight = peak;
-        for (int i = peak; i < z.length; i++) {
+        int best = peak;
+        for (int i = peak; dir > 0 ? i <= last : i >= 0; i += dir) {
             if (weight[i] < limit) {
-                right = Math.min(z.length - 1, i + 1);
-                bestRight = -1;
-                break;
+                return new FieldEnd(FieldEnd.Rule.TUBE_PLANE, z[Math.min(last, Math.max(0, i + dir))]);
             }
-            if (weight[i] < weight[bestRight]) {
-                bestRight = i;
+            if (weight[i] < weight[best]) {
+                best = i;
             }
         }
-        if (bestRight >= 0) {
-            right = bestRight;
-        }
-        int left = 0;
-        int bestLeft = peak;
-        for (int i = peak; i >= 0; i--) {
-            if (weight[i] < limit) {
-                left = Math.max(0, i - 1);
-                bestLeft = -1;
-                break;
+        if (best != end && weight[best] <= tubeDepth * weight[peak]) {
+            double beyond = 0;
+            for (int i = best; dir > 0 ? i <= last : i >= 0; i += dir) {
+                beyond = Math.max(beyond, weight[i]);
             }
-            if (weight[i] < weight[bestLeft]) {
-                bestLeft = i;
+            if (beyond > 10 * weight[best] && potential.field().insideTube(z[best])) {
+                return new FieldEnd(FieldEnd.Rule.TUBE_PLANE, z[best]);
             }
         }
-        if (bestLeft >= 0) {
-            left = bestLeft;
+        if (farModel) {
+            return new FieldEnd(FieldEnd.Rule.FAR_FIELD, z[end]);
         }
-        if (right <= left) {
-            return new double[] {z[0], z[z.length - 1]};
-        }
-        return new double[] {z[left], z[right]};
+        return new FieldEnd(FieldEnd.Rule.NO_MODEL, z[best]);
     }
 
     /**

@@ -9,10 +9,11 @@ import java.util.OptionalDouble;
  * converging lens: f1 = H1 - F1 (object side), f2 = F2 - H2 (image side); f2/f1 = sqrt(U*2/U*1).
  * Principal planes may be crossed (H2 before H1). Conventions of docs interface.md.
  *
- * @param zStart_m             object-side reference plane (taken as field-free), m
- * @param zEnd_m               image-side reference plane (taken as field-free), m
- * @param uObject_V            acceleration potential U at zStart, V
- * @param uImage_V             acceleration potential U at zEnd, V
+ * @param zStart_m             object-side reference plane (where the field is taken as ended, or where the
+ *                             far-field tail of an open side starts), m
+ * @param zEnd_m               image-side reference plane, m
+ * @param uObject_V            acceleration potential U on the object side (at infinity for an open side), V
+ * @param uImage_V             acceleration potential U on the image side (at infinity for an open side), V
  * @param relativistic         whether the relativistic paraxial equation was used
  * @param kind                 converging, diverging or afocal
  * @param focalPointObjectZ_m  F1, m (NaN when afocal)
@@ -21,20 +22,28 @@ import java.util.OptionalDouble;
  * @param principalPlaneImageZ_m  H2, m (NaN when afocal)
  * @param focalLengthObject_m  f1, m (infinite when afocal)
  * @param focalLengthImage_m   f2, m (infinite when afocal)
- * @param realFocusImageZ_m    first axis crossing of the real ray that enters parallel to the axis (inside
- *                             the field, or F2 beyond it); empty if it never crosses
+ * @param realFocusImageZ_m    first axis crossing of the real ray that enters parallel to the axis (traced in
+ *                             the full field, through the far-field tail to infinity); empty if it never crosses
  * @param realFocusObjectZ_m   last axis crossing of the real ray that leaves parallel (traced backward)
  * @param planeSensitivity     largest change of F1, F2, H1, H2 (relative to |f|) and of f1, f2 (relative) when
  *                             both reference planes are moved toward the lens (by
  *                             {@link ParaxialSettings#planeCheckFraction()} of their distance to it): a
- *                             conservative estimate of the error from residual field at the planes
+ *                             conservative estimate of the error from residual field at the planes (0 when
+ *                             both ends are open and carried to infinity by the far-field model)
+ * @param objectEnd            how the field ends on the object side (far-field tail, tube plane, ...)
+ * @param imageEnd             how the field ends on the image side
+ * @param errorEstimate        estimated relative error of every element (positions relative to |f|): the larger
+ *                             of the plane sensitivity and the integration's own estimate
+ * @param farFieldShare        how much the elements change (relative) when the field beyond the traced range of
+ *                             the open sides is dropped: what the far field contributes (0 with no open side)
  */
 public record CardinalElements(double zStart_m, double zEnd_m, double uObject_V, double uImage_V,
         boolean relativistic, Kind kind,
         double focalPointObjectZ_m, double focalPointImageZ_m,
         double principalPlaneObjectZ_m, double principalPlaneImageZ_m,
         double focalLengthObject_m, double focalLengthImage_m,
-        OptionalDouble realFocusImageZ_m, OptionalDouble realFocusObjectZ_m, double planeSensitivity) {
+        OptionalDouble realFocusImageZ_m, OptionalDouble realFocusObjectZ_m, double planeSensitivity,
+        FieldEnd objectEnd, FieldEnd imageEnd, double errorEstimate, double farFieldShare) {
 
     /** Whether the lens converges, diverges, or leaves parallel rays parallel. */
     public enum Kind { CONVERGING, DIVERGING, AFOCAL }
@@ -52,7 +61,8 @@ public record CardinalElements(double zStart_m, double zEnd_m, double uObject_V,
         if (Math.abs(m.c()) * length < AFOCAL_LIMIT) {
             return new CardinalElements(m.z1_m(), m.z2_m(), u1_V, u2_V, relativistic, Kind.AFOCAL,
                     Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                    Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, realImage, realObject, planeSensitivity);
+                    Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, realImage, realObject, planeSensitivity,
+                    FieldEnd.given(m.z1_m()), FieldEnd.given(m.z2_m()), planeSensitivity, 0);
         }
         double f2 = -1 / m.c();
         double f1 = -m.determinant() / m.c();
@@ -62,7 +72,19 @@ public record CardinalElements(double zStart_m, double zEnd_m, double uObject_V,
         double h1 = fp1 + f1;
         return new CardinalElements(m.z1_m(), m.z2_m(), u1_V, u2_V, relativistic,
                 f2 > 0 ? Kind.CONVERGING : Kind.DIVERGING, fp1, fp2, h1, h2, f1, f2, realImage, realObject,
-                planeSensitivity);
+                planeSensitivity, FieldEnd.given(m.z1_m()), FieldEnd.given(m.z2_m()), planeSensitivity, 0);
+    }
+
+    /** The same elements with the field's ends and the error estimate filled in. */
+    CardinalElements withEnds(FieldEnd object, FieldEnd image, double error, double farShare) {
+        return new CardinalElements(zStart_m, zEnd_m, uObject_V, uImage_V, relativistic, kind, focalPointObjectZ_m,
+                focalPointImageZ_m, principalPlaneObjectZ_m, principalPlaneImageZ_m, focalLengthObject_m,
+                focalLengthImage_m, realFocusImageZ_m, realFocusObjectZ_m, planeSensitivity, object, image, error, farShare);
+    }
+
+    /** Whether both ends are carried to infinity by the far-field model (true asymptotic elements). */
+    public boolean openBothSides() {
+        return objectEnd.rule() == FieldEnd.Rule.FAR_FIELD && imageEnd.rule() == FieldEnd.Rule.FAR_FIELD;
     }
 
     public boolean converging() {

@@ -11,7 +11,7 @@ package org.axistack.optics;
  *                           centre to measure how much the result depends on them (default 0.1)
  */
 public record ParaxialSettings(double relativeTolerance, double fieldFreeFraction, int scanPoints,
-        double planeCheckFraction) {
+        double planeCheckFraction, double farFieldReach, boolean farFieldModel) {
 
     public ParaxialSettings {
         if (!(relativeTolerance > 0 && relativeTolerance < 1e-3)) {
@@ -26,21 +26,42 @@ public record ParaxialSettings(double relativeTolerance, double fieldFreeFractio
         if (!(planeCheckFraction > 0 && planeCheckFraction < 0.5)) {
             throw new IllegalArgumentException("plane check fraction must be in (0, 0.5): " + planeCheckFraction);
         }
+        if (!(farFieldReach >= 1 && farFieldReach <= 1e6)) {
+            throw new IllegalArgumentException("far-field reach must be in [1, 1e6]: " + farFieldReach);
+        }
     }
 
     public static ParaxialSettings defaults() {
-        return new ParaxialSettings(1e-12, 1e-10, 600, 0.1);
+        return new ParaxialSettings(1e-12, 1e-10, 600, 0.1, 1, true);
     }
 
     public ParaxialSettings withRelativeTolerance(double tol) {
-        return new ParaxialSettings(tol, fieldFreeFraction, scanPoints, planeCheckFraction);
+        return new ParaxialSettings(tol, fieldFreeFraction, scanPoints, planeCheckFraction, farFieldReach, farFieldModel);
     }
 
     public ParaxialSettings withFieldFreeFraction(double fraction) {
-        return new ParaxialSettings(relativeTolerance, fraction, scanPoints, planeCheckFraction);
+        return new ParaxialSettings(relativeTolerance, fraction, scanPoints, planeCheckFraction, farFieldReach, farFieldModel);
     }
 
     public ParaxialSettings withScanPoints(int n) {
-        return new ParaxialSettings(relativeTolerance, fieldFreeFraction, n, planeCheckFraction);
+        return new ParaxialSettings(relativeTolerance, fieldFreeFraction, n, planeCheckFraction, farFieldReach, farFieldModel);
+    }
+
+    /**
+     * Open sides traced in z out to reach x the far-field series' start distance (default 1) before the tail
+     * takes over: for convergence studies.
+     */
+    public ParaxialSettings withFarFieldReach(double reach) {
+        return new ParaxialSettings(relativeTolerance, fieldFreeFraction, scanPoints, planeCheckFraction, reach,
+                farFieldModel);
+    }
+
+    /**
+     * Without the far-field model, open sides are cut at the end of the traced range (the field taken as ended
+     * there): only to show what the model contributes.
+     */
+    public ParaxialSettings withFarFieldModel(boolean model) {
+        return new ParaxialSettings(relativeTolerance, fieldFreeFraction, scanPoints, planeCheckFraction, farFieldReach,
+                model);
     }
 }

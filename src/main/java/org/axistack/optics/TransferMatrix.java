@@ -27,6 +27,11 @@ public record TransferMatrix(double z1_m, double z2_m, double a, double b, doubl
                 next.c * a + next.d * c, next.c * b + next.d * d);
     }
 
+    /** The same matrix labelled with other planes. */
+    public TransferMatrix withPlanes(double newZ1_m, double newZ2_m) {
+        return new TransferMatrix(newZ1_m, newZ2_m, a, b, c, d);
+    }
+
     /** A field-free drift of length z2 - z1. */
     public static TransferMatrix drift(double z1_m, double z2_m) {
         return new TransferMatrix(z1_m, z2_m, 1, z2_m - z1_m, 0, 1);

@@ -26,6 +26,7 @@ import org.axistack.optics.Imaging;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
 import org.axistack.optics.SpotSizeBudget;
+import org.axistack.optics.OpticsAccuracy;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.report.LensPlan;
 import org.axistack.trace.Trajectory;
@@ -311,18 +312,13 @@ public final class PlanAnalysis {
                 ParaxialOptics optics = ParaxialOptics.of(field, stack);
                 CardinalElements c = optics.cardinal();
                 cardinal = Optional.of(c);
-                note = String.format(Locale.ROOT, "relativistic paraxial ray equation (relative tolerance %.0e) between "
-                        + "reference planes z = %s and %s mm taken as field-free; moving them 10%% inward changes the "
-                        + "cardinal elements by %.1e (relative)", optics.settings().relativeTolerance(),
-                        PlanFormat.num(Units.mToMm(c.zStart_m())), PlanFormat.num(Units.mToMm(c.zEnd_m())),
-                        c.planeSensitivity());
-                if (c.planeSensitivity() > 1e-4) {
-                    warnings.add(String.format(Locale.ROOT, "the reference planes are not quite field-free: the "
-                            + "cardinal elements carry a relative error of about %.1e; lengthen the outer electrodes or "
-                            + "move the beam start outward for better", c.planeSensitivity()));
-                }
+                note = String.format(Locale.ROOT, "relativistic paraxial ray equation (relative tolerance %.0e);"
+                        + " asymptotic cardinal elements, the field's ends: %s; %s", optics.settings().relativeTolerance(),
+                        String.join("; ", OpticsAccuracy.ends(c)), OpticsAccuracy.estimate(c));
+                OpticsAccuracy.shortfall(c, OpticsAccuracy.DEFAULT_REQUESTED).ifPresent(warnings::add);
+                OpticsAccuracy.closeTheLens(c).ifPresent(warnings::add);
                 OptionalDouble obj = stack.beam().objectZ_m();
-                if (obj.isPresent() && obj.getAsDouble() < optics.zEnd_m()) {
+                if (obj.isPresent()) {
                     imaging = Optional.of(optics.imaging(obj.getAsDouble()));
                 }
                 if (c.kind() != CardinalElements.Kind.AFOCAL) {

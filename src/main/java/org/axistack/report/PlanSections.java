@@ -45,9 +45,14 @@ final class PlanSections {
         b.append(Html.table(List.of("", "object side", "image side"), rows));
         if (plan.imaging().isPresent()) {
             Imaging im = plan.imaging().get();
-            b.append(Html.table(List.of("object z (mm)", "image z (mm)", "lateral magnification", "angular magnification"),
-                    List.of(List.of(HtmlReport.mm(im.objectZ_m()), HtmlReport.mm(im.imageZ_m()),
+            b.append(Html.table(List.of("object z (mm)", "real image z (mm)", "magnification there",
+                    "asymptotic image z (mm)", "lateral magnification", "angular magnification"),
+                    List.of(List.of(HtmlReport.mm(im.objectZ_m()),
+                            im.realImageZ_m().isPresent() ? HtmlReport.mm(im.realImageZ_m().getAsDouble()) : "-",
+                            Html.g(im.realLateralMagnification()), HtmlReport.mm(im.imageZ_m()),
                             Html.g(im.lateralMagnification()), Html.g(im.angularMagnification())))));
+            b.append("<p class=\"note\">The real image is where the object's axial ray, traced in the full field, crosses"
+                    + " the axis; the asymptotic image is where its straight asymptote does.</p>\n");
         } else {
             b.append("<p class=\"note\">Object at infinity (parallel beam): the image is the focal point F2.</p>\n");
         }

@@ -18,7 +18,8 @@ import org.axistack.model.Electrode;
  * @param dimensions_m    machining dimensions, m
  * @param electrodes      the electrodes at their biases
  * @param bias_V          bias of the family's biased electrode, V
- * @param imageZ_m        asymptotic image (or image focal point for a parallel beam), m
+ * @param imageZ_m        real image: where the object's axial ray, traced in the full field, crosses the axis (for a
+ *                        parallel beam the real crossing of the ray entering parallel), m
  * @param focalLength_m   image-side focal length f2, m
  * @param magnification   lateral magnification (NaN for a parallel beam)
  * @param spherical_m     Cs, m
@@ -27,11 +28,12 @@ import org.axistack.model.Electrode;
  * @param length_m        overall stack length, m
  * @param checks          every limit with the design's value (broken or not)
  * @param unknowns        boundary-element unknowns of the solve behind it
+ * @param opticsError     estimated relative error of the cardinal elements (of f)
  */
 public record Design(Family family, List<Double> parameters_m, Map<String, Double> dimensions_m,
         List<Electrode> electrodes, double bias_V, double imageZ_m, double focalLength_m, double magnification,
         double spherical_m, double chromatic_m, double maxSurfaceField_V_per_m, double length_m,
-        List<Violation> checks, int unknowns) {
+        List<Violation> checks, int unknowns, double opticsError) {
 
     public Design {
         parameters_m = List.copyOf(parameters_m);

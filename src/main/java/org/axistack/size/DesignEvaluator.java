@@ -113,13 +113,14 @@ public final class DesignEvaluator {
                 double zo = req.objectZ_m().getAsDouble();
                 Imaging im = optics.imaging(zo);
                 Aberrations ab = optics.aberrations(zo);
-                imageZ = im.imageZ_m();
-                mag = im.lateralMagnification();
+                // the image plane is a real plane: where the real ray crosses the axis
+                imageZ = im.realImageZ_m().orElse(im.imageZ_m());
+                mag = im.realImageZ_m().isPresent() ? im.realLateralMagnification() : im.lateralMagnification();
                 cs = ab.sphericalObject_m().getAsDouble();
                 cc = ab.chromaticObject_m().getAsDouble();
             } else {
                 Aberrations ab = optics.aberrations();
-                imageZ = card.focalPointImageZ_m();
+                imageZ = card.realFocusImageZ_m().orElse(card.focalPointImageZ_m());
                 mag = Double.NaN;
                 cs = ab.sphericalImage_m();
                 cc = ab.chromaticImage_m();
@@ -129,7 +130,7 @@ public final class DesignEvaluator {
             }
             double maxField = Arrays.stream(field.maxSurfaceFieldPerElectrode_V_per_m()).max().orElse(0);
             return new Design(req.family(), p, dims, s.electrodes(), bias, imageZ, card.focalLengthImage_m(), mag, cs,
-                    cc, maxField, s.maxZ_m() - s.minZ_m(), checks(s, bias, maxField), sol.unknowns());
+                    cc, maxField, s.maxZ_m() - s.minZ_m(), checks(s, bias, maxField), sol.unknowns(), card.errorEstimate());
         } catch (ReflectionException | IllegalArgumentException | ArithmeticException e) {
             return null;
         }

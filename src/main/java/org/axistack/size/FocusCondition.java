@@ -25,7 +25,7 @@ public record FocusCondition(OptionalDouble objectZ_m, OptionalDouble imageZ_m, 
     /** The residual for a lens; zero when the condition is met. */
     public double residual(ParaxialOptics optics) {
         if (focalLength_m.isPresent()) {
-            TransferMatrix t = optics.transfer(optics.zStart_m(), optics.zEnd_m());
+            TransferMatrix t = optics.asymptoticTransfer();
             return 1 + t.c() * focalLength_m.getAsDouble();
         }
         double zi = imageZ_m.getAsDouble();
@@ -33,6 +33,6 @@ public record FocusCondition(OptionalDouble objectZ_m, OptionalDouble imageZ_m, 
             double zo = objectZ_m.getAsDouble();
             return optics.transfer(zo, zi).b() / (zi - zo);
         }
-        return optics.transfer(optics.zStart_m(), zi).a();
+        return optics.fromObjectAsymptote(zi).a();
     }
 }

@@ -83,8 +83,10 @@ public final class Tolerances {
         b[i] = bias;
         ParaxialOptics o = ParaxialOptics.of(sol.withBiases(b), s.withBiases(b));
         if (req.objectZ_m().isPresent()) {
-            return o.imaging(req.objectZ_m().getAsDouble()).imageZ_m();
+            var im = o.imaging(req.objectZ_m().getAsDouble());
+            return im.realImageZ_m().orElse(im.imageZ_m());
         }
-        return o.cardinal().focalPointImageZ_m();
+        var c = o.cardinal();
+        return c.realFocusImageZ_m().orElse(c.focalPointImageZ_m());
     }
 }

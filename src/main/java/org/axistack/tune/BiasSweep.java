@@ -88,11 +88,13 @@ public final class BiasSweep {
         double imageZ = Double.NaN;
         double m = Double.NaN;
         boolean finiteObject = objectZ_m.isPresent() && objectZ_m.getAsDouble() < optics.zEnd_m();
+        double realImageZ = Double.NaN;
         Imaging im = null;
         if (finiteObject) {
             im = optics.imaging(objectZ_m.getAsDouble());
             imageZ = im.imageZ_m();
             m = im.lateralMagnification();
+            realImageZ = im.realImageZ_m().orElse(Double.NaN);
         }
         double cs = Double.NaN;
         double cc = Double.NaN;
@@ -103,6 +105,7 @@ public final class BiasSweep {
             cc = ab.chromaticImage_m();
         }
         return new SweepPoint(bias_V, "ok", c.focalLengthObject_m(), c.focalLengthImage_m(), c.focalPointObjectZ_m(),
-                c.focalPointImageZ_m(), c.principalPlaneObjectZ_m(), c.principalPlaneImageZ_m(), imageZ, m, cs, cc);
+                c.focalPointImageZ_m(), c.principalPlaneObjectZ_m(), c.principalPlaneImageZ_m(), imageZ, m, cs, cc, realImageZ,
+                c.errorEstimate());
     }
 }

@@ -14,8 +14,9 @@ import org.axistack.optics.TransferMatrix;
  * The focusing condition as a continuous function of the biases, for root finding: the paraxial ray that
  * starts at the object (the ray entering parallel at unit height for an object at infinity; the axial ray at
  * unit slope, scaled by the object-image distance, for a finite object) has height {@link Point#miss} at the
- * image plane. It is zero exactly when the object is imaged there (the real ray crosses the axis there inside
- * the field, its asymptote beyond it), and unlike the image position it has no pole where the lens passes
+ * image plane, traced in the full field between the real planes (the beam start or the object, and the image
+ * plane; an open lens's far field included). It is zero exactly when the real ray crosses the axis there, and
+ * unlike the image position it has no pole where the lens passes
  * through afocal. Optics by {@link ParaxialOptics#of(org.axistack.field.AxialField, Stack)}, the same
  * reference planes the {@code optics} command uses; biases re-applied by superposition
  * ({@link FieldSolution#withBiases}), never a new field solve. Thread-safe.
@@ -81,7 +82,9 @@ final class FocusProbe {
         double height;
         double slope;
         if (target.objectAtInfinity()) {
-            TransferMatrix t = optics.transfer(optics.zStart_m(), z);
+            // a parallel beam: parallel where the beam really starts, else along its asymptote from infinity
+            TransferMatrix t = stack.beam().startZ_m().isPresent()
+                    ? optics.transfer(stack.beam().startZ_m().getAsDouble(), z) : optics.fromObjectAsymptote(z);
             height = t.a();
             slope = t.c();
         } else {

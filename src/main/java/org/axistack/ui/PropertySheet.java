@@ -106,10 +106,15 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
                 rows.add(mm("object point, z (mm)", zo));
                 rows.add(mm(IMAGE_Z, im.imageZ_m()));
                 rows.add(new Row(MAGNIFICATION, UiFormat.num(im.lateralMagnification()), Level.PLAIN));
+                if (im.realImageZ_m().isPresent()) {
+                    rows.add(mm("real image (traced in the full field), z (mm)", im.realImageZ_m().getAsDouble()));
+                }
                 if (Double.isFinite(im.imageZ_m())) {
                     marks.add(new LensChart.Mark("image", Units.mToMm(im.imageZ_m())));
                 }
             }
+            rows.add(new Row("optics error estimate (of f)", String.format(java.util.Locale.ROOT, "%.1e", c.errorEstimate()),
+                    c.errorEstimate() > org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED ? Level.CAUTION : Level.PLAIN));
             if (c.kind() != CardinalElements.Kind.AFOCAL) {
                 Aberrations ab = optics.aberrations();
                 rows.add(mm(CS, ab.sphericalImage_m()));

@@ -94,8 +94,10 @@ class OpticsCommandTest {
         Run r = run("optics", stack(), "--object-z", "55");
         assertThat(r.code()).isEqualTo(2);
         assertThat(r.err()).contains("--object-z").doesNotContain("\tat ");
-        Run missing = run("optics");
-        assertThat(missing.code()).isEqualTo(2);
+        // without a stack, the built-in demo lens (issue 23)
+        Run demo = run("optics");
+        assertThat(demo.code()).isEqualTo(0);
+        assertThat(demo.out()).contains("built-in demo");
     }
 
     @Test

@@ -50,7 +50,7 @@ class SizeCommandTest {
         assertThat(outDir.resolve("front.png")).isNotEmptyFile();
         Run optics = run("optics", outDir.resolve("chosen.toml").toString(), "--json");
         assertThat(optics.code()).as(optics.err()).isZero();
-        assertThat(optics.out()).containsPattern("\"image_z_mm\" : 89\\.9999|\"image_z_mm\" : 90\\.0000");
+        assertThat(optics.out()).containsPattern("\"real_image_z_mm\" : 89\\.9999|\"real_image_z_mm\" : 90\\.0000");
     }
 
     @Test

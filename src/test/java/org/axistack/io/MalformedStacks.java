@@ -106,6 +106,8 @@ final class MalformedStacks {
         add(c, "energy is text", edit("energy_eV = 500.0", "energy_eV = \"500\""), WRONG_TYPE, 4, "energy_eV", "a number");
         add(c, "energy missing", edit("energy_eV = 500.0\n", ""), MISSING_KEY, 2, "energy_eV", "energy_eV");
         add(c, "energy absurdly large", edit("energy_eV = 500.0", "energy_eV = 1e30"), OUT_OF_RANGE, 4, "energy_eV", "range");
+        add(c, "start after the lens", edit(BEAM_END, BEAM_END + "start_z_mm = 20.0\n"), START_AFTER_LENS, 5, "start_z_mm",
+                "after the end of the lens");
         add(c, "start z is text", edit(BEAM_END, BEAM_END + "start_z_mm = \"left\"\n"), WRONG_TYPE, 5, "start_z_mm", "a number");
         // electrode values
         add(c, "radius is inf", edit("radius_mm = 5.0", "radius_mm = inf"), NOT_FINITE, 10, "radius_mm", "Infinity");

@@ -38,6 +38,18 @@ class LensLibraryScherzerTest {
         // a strong lens may cross the axis inside its field and look diverging asymptotically (the retarding
         // analyser lens does): the theorem still holds for its coefficients; only an afocal lens has none
         assertThat(optics.cardinal().kind()).as("%s has a focus", file).isNotEqualTo(CardinalElements.Kind.AFOCAL);
+        // issue 23: the error estimate is below 1e-5 of f, or the output says why not; the reason it gives must be
+        // the one that dominates the estimate (a tube plane whose field has not died away)
+        CardinalElements c = optics.cardinal();
+        System.out.printf("%s: ends %s / %s, error estimate %.2e, far-field share %.2e, plane sensitivity %.2e%n",
+                file.getFileName(), c.objectEnd().rule().key(), c.imageEnd().rule().key(), c.errorEstimate(),
+                c.farFieldShare(), c.planeSensitivity());
+        if (!(c.errorEstimate() < OpticsAccuracy.DEFAULT_REQUESTED)) {
+            assertThat(c.planeSensitivity()).as("%s: the estimate comes from an ended tube plane", file)
+                    .isEqualTo(c.errorEstimate());
+            assertThat(OpticsAccuracy.shortfall(c, OpticsAccuracy.DEFAULT_REQUESTED)).as("%s says why", file).get()
+                    .asString().contains("drift tube").contains(String.format(java.util.Locale.ROOT, "%.1e", c.errorEstimate()));
+        }
         Aberrations a = optics.aberrations();
         System.out.printf("%s (%s): Cs %.6g mm, Cc %.6g mm (image side)%n", file.getFileName(), optics.cardinal().kind(),
                 a.sphericalImage_m() * 1e3, a.chromaticImage_m() * 1e3);

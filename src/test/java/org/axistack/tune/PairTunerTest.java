@@ -43,8 +43,11 @@ class PairTunerTest {
             var c = ParaxialOptics.of(SolvedDemo.SOLUTION.withBiases(s.focus().biases_V()), SolvedDemo.STACK).cardinal();
             System.out.printf("focus %.5f V, outlet %.5f V: F2 %.6f mm, f2 %.7f mm%n", s.firstBias_V(),
                     s.secondBias_V(), c.focalPointImageZ_m() * 1e3, c.focalLengthImage_m() * 1e3);
-            assertThat(c.focalPointImageZ_m()).isCloseTo(0.035, org.assertj.core.data.Offset.offset(1e-9));
-            assertThat(c.focalLengthImage_m()).isCloseTo(0.03, org.assertj.core.data.Offset.offset(1e-9));
+            // the tuner focuses the ray that is parallel at the beam start (a real plane); the cardinal elements take
+            // the field as ended at the tube plane: they agree within the elements' own error estimate (issue 23)
+            double tol = Math.max(1e-9, 2 * c.errorEstimate() * Math.abs(c.focalLengthImage_m()));
+            assertThat(c.focalPointImageZ_m()).isCloseTo(0.035, org.assertj.core.data.Offset.offset(tol));
+            assertThat(c.focalLengthImage_m()).isCloseTo(0.03, org.assertj.core.data.Offset.offset(tol));
         }
         r.nearest().ifPresent(n -> System.out.printf("f2 nearest: focus %.4f V, outlet %.4f V, f2 %.4f mm, residual %.3g%n",
                 n.firstBias_V(), n.secondBias_V(), n.achieved() * 1e3, n.residual()));
