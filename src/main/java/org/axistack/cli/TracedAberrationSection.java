@@ -27,10 +27,17 @@ final class TracedAberrationSection {
     final Aberrations integrals;
     final SpotBudget budget;
     final OptionalDouble optimum;
+    final boolean openSides;
 
     TracedAberrationSection(Stack stack, AxialField axial, Tracer tracer, double bore_m, double emittance_m_rad,
             double energyWidth_eV) {
-        ParaxialOptics optics = ParaxialOptics.of(axial, stack);
+        ParaxialOptics full = ParaxialOptics.of(axial, stack);
+        // like with like: the traced rays run between the reference planes, so the integrals here do too (an open
+        // lens's far field beyond them is in the optics command's asymptotic values, not in this comparison)
+        openSides = full.objectEnd().rule() == org.axistack.optics.FieldEnd.Rule.FAR_FIELD
+                || full.imageEnd().rule() == org.axistack.optics.FieldEnd.Rule.FAR_FIELD;
+        ParaxialOptics optics = ParaxialOptics.of(new org.axistack.optics.AccelerationPotential(axial, stack.beam()),
+                full.zStart_m(), full.zEnd_m(), full.settings());
         paraxial = optics.cardinal();
         integrals = optics.aberrations();
         traced = TracedAberrations.measure(tracer, stack.beam().particle(), stack.beam().energy_eV(), optics.zStart_m(),
@@ -52,6 +59,10 @@ final class TracedAberrationSection {
                 + " %.7g mm; reference planes z = %.6g .. %.6g mm", Units.mToMm(traced.maxHeight_m()),
                 Units.radToMrad(traced.maxAngle_rad()), Units.mToMm(traced.sphericalHalfHeight_m()),
                 Units.mToMm(traced.zStart_m()), Units.mToMm(traced.zEnd_m())));
+        if (openSides) {
+            w.println("  (both columns between these planes; the lens is open and its far field beyond them is left out"
+                    + " here: the optics command gives the asymptotic values)");
+        }
         if (budget.emittance_m_rad() > 0 || budget.relativeEnergySpread() > 0) {
             w.println("Spot budget (d_g = 2 eps/alpha, d_s = Cs alpha^3/2, d_c = Cc alpha dT/T, quadrature sum; an estimate):");
             w.println(String.format(Locale.ROOT, "  %10s %12s %12s %12s %12s", "alpha_mrad", "d_g_um", "d_s_um", "d_c_um",

@@ -230,6 +230,12 @@ public final class PlanAnalysis {
             if (!VerificationSuite.allPassed(checks)) {
                 warnings.add("a built-in verification case is outside its tolerance: do not trust these numbers");
             }
+            if (o.lensCheck.isPresent()) {
+                // the accuracy claim for the lens at hand (its shortfall, if any, is already among the warnings)
+                List<CheckResult> all = new ArrayList<>(checks);
+                all.add(o.lensCheck.get());
+                checks = List.copyOf(all);
+            }
         }
         return new LensPlan(stack, source, solution, field, o.reflection, o.cardinal, o.note, o.imaging,
                 o.aberrations, spotInputs, spotRows, rays, rayNote, envelope, envNote, tuning.tune(), tuning.note(),
@@ -300,13 +306,34 @@ public final class PlanAnalysis {
 
     /** The paraxial part of the plan, or why it is missing. */
     private record Optics(Optional<String> reflection, Optional<CardinalElements> cardinal, String note,
-            Optional<Imaging> imaging, Optional<Aberrations> aberrations) {
+            Optional<Imaging> imaging, Optional<Aberrations> aberrations, Optional<CheckResult> lensCheck) {
+
+        /**
+         * The verification row for the lens at hand: its image-side focal length with the far-field traced range
+         * doubled (open sides) as the reference; the error is the larger of that change and the elements' own
+         * estimate, against the default accuracy.
+         */
+        static CheckResult lensCheck(Stack stack, BiasedField field, ParaxialOptics optics, CardinalElements c) {
+            long t = System.nanoTime();
+            double[] range = ParaxialOptics.searchRange_m(stack);
+            CardinalElements doubled = ParaxialOptics.auto(new org.axistack.optics.AccelerationPotential(field,
+                    stack.beam()), range[0], range[1], stack.beam().startZ_m(),
+                    optics.settings().withFarFieldReach(2 * optics.settings().farFieldReach())).cardinal();
+            double change = Math.abs(doubled.focalLengthImage_m() / c.focalLengthImage_m() - 1);
+            double error = Math.max(change, c.errorEstimate());
+            return new CheckResult("this lens: cardinal elements", "image-side focal length f2", "mm",
+                    Units.mToMm(c.focalLengthImage_m()), Units.mToMm(doubled.focalLengthImage_m()), error,
+                    OpticsAccuracy.DEFAULT_REQUESTED, "relative: the larger of the change when the traced range is doubled"
+                            + " and the estimated error", "convergence of this lens's own optics (issue 23)",
+                    "field ends: " + String.join("; ", OpticsAccuracy.ends(c)), (System.nanoTime() - t) * 1e-9);
+        }
 
         static Optics of(Stack stack, BiasedField field, List<String> warnings) {
             Optional<String> reflection = Optional.empty();
             Optional<CardinalElements> cardinal = Optional.empty();
             Optional<Imaging> imaging = Optional.empty();
             Optional<Aberrations> aberrations = Optional.empty();
+            Optional<CheckResult> lensCheck = Optional.empty();
             String note;
             try {
                 ParaxialOptics optics = ParaxialOptics.of(field, stack);
@@ -317,6 +344,9 @@ public final class PlanAnalysis {
                         String.join("; ", OpticsAccuracy.ends(c)), OpticsAccuracy.estimate(c));
                 OpticsAccuracy.shortfall(c, OpticsAccuracy.DEFAULT_REQUESTED).ifPresent(warnings::add);
                 OpticsAccuracy.closeTheLens(c).ifPresent(warnings::add);
+                if (c.kind() != CardinalElements.Kind.AFOCAL) {
+                    lensCheck = Optional.of(lensCheck(stack, field, optics, c));
+                }
                 OptionalDouble obj = stack.beam().objectZ_m();
                 if (obj.isPresent()) {
                     imaging = Optional.of(optics.imaging(obj.getAsDouble()));
@@ -339,7 +369,7 @@ public final class PlanAnalysis {
                         + "%s mm); move it into the field-free entrance region", PlanFormat.num(Units.mToMm(e.startZ_m())),
                         PlanFormat.num(Units.mToMm(e.usableFromZ_m())), PlanFormat.num(Units.mToMm(e.usableToZ_m()))));
             }
-            return new Optics(reflection, cardinal, note, imaging, aberrations);
+            return new Optics(reflection, cardinal, note, imaging, aberrations, lensCheck);
         }
     }
 }
