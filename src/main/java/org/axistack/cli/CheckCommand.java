@@ -35,7 +35,7 @@ final class CheckCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         List<CheckResult> results = VerificationSuite.run((i, n, name) -> {
             if (!quiet) {
-                err.printf(Locale.ROOT, "check %d/%d: %s%n", i + 1, n, name);
+                err.printf(Locale.ROOT, "check group %d/%d: %s%n", i + 1, n, name); // a group may hold several cases
                 err.flush();
             }
             return true;

@@ -71,10 +71,10 @@ final class EnvelopeOutput {
             w.println("  " + r.full().termination().detail());
         }
         w.println();
-        w.println(String.format(Locale.ROOT, "  %-14s %9s %10s %12s %8s  %s", "electrode", "bore_mm", "radius_mm", "at_z_mm",
+        w.println(String.format(Locale.ROOT, "  %-14s %14s %10s %12s %8s  %s", "electrode", "bore_radius_mm", "radius_mm", "at_z_mm",
                 "fill_%", "status"));
         for (BoreClearance b : r.clearances()) {
-            w.println(String.format(Locale.ROOT, "  %-14s %9s %10s %12s %8s  %s", b.electrode(), f(mm(b.bore_m())),
+            w.println(String.format(Locale.ROOT, "  %-14s %14s %10s %12s %8s  %s", b.electrode(), f(mm(b.bore_m())),
                     f(mm(b.radius_m())), f(mm(b.zWorst_m())), String.format(Locale.ROOT, "%.1f", 100 * b.fill()),
                     b.status().name().toLowerCase(Locale.ROOT).replace('_', ' ')));
         }
@@ -166,7 +166,7 @@ final class EnvelopeOutput {
         for (BoreClearance b : r.clearances()) {
             Map<String, Object> bm = new LinkedHashMap<>();
             bm.put("electrode", b.electrode());
-            bm.put("bore_mm", mm(b.bore_m()));
+            bm.put("bore_radius_mm", mm(b.bore_m()));
             bm.put("radius_mm", mm(b.radius_m()));
             bm.put("worst_z_mm", mm(b.zWorst_m()));
             bm.put("fill", b.fill());

@@ -72,8 +72,9 @@ final class FieldCommand implements Callable<Integer> {
         if (json) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("stack", input.shownAs());
-            m.put("elements", solution.unknowns());
-            m.put("panels", solution.mesh().panels().size());
+            // one word per thing: an element is a panel of the contour; the unknowns are its charge values
+            m.put("elements", solution.mesh().panels().size());
+            m.put("unknowns", solution.unknowns());
             m.put("solve_seconds", solution.solveSeconds());
             m.put("residual_V_per_V", solution.residual());
             m.put("solved_as_mirror_halves", solution.solvedAsMirrorHalves());
@@ -108,8 +109,9 @@ final class FieldCommand implements Callable<Integer> {
             return 0;
         }
         out.printf(Locale.ROOT, "Field of %s%n", input.shownAs());
-        out.printf(Locale.ROOT, "  boundary elements: %d unknowns on %d panels; solved in %.3f s%s; collocation residual %.1e V/V%n",
-                solution.unknowns(), solution.mesh().panels().size(), solution.solveSeconds(),
+        out.printf(Locale.ROOT, "  boundary elements: %d (pieces of the electrode contours) with %d unknowns (charge values at the"
+                + " collocation nodes); solved in %.3f s%s; collocation residual %.1e V/V%n",
+                solution.mesh().panels().size(), solution.unknowns(), solution.solveSeconds(),
                 solution.solvedAsMirrorHalves() ? " (mirror-symmetric: two half-size systems)" : "", solution.residual());
         out.printf(Locale.ROOT, "  method: surface-charge boundary elements, exact ring kernel (elliptic integrals);"
                 + " axial values from a Chebyshev expansion within %.0e of the exact sum%n", Math.max(field.axialExpansionError(), 1e-16));

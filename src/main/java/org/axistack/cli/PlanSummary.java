@@ -107,7 +107,7 @@ final class PlanSummary {
                             == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort") + " limit)" : ""));
         }
         if (!p.budgets().isEmpty()) {
-            TuneReport.budget(w, t.solutions().stream().map(FocusSolution::bias_V).toList(), p.budgets(),
+            TuneReport.budget(w, t.solutions(), p.budgets(),
                     p.budgets().get(0).depth_m());
         } else if (t.found()) {
             w.println("  Supply-stability budget: " + p.budgetNote());
@@ -127,7 +127,7 @@ final class PlanSummary {
             SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], s.limits());
             w.println(String.format(Locale.ROOT, "  %-14s %12s V/mm  %5.1f%% of comfort  %s", s.electrodes().get(i).name(),
                     g(Units.vPerMToVPerMm(max[i])), 100 * max[i] / s.limits().comfort_V_per_m(),
-                    c.name().toLowerCase(Locale.ROOT).replace('_', ' ')));
+                    c.words()));
         }
     }
 

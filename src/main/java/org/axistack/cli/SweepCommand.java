@@ -149,17 +149,19 @@ final class SweepCommand implements Callable<Integer> {
         w.printf(Locale.ROOT, "  %s, %s eV; %d points with optics, %d where the beam turns back or has no usable planes%n",
                 stack.beam().particle().label(), PlanCommand.num(stack.beam().energy_eV()), ok, points.size() - ok);
         int every = Math.max(1, (points.size() + 39) / 40);
-        w.printf(Locale.ROOT, "  %11s %10s %10s %10s %10s %10s %12s %12s%s%n", "bias_V", "f1_mm", "f2_mm", "F1_z_mm",
-                "F2_z_mm", "H2_z_mm", "Cs_mm", "Cc_mm", objectZ.isPresent() ? "   image_z_mm  magnif." : "");
+        w.printf(Locale.ROOT, "  %11s %10s %10s %10s %10s %10s %10s %12s %12s%s%n", "bias_V", "f1_mm", "f2_mm",
+                "F1_z_mm", "F2_z_mm", "H1_z_mm", "H2_z_mm", "Cs_mm", "Cc_mm",
+                objectZ.isPresent() ? "   image_z_mm  magnif." : "");
         for (int i = 0; i < points.size(); i += every) {
             SweepPoint p = points.get(i);
             if (!p.ok()) {
                 w.printf(Locale.ROOT, "  %11.4f %s%n", p.bias_V(), p.status());
                 continue;
             }
-            w.printf(Locale.ROOT, "  %11.4f %10s %10s %10s %10s %10s %12s %12s%s%n", p.bias_V(),
+            w.printf(Locale.ROOT, "  %11.4f %10s %10s %10s %10s %10s %10s %12s %12s%s%n", p.bias_V(),
                     g(p.focalLengthObject_m()), g(p.focalLengthImage_m()), g(p.focalPointObjectZ_m()),
-                    g(p.focalPointImageZ_m()), g(p.principalPlaneImageZ_m()), g(p.sphericalAberration_m()),
+                    g(p.focalPointImageZ_m()), g(p.principalPlaneObjectZ_m()), g(p.principalPlaneImageZ_m()),
+                    g(p.sphericalAberration_m()),
                     g(p.chromaticAberration_m()), objectZ.isPresent()
                             ? String.format(Locale.ROOT, " %12s %8s", g(p.imageZ_m()), f(p.magnification())) : "");
         }
@@ -181,7 +183,8 @@ final class SweepCommand implements Callable<Integer> {
     }
 
     private static String f(double x) {
-        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.5g", x) : "-";
+        // five significant digits in plain notation up to 1e7 (one notation down the column)
+        return Double.isFinite(x) ? org.axistack.report.Rounding.sig(x, 5) : "-";
     }
 
     /** A one-line progress bar on standard error, redrawn in place at each whole percent. */

@@ -15,6 +15,7 @@ import org.axistack.model.Stack;
 import org.axistack.model.SurfaceFieldLimits;
 import org.axistack.tune.BiasRange;
 import org.axistack.tune.BiasTuner;
+import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
 import org.axistack.tune.FocusTarget;
@@ -129,8 +130,10 @@ final class TuneCommand implements Callable<Integer> {
             budgets.add(FocusSensitivity.of(sol, stack, s.biases_V(), target, Units.mmToM(depth_mm)));
         }
         double seconds = (System.nanoTime() - t0) * 1e-9;
+        FocusRanking.Ranked ranked = FocusRanking.rank(result, budgets); // most useful first
+        result = ranked.result();
         PrintWriter out = cl.getOut();
-        report.single(out, result, budgets, seconds, json);
+        report.single(out, result, ranked.budgets(), seconds, json);
         out.flush();
         if (!result.found()) {
             throw new OutcomeException("no bias of '" + vary + "' in " + PlanCommand.num(range.from_V()) + " .. "

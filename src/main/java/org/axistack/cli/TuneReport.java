@@ -9,8 +9,10 @@ import java.util.Map;
 
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
+import org.axistack.report.Rounding;
 import org.axistack.report.SafetyNotice;
 import org.axistack.tune.BiasRange;
+import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
 import org.axistack.tune.FocusTarget;
@@ -172,6 +174,7 @@ final class TuneReport {
         m.put("surface_field_check", s.surfaceFieldCheck().name().toLowerCase(Locale.ROOT));
         m.put("mode", s.mode().name().toLowerCase(Locale.ROOT));
         m.put("axis_crossings_before_image", s.axisCrossings());
+        m.put("near_mirror", FocusRanking.nearMirror(s));
         m.put("focal_length_image_mm", mm(s.cardinal().focalLengthImage_m()));
         m.put("focal_point_image_z_mm", mm(s.cardinal().focalPointImageZ_m()));
         m.put("optics_error_estimate", s.cardinal().errorEstimate());
@@ -183,12 +186,15 @@ final class TuneReport {
         m.put("biases_V", biases);
         if (b != null) {
             Map<String, Double> shift = new LinkedHashMap<>();
+            Map<String, Double> volts = new LinkedHashMap<>();
             Map<String, Double> ppm = new LinkedHashMap<>();
             for (int i = 0; i < b.electrodes().size(); i++) {
                 shift.put(b.electrodes().get(i), Units.mToMm(b.imageShift_m_per_V()[i]));
+                volts.put(b.electrodes().get(i), finite(b.tolerance_V()[i]));
                 ppm.put(b.electrodes().get(i), finite(b.stabilityPerSupply()[i] * 1e6));
             }
             m.put("image_shift_mm_per_V", shift);
+            m.put("noise_drift_tolerance_V", volts);
             m.put("image_shift_mm_per_relative_energy", Units.mToMm(b.imageShiftPerRelativeEnergy_m()));
             m.put("supply_stability_ppm", ppm);
             m.put("supply_stability_all_ppm", finite(b.stabilityAllSupplies() * 1e6));
@@ -232,6 +238,7 @@ final class TuneReport {
     }
 
     private void table(PrintWriter w, List<FocusSolution> sols, List<FocusSensitivity> budgets) {
+        w.println("  Most useful first: direct images before near-mirror ones (crossings > 0), then the least touchy.");
         w.printf(Locale.ROOT, "  %12s  %-12s  %10s  %10s  %10s  %9s  %10s  %-10s %s%n", "bias_V", "mode", "image_z_mm",
                 "magnif.", "f2_mm", "crossings", "E_max_V/mm", "on", "check");
         for (FocusSolution s : sols) {
@@ -240,38 +247,46 @@ final class TuneReport {
                     Double.isNaN(s.magnification()) ? "-" : String.format(Locale.ROOT, "%.5f", s.magnification()),
                     Units.mToMm(s.cardinal().focalLengthImage_m()), s.axisCrossings(),
                     Units.vPerMToVPerMm(s.maxSurfaceField_V_per_m()), s.worstElectrode(),
-                    s.surfaceFieldCheck().name().toLowerCase(Locale.ROOT).replace('_', ' '));
+                    s.surfaceFieldCheck().words());
         }
         w.println();
-        budget(w, sols.stream().map(FocusSolution::bias_V).toList(), budgets, depth_m);
+        budget(w, sols, budgets, depth_m);
     }
 
     /**
-     * The supply-stability budget lines: for each solution (bias of the tuned electrode), the image shift per volt
-     * and the ppm stability of every biased supply alone, of all together, and of the beam energy.
+     * The supply-stability budget lines: for each solution (bias of the tuned electrode), every electrode (grounded
+     * ones too) with the image shift per volt, the volts of noise and drift it may carry alone, and for a biased
+     * electrode the relative (ppm) stability; then all supplies together and the beam energy. Two significant
+     * digits (a linearisation).
      */
-    static void budget(PrintWriter w, List<Double> tunedBias_V, List<FocusSensitivity> budgets, double depth_m) {
+    static void budget(PrintWriter w, List<FocusSolution> tuned, List<FocusSensitivity> budgets, double depth_m) {
         w.printf(Locale.ROOT, "  Supply-stability budget (focus held within +/- %s mm; linearised, first-variation equations):%n",
                 PlanCommand.num(Units.mToMm(depth_m)));
-        for (int i = 0; i < tunedBias_V.size(); i++) {
+        int d = Rounding.SENSITIVITY_DIGITS;
+        for (int i = 0; i < tuned.size(); i++) {
             FocusSensitivity b = budgets.get(i);
-            StringBuilder sb = new StringBuilder();
+            FocusSolution f = tuned.get(i);
+            w.printf(Locale.ROOT, "  %s = %s V%s:%n", f.electrode(), PlanCommand.num(f.bias_V()),
+                    FocusRanking.nearMirror(f) ? " (NEAR A MIRROR)" : "");
+            double[] volts = b.tolerance_V();
             for (int e = 0; e < b.electrodes().size(); e++) {
-                if (b.biases_V()[e] != 0) {
-                    sb.append(String.format(Locale.ROOT, "%s %.4g mm/V (%s ppm); ", b.electrodes().get(e),
-                            Units.mToMm(b.imageShift_m_per_V()[e]), ppm(b.stabilityPerSupply()[e])));
-                }
+                double bias = b.biases_V()[e];
+                w.printf(Locale.ROOT, "    %-12s %8s V  %9s mm/V  noise/drift +/- %-10s  %s%n", b.electrodes().get(e),
+                        PlanCommand.num(bias), Rounding.sig(Units.mToMm(b.imageShift_m_per_V()[e]), d),
+                        Rounding.volts(volts[e]), bias == 0 ? "grounded: no relative figure, the volts count"
+                                : "or " + ppm(b.stabilityPerSupply()[e]) + " ppm of the bias");
             }
-            w.printf(Locale.ROOT, "  %12.4f V: %sall supplies together %s ppm; beam energy: %.4g mm per unit dT/T (%s ppm)%n",
-                    tunedBias_V.get(i), sb, ppm(b.stabilityAllSupplies()), Units.mToMm(b.imageShiftPerRelativeEnergy_m()),
+            w.printf(Locale.ROOT, "    all biased supplies together %s ppm; beam energy %s mm per unit dT/T (%s ppm)%n",
+                    ppm(b.stabilityAllSupplies()), Rounding.sig(Units.mToMm(b.imageShiftPerRelativeEnergy_m()), d),
                     ppm(b.stabilityEnergy()));
         }
-        w.println("  (ppm: the relative supply stability that keeps the focus within the depth; each supply alone,"
-                + " then all at that stability drifting independently, added in quadrature)");
+        w.println("  (volts: noise, ripple or drift on that electrode alone, a ground offset for a grounded one; ppm: the"
+                + " same as a fraction of the bias; 'all together' assumes that fraction for every biased supply,"
+                + " drifting independently, added in quadrature)");
     }
 
     private static String ppm(double relative) {
-        return Double.isFinite(relative) ? String.format(Locale.ROOT, "%.3g", relative * 1e6) : "any";
+        return Double.isFinite(relative) ? Rounding.sig(relative * 1e6, Rounding.SENSITIVITY_DIGITS) : "-";
     }
 
     @SuppressWarnings("unchecked")

@@ -53,6 +53,12 @@ public final class PlanAnalysis {
     public static final int SWEEP_STEPS = 80;
 
     /** Aperture half-angles of the spot-size budget table, rad. */
+    /**
+     * Start heights of the parallel rays drawn in the plan's ray figure and in the window, as fractions of the
+     * narrowest bore (one place, so the report and the window draw the same rays).
+     */
+    public static final List<Double> RAY_HEIGHTS_OF_BORE = List.of(0.1, 0.2, 0.3, 0.4, 0.5);
+
     private static final double[] SPOT_ANGLES_RAD = {0.5e-3, 1e-3, 2e-3, 5e-3, 10e-3, 20e-3};
 
     /**

@@ -41,7 +41,8 @@ final class PlanRays {
         ElectrodeGeometry geometry = ElectrodeGeometry.of(stack);
         double bore = stack.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(r -> r > 0).min()
                 .orElse(1e-3);
-        double endZ = stack.maxZ_m(); // the stack's right end, so the picture shows a focus beyond the screen too
+        // rays stop where the beam lands: the screen when the stack has one, else the stack's right end
+        double endZ = stack.screenZ_m().orElse(stack.maxZ_m());
         boolean fromObject = beam.objectZ_m().isPresent() && beam.objectZ_m().getAsDouble() < endZ;
         double startZ = fromObject ? beam.objectZ_m().getAsDouble() : beam.startZ_m().orElse(stack.minZ_m());
         List<RayStart> starts = new ArrayList<>();
@@ -57,13 +58,15 @@ final class PlanRays {
             what = String.format(Locale.ROOT, "9 rays from the object point at z = %s mm, slopes up to +-%s mrad",
                     PlanFormat.num(Units.mToMm(startZ)), PlanFormat.num(Units.radToMrad(maxSlope)));
         } else {
-            for (int i = -5; i <= 5; i++) {
-                if (i != 0) {
-                    starts.add(RayStart.withSlopes(id++, 0.1 * bore * i, 0, startZ, 0, 0, beam.energy_eV()));
-                }
+            List<Double> heights = PlanAnalysis.RAY_HEIGHTS_OF_BORE;
+            for (double h : heights) {
+                starts.add(RayStart.withSlopes(id++, -h * bore, 0, startZ, 0, 0, beam.energy_eV()));
+                starts.add(RayStart.withSlopes(id++, h * bore, 0, startZ, 0, 0, beam.energy_eV()));
             }
-            what = String.format(Locale.ROOT, "10 rays parallel to the axis at +-10..50%% of the smallest bore (%s mm), "
-                    + "from z = %s mm", PlanFormat.num(Units.mToMm(bore)), PlanFormat.num(Units.mToMm(startZ)));
+            what = String.format(Locale.ROOT, "%d rays parallel to the axis at +-%s to %s %% of the smallest bore (%s mm), "
+                    + "from z = %s mm", starts.size(), PlanFormat.num(100 * heights.get(0)),
+                    PlanFormat.num(100 * heights.get(heights.size() - 1)), PlanFormat.num(Units.mToMm(bore)),
+                    PlanFormat.num(Units.mToMm(startZ)));
         }
         TraceTargets targets = new TraceTargets(List.of(endZ), endZ);
         Tracer.checkTargets(geometry, targets);
@@ -82,6 +85,31 @@ final class PlanRays {
             ends.merge(t.statusLabel(), 1, Integer::sum);
         }
         return new Fan(res.trajectories(), what + "; exact relativistic rays (Dormand-Prince, near-axis series plus a "
-                + "mapped remainder, as in the trace command); ended: " + ends);
+                + "mapped remainder, as in the trace command); " + endings(ends, stack.screenZ_m().isPresent()));
+    }
+
+    /** How the rays ended, in words ("all 10 reached the screen", "8 reached the screen, 2 hit electrode focus"). */
+    static String endings(Map<String, Integer> ends, boolean screen) {
+        int total = ends.values().stream().mapToInt(Integer::intValue).sum();
+        List<String> parts = new ArrayList<>();
+        for (Map.Entry<String, Integer> e : ends.entrySet()) {
+            String label = e.getKey();
+            String what;
+            if (label.equals("screen")) {
+                what = screen ? "reached the screen" : "reached the end of the stack";
+            } else if (label.startsWith("hit:")) {
+                what = "hit electrode " + label.substring(4);
+            } else if (label.equals("reflected")) {
+                what = "turned back (reflected)";
+            } else if (label.equals("left_region")) {
+                what = "left the field region";
+            } else if (label.equals("step_limit")) {
+                what = "stopped at the integrator's step limit";
+            } else {
+                what = "ended as " + label;
+            }
+            parts.add((ends.size() == 1 && e.getValue() == total && total > 1 ? "all " : "") + e.getValue() + " " + what);
+        }
+        return parts.isEmpty() ? "no rays traced" : String.join(", ", parts);
     }
 }

@@ -8,6 +8,8 @@ import org.axistack.field.FieldSolution;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.tune.BiasTuner;
+import org.axistack.report.Rounding;
+import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
 import org.axistack.tune.TuneResult;
@@ -64,6 +66,25 @@ record PlanTuning(Optional<TuneResult> tune, String note, List<FocusSensitivity>
             budgetNote = "no budget: the linearised optics failed at a focusing bias (" + e.getMessage() + ")";
             warnings.add(budgetNote);
         }
-        return new PlanTuning(Optional.of(t), note, budgets, budgetNote);
+        FocusRanking.Ranked ranked = FocusRanking.rank(t, budgets);
+        for (int i = 0; i < ranked.result().solutions().size(); i++) {
+            FocusSolution f = ranked.result().solutions().get(i);
+            if (FocusRanking.nearMirror(f)) {
+                warnings.add(nearMirrorWarning(f, ranked.budgets().isEmpty() ? null : ranked.budgets().get(i)));
+            }
+        }
+        return new PlanTuning(Optional.of(ranked.result()), note + "; listed most useful first (direct images before "
+                + "near-mirror ones, then the least touchy)", ranked.budgets(), budgetNote);
+    }
+
+    /** The warning for a near-mirror focusing bias, with the stability it would need. */
+    static String nearMirrorWarning(FocusSolution f, FocusSensitivity b) {
+        String need = b == null ? "" : ": the image moves " + Rounding.sig(Math.abs(Units.mToMm(
+                FocusRanking.tunedShift_m_per_V(f, b))), Rounding.SENSITIVITY_DIGITS) + " mm per volt, so the supply of " + f.electrode()
+                + " must hold within +/- " + Rounding.volts(FocusRanking.tunedTolerance_V(f, b)) + " for +/- "
+                + PlanFormat.num(Units.mToMm(b.depth_m())) + " mm of focus";
+        return "focusing bias " + PlanFormat.num(f.bias_V()) + " V of " + f.electrode() + " is near a mirror (the beam "
+                + "crosses the axis " + f.axisCrossings() + " time(s) inside the lens before the image)" + need
+                + "; prefer a direct focus";
     }
 }

@@ -59,7 +59,7 @@ public final class EnvelopeChart {
         double z0 = Units.mToMm(r.zStart_m());
         double z1 = Units.mToMm(r.zEnd_m());
         double rBeam = Units.mToMm(r.full().largest().radius_m());
-        double rTop = rBeam;
+        double narrowest = Double.POSITIVE_INFINITY;
         int k = 3;
         for (Electrode e : stack.electrodes()) {
             XYSeries w = new XYSeries("electrode " + e.name(), false);
@@ -76,18 +76,25 @@ public final class EnvelopeChart {
                 ZR p = e.contour().segments().get(0).start();
                 w.add(Units.mToMm(p.z_m()), Units.mToMm(p.r_m()));
             }
-            rTop = Math.max(rTop, Math.min(Units.mToMm(e.contour().minR_m()) * 1.3, 3 * rBeam));
+            if (e.contour().minR_m() > 0) {
+                narrowest = Math.min(narrowest, Units.mToMm(e.contour().minR_m()));
+            }
             data.addSeries(w);
             rend.setSeriesPaint(k, WALL);
             rend.setSeriesStroke(k, new BasicStroke(2f));
             rend.setSeriesVisibleInLegend(k, k == 3);
             k++;
         }
+        // the narrowest bore (what the envelope is compared with) is always inside the range
+        double rTop = Double.isFinite(narrowest) ? Math.max(rBeam, 1.15 * narrowest) : rBeam;
         NumberAxis zAxis = new NumberAxis("z (mm)");
         zAxis.setRange(z0, z1);
         NumberAxis rAxis = new NumberAxis("envelope radius (mm), edge");
         rAxis.setRange(0, Math.max(rTop, 1e-6) * 1.08);
         XYPlot plot = new XYPlot(data, zAxis, rAxis, rend);
+        // the thick full curve first, the thin comparison curves over it: where the zero-emittance curve
+        // coincides with the full one it stays visible
+        plot.setSeriesRenderingOrder(org.jfree.chart.plot.SeriesRenderingOrder.FORWARD);
         style(plot);
         return new JFreeChart("Beam envelope: " + r.dominance(), JFreeChart.DEFAULT_TITLE_FONT, plot, true);
     }

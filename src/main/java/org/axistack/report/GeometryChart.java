@@ -162,11 +162,30 @@ public final class GeometryChart {
         r.setDefaultSeriesVisibleInLegend(false);
         plot.setDataset(1, rays);
         plot.setRenderer(1, r);
+        // the planes the rays run between: the beam start and the screen, where the rays stop
+        stack.beam().startZ_m().ifPresent(z -> plot.addDomainMarker(plane(z, "beam start"),
+                org.jfree.chart.ui.Layer.FOREGROUND));
+        stack.screenZ_m().ifPresent(z -> plot.addDomainMarker(plane(z, "screen"), org.jfree.chart.ui.Layer.FOREGROUND));
         if (caption != null && !caption.isBlank()) {
             chart.addSubtitle(new TextTitle(caption, LABEL_FONT));
         }
         return chart;
     }
+
+    /** A labelled vertical line at a plane z (m). */
+    private static org.jfree.chart.plot.ValueMarker plane(double z_m, String label) {
+        org.jfree.chart.plot.ValueMarker m = new org.jfree.chart.plot.ValueMarker(Units.mToMm(z_m), PLANE,
+                new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {6f, 3f}, 0f));
+        m.setLabel(label);
+        m.setLabelFont(LABEL_FONT);
+        m.setLabelPaint(PLANE);
+        m.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_LEFT);
+        m.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.TOP_RIGHT);
+        return m;
+    }
+
+    /** Colour of the beam-start and screen planes. */
+    private static final Color PLANE = new Color(0x6A3D9A);
 
     /** Width and height in pixels that keep millimetres roughly square, within sensible bounds. */
     public static int[] preferredSize(Stack stack) {

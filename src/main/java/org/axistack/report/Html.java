@@ -23,7 +23,11 @@ final class Html {
         return b.toString();
     }
 
-    /** A table with a header row; cells are escaped; a cell starting with "!" is shown as a warning. */
+    /**
+     * A table with a header row; cells are escaped; a cell starting with "!!" is shown as over a hard limit (the
+     * aggressive surface-field limit, a near-mirror focus: dark red), one starting with "!" as a caution (above the
+     * comfort limit: amber), the same two levels as the window's property table.
+     */
     static String table(List<String> header, List<List<String>> rows) {
         StringBuilder b = new StringBuilder("<table>\n<tr>");
         for (String h : header) {
@@ -33,8 +37,10 @@ final class Html {
         for (List<String> r : rows) {
             b.append("<tr>");
             for (String c : r) {
-                if (c.startsWith("!")) {
-                    b.append("<td class=\"bad\">").append(esc(c.substring(1))).append("</td>");
+                if (c.startsWith("!!")) {
+                    b.append("<td class=\"over\">").append(esc(c.substring(2))).append("</td>");
+                } else if (c.startsWith("!")) {
+                    b.append("<td class=\"caution\">").append(esc(c.substring(1))).append("</td>");
                 } else {
                     b.append("<td>").append(esc(c)).append("</td>");
                 }

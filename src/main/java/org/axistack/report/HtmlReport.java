@@ -34,7 +34,7 @@ public final class HtmlReport {
             line-height:1.4}h1{font-size:24px;border-bottom:3px solid #3a7d44;padding-bottom:6px}h2{font-size:18px;
             margin-top:28px;color:#2b5d33}table{border-collapse:collapse;margin:8px 0;font-size:13px}
             th,td{border:1px solid #d5d1c8;padding:3px 8px;text-align:left;vertical-align:top}th{background:#efece4}
-            td.bad{background:#f6d9cf;font-weight:bold}.caution{border:2px solid #b33a1f;background:#fbefe9;
+            td.caution{background:#f4c04e}td.over{background:#a8321e;color:#fff;font-weight:bold}.caution{border:2px solid #b33a1f;background:#fbefe9;
             padding:8px 16px;margin:12px 0}.caution h2{color:#b33a1f;margin-top:4px}.warn{background:#fff4d6;
             border-left:4px solid #c99a1c;padding:6px 12px}.ok{background:#e8f3e6;border-left:4px solid #3a7d44;
             padding:6px 12px}pre{background:#f6f4ef;padding:8px;font-size:12px;overflow-x:auto}img{max-width:100%;
@@ -71,8 +71,12 @@ public final class HtmlReport {
             figure(EnvelopeChart.envelope(stack, plan.envelope().get()), 1200, 520, dir, "envelope", files);
         }
         if (!plan.sweep().isEmpty() && plan.sweepElectrode().isPresent()) {
-            figure(SweepChart.of(stack, plan.sweepElectrode().get(), plan.sweep(), "Optics against the bias of "
-                    + plan.sweepElectrode().get()), 1200, 760, dir, "sweep", files);
+            String swept = plan.sweepElectrode().get();
+            List<Double> focus = plan.tune().filter(t -> t.electrode().equals(swept))
+                    .map(t -> t.solutions().stream().map(org.axistack.tune.FocusSolution::bias_V).toList())
+                    .orElse(List.of());
+            figure(SweepChart.of(stack, swept, plan.sweep(), "Optics against the bias of " + swept, focus), 1200, 760,
+                    dir, "sweep", files);
         }
         // tables
         for (var t : extraTables.entrySet()) {
@@ -86,13 +90,31 @@ public final class HtmlReport {
         AtomicFiles.writeString(AtomicFiles.inside(dir, "stack.toml"), StackWriter.toToml(stack));
         files.add("stack.toml");
         Path html = AtomicFiles.inside(dir, FILE);
-        AtomicFiles.writeString(html, html(plan, files));
+        AtomicFiles.writeString(html, embedFigures(html(plan, files), dir));
         return html;
     }
 
     private static String shortNote(String s) {
         int i = s.indexOf(';');
         return i > 0 ? s.substring(0, i) : s;
+    }
+
+    private static final java.util.regex.Pattern FIGURE = java.util.regex.Pattern.compile("<img src=\"([a-z_]+\\.png)\"");
+
+    /**
+     * The report as one file that can be mailed: every figure it shows is embedded as a PNG data URI (the same
+     * bytes as the PNG file written beside it, which stays for slides and the SVG for print).
+     */
+    static String embedFigures(String html, Path dir) throws IOException {
+        java.util.regex.Matcher m = FIGURE.matcher(html);
+        StringBuilder out = new StringBuilder(html.length());
+        while (m.find()) {
+            byte[] png = Files.readAllBytes(dir.resolve(m.group(1)));
+            m.appendReplacement(out, java.util.regex.Matcher.quoteReplacement("<img src=\"data:image/png;base64,"
+                    + java.util.Base64.getEncoder().encodeToString(png) + "\" title=\"" + m.group(1) + "\""));
+        }
+        m.appendTail(out);
+        return out.toString();
     }
 
     private static void figure(JFreeChart chart, int w, int h, Path dir, String name, List<String> files) throws IOException {
@@ -186,8 +208,8 @@ public final class HtmlReport {
         List<List<String>> rows = new ArrayList<>();
         for (CheckResult r : checks) {
             rows.add(List.of(r.name(), r.quantity(), r.unit(), Html.g(r.computed()), Html.g(r.reference()),
-                    (r.passed() ? "" : "!") + Html.sci(r.error()), Html.sci(r.tolerance()), r.errorMeasure(),
-                    r.passed() ? "pass" : "!FAIL", r.source(), r.method()));
+                    (r.passed() ? "" : "!!") + Html.sci(r.error()), Html.sci(r.tolerance()), r.errorMeasure(),
+                    r.passed() ? "pass" : "!!FAIL", r.source(), r.method()));
         }
         b.append(Html.table(List.of("case", "compared", "unit", "computed", "reference", "error", "tolerance",
                 "error measure", "result", "reference source", "project method"), rows));
@@ -209,6 +231,11 @@ public final class HtmlReport {
     }
 
     static String field(double v_per_m, SurfaceFieldCheck c) {
-        return (c.warning() ? "!" : "") + Html.g(Units.vPerMToVPerMm(v_per_m));
+        return mark(c) + Html.g(Units.vPerMToVPerMm(v_per_m));
+    }
+
+    /** The table mark of a surface-field verdict: "!!" above the aggressive limit, "!" above comfort only. */
+    static String mark(SurfaceFieldCheck c) {
+        return c == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "!!" : c.warning() ? "!" : "";
     }
 }

@@ -164,7 +164,27 @@ public final class LensChart {
         XYLineAndShapeRenderer pr = new PolylineRenderer();
         pr.setSeriesPaint(0, POTENTIAL);
         pr.setSeriesStroke(0, new BasicStroke(1.6f));
-        potential = new XYPlot(axis, null, vAxis, pr);
+        // the potential keeps its own range fitted to the curve: a box zoom on the section (which zooms the
+        // shared z axis) must never zoom it to a band the curve is not in
+        potential = new XYPlot(axis, null, vAxis, pr) {
+            @Override
+            public void zoomRangeAxes(double factor, org.jfree.chart.plot.PlotRenderingInfo info,
+                    java.awt.geom.Point2D source) {
+                // fitted, not zoomed
+            }
+
+            @Override
+            public void zoomRangeAxes(double factor, org.jfree.chart.plot.PlotRenderingInfo info,
+                    java.awt.geom.Point2D source, boolean useAnchor) {
+                // fitted, not zoomed
+            }
+
+            @Override
+            public void zoomRangeAxes(double lowerPercent, double upperPercent,
+                    org.jfree.chart.plot.PlotRenderingInfo info, java.awt.geom.Point2D source) {
+                // fitted, not zoomed
+            }
+        };
         potential.setBackgroundPaint(BACKGROUND);
         potential.setDomainGridlinePaint(GRID);
         potential.setRangeGridlinePaint(GRID);

@@ -11,6 +11,8 @@ import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.SpotSizeBudget;
+import org.axistack.tune.FocusRanking;
+import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
 import org.axistack.tune.SurfaceFieldCheck;
 import org.axistack.tune.TuneResult;
@@ -110,13 +112,31 @@ final class PlanSections {
             return;
         }
         List<List<String>> rows = new ArrayList<>();
-        for (FocusSolution f : t.solutions()) {
-            rows.add(List.of(Html.g(f.bias_V()), f.mode().name().toLowerCase(Locale.ROOT), HtmlReport.mm(f.imageZ_m()),
-                    Html.g(f.magnification()), HtmlReport.field(f.maxSurfaceField_V_per_m(), f.surfaceFieldCheck()),
-                    f.worstElectrode(), String.valueOf(f.axisCrossings())));
+        boolean budgets = plan.budgets().size() == t.solutions().size();
+        for (int i = 0; i < t.solutions().size(); i++) {
+            FocusSolution f = t.solutions().get(i);
+            boolean mirror = FocusRanking.nearMirror(f);
+            String shift = "-";
+            String hold = "-";
+            if (budgets) {
+                FocusSensitivity s = plan.budgets().get(i);
+                shift = Rounding.sig(Math.abs(Units.mToMm(FocusRanking.tunedShift_m_per_V(f, s))), Rounding.SENSITIVITY_DIGITS);
+                hold = "+/- " + Rounding.volts(FocusRanking.tunedTolerance_V(f, s));
+            }
+            rows.add(List.of(String.valueOf(i + 1), HtmlReport.num(f.bias_V()), f.mode().name().toLowerCase(Locale.ROOT),
+                    HtmlReport.mm(f.imageZ_m()), Html.g(f.magnification()),
+                    HtmlReport.field(f.maxSurfaceField_V_per_m(), f.surfaceFieldCheck()), f.worstElectrode(),
+                    (mirror ? "!!" : "") + f.axisCrossings() + (mirror ? " (near a mirror)" : " (direct)"),
+                    (mirror ? "!!" : "") + shift, (mirror ? "!!" : "") + hold));
         }
-        b.append(Html.table(List.of("bias (V)", "mode", "image z (mm)", "magnification", "max surface field (V/mm)",
-                "on electrode", "crossovers before the image"), rows));
+        String depth = plan.budgets().isEmpty() ? "the depth" : HtmlReport.num(Units.mToMm(plan.budgets().get(0).depth_m()))
+                + " mm";
+        b.append(Html.table(List.of("rank", "bias (V)", "mode", "image z (mm)", "magnification", "max surface field (V/mm)",
+                "on electrode", "crossovers before the image", "image shift per volt of " + t.electrode() + " (mm/V)",
+                t.electrode() + " must hold within (focus +/- " + depth + ")"), rows));
+        b.append("<p class=\"note\">Most useful first: direct images before near-mirror ones (the beam crosses over "
+                + "inside the lens, the image moves far per volt), then the least touchy. Dark red: near a mirror, "
+                + "usable only with the supply stability shown.</p>\n");
     }
 
     static void surfaceFields(StringBuilder b, LensPlan plan) {
@@ -128,7 +148,7 @@ final class PlanSections {
             SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], s.limits());
             rows.add(List.of(s.electrodes().get(i).name(), HtmlReport.num(s.electrodes().get(i).bias_V()),
                     HtmlReport.field(max[i], c), Html.g(max[i] / s.limits().comfort_V_per_m() * 100),
-                    c.name().toLowerCase(Locale.ROOT).replace('_', ' '), Html.g(q[i] * 1e12)));
+                    c.words(), Html.g(q[i] * 1e12)));
         }
         b.append("<h2>Electrode surface fields</h2>\n");
         b.append(Html.table(List.of("electrode", "bias (V)", "largest surface field (V/mm)", "% of comfort limit",

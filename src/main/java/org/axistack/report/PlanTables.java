@@ -10,6 +10,7 @@ import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.SpotSizeBudget;
+import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSolution;
 import org.axistack.verify.CheckResult;
 
@@ -98,11 +99,13 @@ final class PlanTables {
         plan.tune().ifPresent(tr -> {
             List<List<Object>> tu = new ArrayList<>();
             for (FocusSolution f : tr.solutions()) {
-                tu.add(List.of(f.electrode(), f.bias_V(), mm(f.imageZ_m()), f.magnification(),
-                        Units.vPerMToVPerMm(f.maxSurfaceField_V_per_m()), f.worstElectrode()));
+                tu.add(List.of(f.electrode(), f.bias_V(), mm(f.imageZ_m()), blankIfMissing(f.magnification()),
+                        Units.vPerMToVPerMm(f.maxSurfaceField_V_per_m()), f.worstElectrode(), f.axisCrossings(),
+                        FocusRanking.nearMirror(f) ? "yes" : "no"));
             }
+            // most useful first (the plan ranks them): direct images, then near-mirror ones
             t.put("focus_biases.csv", csv(List.of("electrode", "bias_V", "image_z_mm", "magnification",
-                    "max_surface_field_V_per_mm", "worst_electrode"), tu));
+                    "max_surface_field_V_per_mm", "worst_electrode", "axis_crossings", "near_mirror"), tu));
         });
         if (!plan.budgets().isEmpty()) {
             t.put("supply_budget.csv", csv(BudgetSection.CSV_HEADER, BudgetSection.csvRows(plan)));
@@ -120,8 +123,12 @@ final class PlanTables {
     }
 
     private static Object mm(double m) {
-        double v = Units.mToMm(m);
-        return Double.isFinite(v) ? v : "";
+        return blankIfMissing(Units.mToMm(m));
+    }
+
+    /** A number, or a blank cell for a missing one (NaN, infinite): the convention of every CSV file. */
+    private static Object blankIfMissing(double x) {
+        return Double.isFinite(x) ? (Object) x : "";
     }
 
     private static String csv(List<String> header, List<List<Object>> rows) {

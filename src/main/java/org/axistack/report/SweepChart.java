@@ -11,7 +11,12 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.TextAnchor;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
@@ -26,12 +31,25 @@ public final class SweepChart {
 
     private static final Color BACKGROUND = new Color(0xF7F8FA);
     private static final Color GRID = new Color(0xDADDE3);
-    private static final Color[] LINES = {new Color(0x23395B), new Color(0x3E8E7E), new Color(0xB5543C), new Color(0x8A6FB0)};
+    /** One colour per curve, none repeated between the two panels. */
+    private static final Color[] LINES = {new Color(0x23395B), new Color(0x3E8E7E), new Color(0xB5543C),
+        new Color(0x8A6FB0), new Color(0xC9901A), new Color(0x2F7FC1)};
+    private static final Color MARK = new Color(0x6A3D9A);
+    private static final Color REFLECTED = new Color(0xE9E2D0);
 
     private SweepChart() {
     }
 
     public static JFreeChart of(Stack stack, String electrode, List<SweepPoint> points, String title) {
+        return of(stack, electrode, points, title, List.of());
+    }
+
+    /**
+     * The chart with the screen plane (a horizontal line in the upper panel), the biases that focus on it
+     * (vertical lines) and the biases where the beam turns back or has no usable planes (shaded, labelled).
+     */
+    public static JFreeChart of(Stack stack, String electrode, List<SweepPoint> points, String title,
+            List<Double> focusBiases_V) {
         double window = 3 * Units.mToMm(stack.maxZ_m() - stack.minZ_m());
         double centre = Units.mToMm(0.5 * (stack.minZ_m() + stack.maxZ_m()));
         XYSeriesCollection top = new XYSeriesCollection();
@@ -48,8 +66,54 @@ public final class SweepChart {
         mm.setAutoRangeIncludesZero(false);
         LogAxis ab = new LogAxis("Cs, Cc (mm, log scale)");
         ab.setSmallestValue(1e-3);
+        ab.setNumberFormatOverride(new java.text.DecimalFormat("#,##0.###", // plain tick labels: 10, 100, 1,000
+                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT)));
         XYPlot upper = new XYPlot(top, null, mm, renderer(0));
         XYPlot lower = new XYPlot(bottom, null, ab, renderer(3));
+        stack.screenZ_m().ifPresent(z -> {
+            ValueMarker screen = new ValueMarker(Units.mToMm(z), MARK, new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
+                    BasicStroke.JOIN_MITER, 10f, new float[] {6f, 3f}, 0f));
+            screen.setLabel("screen z = " + HtmlReport.num(Units.mToMm(z)) + " mm");
+            screen.setLabelPaint(MARK);
+            screen.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+            screen.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+            upper.addRangeMarker(screen, Layer.FOREGROUND);
+        });
+        for (double b : focusBiases_V) {
+            ValueMarker m = new ValueMarker(b, MARK, new BasicStroke(1.0f));
+            m.setLabel("focus " + HtmlReport.num(b) + " V");
+            m.setLabelPaint(MARK);
+            m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+            m.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+            upper.addDomainMarker(m, Layer.FOREGROUND);
+            lower.addDomainMarker(new ValueMarker(b, MARK, new BasicStroke(1.0f)), Layer.FOREGROUND);
+        }
+        // runs of biases without optics (the beam turns back): shaded and said, never silently empty
+        int i = 0;
+        while (i < points.size()) {
+            if (points.get(i).ok()) {
+                i++;
+                continue;
+            }
+            int j = i;
+            while (j + 1 < points.size() && !points.get(j + 1).ok()) {
+                j++;
+            }
+            double a = points.get(i).bias_V();
+            double b = points.get(j).bias_V();
+            String why = points.get(i).status().startsWith("reflect") ? "beam reflected" : points.get(i).status();
+            for (XYPlot p : new XYPlot[] {upper, lower}) {
+                IntervalMarker band = new IntervalMarker(Math.min(a, b), Math.max(a, b), REFLECTED);
+                if (p == upper) {
+                    band.setLabel(why + " (" + HtmlReport.num(Math.min(a, b)) + " .. " + HtmlReport.num(Math.max(a, b))
+                            + " V)");
+                    band.setLabelAnchor(RectangleAnchor.CENTER);
+                    band.setLabelTextAnchor(TextAnchor.CENTER);
+                }
+                p.addDomainMarker(band, Layer.BACKGROUND);
+            }
+            i = j + 1;
+        }
         CombinedDomainXYPlot plot = new CombinedDomainXYPlot(bias);
         plot.add(upper, 3);
         plot.add(lower, 2);
@@ -64,7 +128,7 @@ public final class SweepChart {
     private static XYLineAndShapeRenderer renderer(int firstColour) {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
         for (int i = 0; i < 3; i++) {
-            r.setSeriesPaint(i, LINES[(firstColour + i) % LINES.length]);
+            r.setSeriesPaint(i, LINES[firstColour + i]);
             r.setSeriesStroke(i, i == 1 ? new BasicStroke(1.8f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                     new float[] {7f, 4f}, 0f) : new BasicStroke(1.8f));
         }

@@ -29,7 +29,8 @@ import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
  * <p>Supply budget: a supply of relative stability e moves the image by e |V dZ/dV|; the allowed e for a focus
  * held within +/- depth is depth / |V dZ/dV| per supply alone, and depth / sqrt(sum (V_i dZ/dV_i)^2) when all
  * supplies have the same relative stability and drift independently (errors added in quadrature). The same for
- * the beam energy with T dZ/dT.
+ * the beam energy with T dZ/dT. In absolute terms every electrode (a grounded one too) may carry depth / |dZ/dV_i|
+ * volts of noise or drift on its own ({@link #tolerance_V()}).
  *
  * @param electrodes          electrode names (stack order)
  * @param biases_V            the biases linearised about, V
@@ -68,6 +69,21 @@ public record FocusSensitivity(List<String> electrodes, double[] biases_V, doubl
     @Override
     public double[] stabilityPerSupply() {
         return stabilityPerSupply.clone();
+    }
+
+    /**
+     * Absolute budget of every electrode, grounded ones included: the volts of noise or drift on that electrode
+     * alone (supply ripple, a ground offset, a wandering 0 V return) that keep the focus within +/- the depth,
+     * depth / |dZ/dV_i|; infinite when the electrode does not move the image. Unlike the relative view
+     * ({@link #stabilityPerSupply()}, ppm of the bias) it exists for an electrode at 0 V too.
+     */
+    public double[] tolerance_V() {
+        double[] t = new double[imageShift_m_per_V.length];
+        for (int i = 0; i < t.length; i++) {
+            double s = Math.abs(imageShift_m_per_V[i]);
+            t[i] = s == 0 ? Double.POSITIVE_INFINITY : depth_m / s;
+        }
+        return t;
     }
 
     /**

@@ -24,4 +24,13 @@ public enum SurfaceFieldCheck {
     public boolean warning() {
         return this != WITHIN;
     }
+
+    /** The verdict in the words every front end shows ("within the limits", "above the comfort limit", ...). */
+    public String words() {
+        return switch (this) {
+            case WITHIN -> "within the limits";
+            case ABOVE_COMFORT -> "above the comfort limit";
+            case ABOVE_AGGRESSIVE -> "above the aggressive limit";
+        };
+    }
 }

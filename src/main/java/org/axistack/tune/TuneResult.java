@@ -9,7 +9,7 @@ import java.util.Optional;
  * @param electrode   the varied electrode
  * @param target      object and image planes
  * @param range       the bias range searched
- * @param solutions   all solutions found, in increasing bias
+ * @param solutions   all solutions found, in increasing bias (or most useful first, as ranked by {@link FocusRanking})
  * @param nearest     when there is no solution: the bias that came nearest (empty when solutions exist or when
  *                    every bias in the range reflects the beam)
  * @param evaluations optics evaluations used (scan plus root finding)

@@ -25,7 +25,8 @@ final class BiasPanel extends JPanel {
     private final List<JTextField> fields = new ArrayList<>();
     private final List<String> names = new ArrayList<>();
     private final double[] biases;
-    private final BiasScale scale;
+    private BiasScale scale;
+    private final double energyPerCharge_V;
     private final Consumer<double[]> onChange;
     private final Consumer<String> onError;
     private boolean updating;
@@ -39,9 +40,9 @@ final class BiasPanel extends JPanel {
         for (double b : biases) {
             maxAbs = Math.max(maxAbs, Math.abs(b));
         }
-        scale = BiasScale.forStack(maxAbs, stack.beam().energyPerCharge_V());
-        setBorder(BorderFactory.createTitledBorder("Electrode biases (V), slider range +/- "
-                + UiFormat.num(scale.limit_V()) + " V"));
+        energyPerCharge_V = stack.beam().energyPerCharge_V();
+        scale = BiasScale.forStack(maxAbs, energyPerCharge_V);
+        setBorder(BorderFactory.createTitledBorder(title()));
         GridBagConstraints c = new GridBagConstraints();
         c.insets = new Insets(2, 4, 2, 4);
         c.anchor = GridBagConstraints.WEST;
@@ -102,11 +103,36 @@ final class BiasPanel extends JPanel {
         }
     }
 
+    private String title() {
+        return "Electrode biases (V), slider range +/- " + UiFormat.num(scale.limit_V()) + " V";
+    }
+
+    /**
+     * Widens every slider's range when a bias beyond it is set (typed, or a focusing bias from Tune), so no
+     * slider pins at its end: the range follows the biases in use ({@link BiasScale#forStack}).
+     */
+    private void fit(double v) {
+        if (Math.abs(v) <= scale.limit_V()) {
+            return;
+        }
+        double maxAbs = Math.abs(v);
+        for (double b : biases) {
+            maxAbs = Math.max(maxAbs, Math.abs(b));
+        }
+        scale = BiasScale.forStack(maxAbs, energyPerCharge_V);
+        for (int i = 0; i < sliders.size(); i++) {
+            sliders.get(i).setValue(scale.position(biases[i]));
+        }
+        ((javax.swing.border.TitledBorder) getBorder()).setTitle(title());
+        repaint();
+    }
+
     /** Sets one bias as if the user had moved its control, and reports the change. */
     void set(int k, double v, boolean fromSlider) {
         biases[k] = v;
         updating = true;
         try {
+            fit(v);
             if (!fromSlider) {
                 sliders.get(k).setValue(scale.position(v));
             }

@@ -33,9 +33,10 @@ public record EnvelopeLayer(double current_A, double emittance_m_rad, double rad
         }
     }
 
-    /** The window's starting values: no current, 1 mm mrad, a quarter of the bore. */
+    /** The window's starting values: the plan's current and emittance (one place), a quarter of the bore. */
     public static EnvelopeLayer defaults() {
-        return new EnvelopeLayer(0, 1e-6, 0.25);
+        org.axistack.plan.PlanAnalysis.Settings plan = org.axistack.plan.PlanAnalysis.Settings.defaults();
+        return new EnvelopeLayer(plan.current_A(), plan.emittance_m_rad(), 0.25);
     }
 
     /** The request for a stack: parallel start at the beam's start plane. */

@@ -63,8 +63,8 @@ public final class LensWindow extends JFrame {
     final JProgressBar progress = new JProgressBar(0, 1000);
     final JButton cancel = new JButton("Cancel");
     final JPanel biasHolder = new JPanel(new BorderLayout());
-    final JTextField currentField = new JTextField("0", 6);
-    final JTextField emittanceField = new JTextField("1", 6);
+    final JTextField currentField = new JTextField(UiFormat.num(EnvelopeLayer.defaults().current_A() * 1e6), 6);
+    final JTextField emittanceField = new JTextField(UiFormat.num(EnvelopeLayer.defaults().emittance_m_rad() * 1e6), 6);
     private final WindowActions actions;
     private final ExecutorService live = Executors.newSingleThreadExecutor(daemon("axistack-live"));
     private final ExecutorService slow = Executors.newSingleThreadExecutor(daemon("axistack-envelope"));
@@ -120,6 +120,11 @@ public final class LensWindow extends JFrame {
         tuneTab.add(propScroll, BorderLayout.CENTER);
         tabs.addTab("Tune", tuneTab);
         tabs.addTab("Stack text", editorPanel());
+        tabs.addChangeListener(e -> {
+            if (tabs.getSelectedIndex() == 1 && biasPanel != null) {
+                syncText(biasPanel.biases());
+            }
+        });
         right.add(tabs, BorderLayout.CENTER);
         right.setPreferredSize(new Dimension(540, 600));
 
@@ -132,6 +137,7 @@ public final class LensWindow extends JFrame {
         bar.setBorder(BorderFactory.createEmptyBorder(3, 6, 3, 6));
         readout.setFont(readout.getFont().deriveFont(Font.PLAIN));
         bar.add(readout);
+        bar.add(Box.createHorizontalStrut(24)); // the read-out and the status never run together
         bar.add(Box.createHorizontalGlue());
         bar.add(status);
         bar.add(Box.createHorizontalStrut(12));
@@ -228,6 +234,36 @@ public final class LensWindow extends JFrame {
         updateTitle();
     }
 
+    /**
+     * Writes the biases set with the controls into the stack text in place (comments and layout kept), so the
+     * "Stack text" tab never shows an old bias. Left alone while the text does not parse (being edited) or names
+     * other electrodes than the solved stack.
+     */
+    void syncText(double[] biases) {
+        if (doc == null || solvedStack == null) {
+            return;
+        }
+        try {
+            org.axistack.model.Stack parsed = doc.parse();
+            if (!parsed.names().equals(solvedStack.names()) || Arrays.equals(parsed.biases_V(), biases)) {
+                return;
+            }
+            String text = doc.textWithBiases(parsed, biases);
+            int caret = editor.getCaretPosition();
+            doc = doc.withText(text);
+            editorUpdating = true;
+            try {
+                editor.setText(text);
+                editor.setCaretPosition(Math.min(caret, text.length()));
+            } finally {
+                editorUpdating = false;
+            }
+            updateTitle();
+        } catch (StackInputException e) {
+            // the text is being edited and does not parse: leave it as typed
+        }
+    }
+
     /** Whether anything would be lost on close: edited text or biases moved since the last save. */
     boolean unsaved() {
         if (doc == null) {
@@ -292,6 +328,9 @@ public final class LensWindow extends JFrame {
         chartPanel.markChange(System.nanoTime());
         cancelEnvelope();
         pending.set(biases);
+        if (editor.isShowing()) {
+            syncText(biases);
+        }
         LensSession s = session;
         submit(live, () -> {
             double[] b = pending.getAndSet(null);

@@ -33,7 +33,8 @@ import org.axistack.trace.Trajectory;
 public final class LiveRays {
 
     /** Fractions of the narrowest bore at which parallel rays start. */
-    static final double[] HEIGHTS = {0.12, 0.24, 0.36, 0.48, 0.6};
+    static final double[] HEIGHTS = org.axistack.plan.PlanAnalysis.RAY_HEIGHTS_OF_BORE.stream()
+            .mapToDouble(Double::doubleValue).toArray(); // the same rays as the report's figure
     /** Rays in the object-point fan. */
     static final int FAN_RAYS = 9;
 

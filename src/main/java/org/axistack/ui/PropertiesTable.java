@@ -5,7 +5,8 @@ import java.awt.Component;
 import java.util.List;
 import javax.swing.JTable;
 import javax.swing.table.AbstractTableModel;
-import javax.swing.table.DefaultTableCellRenderer;
+import javax.swing.JTextArea;
+import javax.swing.table.TableCellRenderer;
 
 /**
  * The property rows as a two-column table. Surface fields above the comfort limit are drawn on amber,
@@ -27,16 +28,24 @@ final class PropertiesTable extends JTable {
         setRowSelectionAllowed(false);
         getColumnModel().getColumn(0).setPreferredWidth(230);
         getColumnModel().getColumn(1).setPreferredWidth(190);
-        setDefaultRenderer(Object.class, new DefaultTableCellRenderer() {
+        // cells wrap at word boundaries and rows grow to fit, so a long value ("optics: not available: the beam
+        // is reflected at ...") is read whole, never cut with an ellipsis; the full text is also the tooltip
+        setDefaultRenderer(Object.class, new TableCellRenderer() {
+            private final JTextArea area = new JTextArea();
+
             @Override
             public Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus, int row,
                     int col) {
-                Component c = super.getTableCellRendererComponent(t, v, false, false, row, col);
+                area.setLineWrap(true);
+                area.setWrapStyleWord(true);
+                area.setFont(t.getFont());
+                area.setText(v == null ? "" : v.toString());
+                area.setToolTipText(v == null ? null : v.toString());
                 PropertySheet.Level level = model.rows.get(row).level();
-                c.setBackground(level == PropertySheet.Level.OVER ? OVER
+                area.setBackground(level == PropertySheet.Level.OVER ? OVER
                         : level == PropertySheet.Level.CAUTION ? CAUTION : Color.WHITE);
-                c.setForeground(level == PropertySheet.Level.OVER ? Color.WHITE : Color.BLACK);
-                return c;
+                area.setForeground(level == PropertySheet.Level.OVER ? Color.WHITE : Color.BLACK);
+                return area;
             }
         });
     }
@@ -44,6 +53,38 @@ final class PropertiesTable extends JTable {
     void show(PropertySheet sheet) {
         model.rows = sheet.rows();
         model.fireTableDataChanged();
+        fitRows();
+    }
+
+    @Override
+    public void doLayout() {
+        super.doLayout();
+        fitRows();
+    }
+
+    /** Row heights that show every cell's wrapped text whole. */
+    private void fitRows() {
+        for (int row = 0; row < getRowCount(); row++) {
+            int h = 16;
+            for (int col = 0; col < getColumnCount(); col++) {
+                Component c = prepareRenderer(getCellRenderer(row, col), row, col);
+                int w = getColumnModel().getColumn(col).getWidth();
+                if (w > 0) {
+                    c.setSize(w, Short.MAX_VALUE);
+                }
+                h = Math.max(h, c.getPreferredSize().height);
+            }
+            if (getRowHeight(row) != h) {
+                setRowHeight(row, h);
+            }
+        }
+    }
+
+    @Override
+    public String getToolTipText(java.awt.event.MouseEvent e) {
+        int row = rowAtPoint(e.getPoint());
+        int col = columnAtPoint(e.getPoint());
+        return row < 0 || col < 0 ? null : String.valueOf(getValueAt(row, col));
     }
 
     List<PropertySheet.Row> rows() {

@@ -136,7 +136,7 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
             double e = max[i];
             Level level = level(e, lim);
             String margin = level == Level.PLAIN
-                    ? UiFormat.num(100 * (1 - e / lim.comfort_V_per_m())) + " % below comfort"
+                    ? UiFormat.num(100 * e / lim.comfort_V_per_m()) + " % of comfort limit"
                     : level == Level.CAUTION
                             ? "above comfort " + UiFormat.num(Units.vPerMToVPerMm(lim.comfort_V_per_m()))
                             : "ABOVE aggressive " + UiFormat.num(Units.vPerMToVPerMm(lim.aggressive_V_per_m()));

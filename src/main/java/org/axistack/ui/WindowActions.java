@@ -107,7 +107,8 @@ final class WindowActions {
         bar.add(file);
 
         JMenu view = new JMenu("View");
-        view.add(item("Fit the whole lens", KeyEvent.VK_0, e -> w.chartPanel.restoreAutoBounds()));
+        // Ctrl-F (fit), not Ctrl-0, which looks like Ctrl-O (open)
+        view.add(item("Fit the whole lens", KeyEvent.VK_F, e -> w.chartPanel.restoreAutoBounds()));
         JMenuItem help = item("Zoom and pan: drag a box to zoom, wheel to zoom, Ctrl-drag to pan", 0, e -> { });
         help.setEnabled(false);
         view.add(help);

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.stream.Stream;
 
 import org.axistack.report.SafetyNotice;
@@ -23,7 +24,7 @@ class PlanCommandTest {
         CliRun.Run r = CliRun.run("plan", "--no-check", "--out", out.toString());
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("Flood-gun einzel lens", "built-in demo", "IEC 61010-1", "Cardinal elements (lens converging", "Aberrations: Cs =", "Spot-size budget",
-                "Focusing bias", "focus = ", "Supply-stability budget (focus held within +/- 0.1 mm", "mm/V (",
+                "Focusing bias", "focus = ", "Supply-stability budget (focus held within +/- 0.1 mm", "mm/V  noise/drift +/- ",
                 "Surface fields", "Report: ", SafetyNotice.TITLE);
         assertThat(r.err()).contains("field solve: done, 100%", "plan: beam envelope");
         for (String f : new String[] {"report.html", "geometry.png", "geometry.svg", "axial.png", "axial.svg",
@@ -41,6 +42,24 @@ class PlanCommandTest {
                 "[[electrode]]", SafetyNotice.TITLE, "<h2>Focus-bias sweep</h2>", "Not run (plan --no-check)",
                 "<h2>Supply-stability budget</h2>");
         assertThat(html).doesNotContain("http://", "https://", "<script");
+        // one file to mail: the figures are inside it (and still beside it as files)
+        assertThat(html).contains("<img src=\"data:image/png;base64,").doesNotContain("<img src=\"geometry.png\"");
+        // the supply budget in volts for every electrode, grounded ones too (a grounded electrode once read
+        // "any" stability although the image moves with its ground offset): common practice, no source
+        List<String> budget = Files.readAllLines(out.resolve("supply_budget.csv"));
+        assertThat(budget.get(0)).contains("tolerance_V");
+        int tol = List.of(budget.get(0).split(",")).indexOf("tolerance_V");
+        int bias = List.of(budget.get(0).split(",")).indexOf("bias_V");
+        long grounded = budget.stream().skip(1).map(l -> l.split(",", -1)).filter(c -> c[1].equals("electrode"))
+                .filter(c -> Double.parseDouble(c[bias]) == 0).peek(c -> assertThat(c[tol]).isNotBlank()
+                        .satisfies(v -> assertThat(Double.parseDouble(v)).isPositive())).count();
+        assertThat(grounded).as("grounded electrodes in the demo's budget").isPositive();
+        assertThat(html).contains("(grounded)", "noise and drift allowed, absolute").doesNotContain(">any<");
+        // focusing biases most useful first: a direct focus in the first row, near-mirror ones flagged
+        List<String> focus = Files.readAllLines(out.resolve("focus_biases.csv"));
+        int crossings = List.of(focus.get(0).split(",")).indexOf("axis_crossings");
+        assertThat(crossings).isNotNegative();
+        assertThat(focus.get(1).split(",")[crossings]).isEqualTo("0");
         assertThat(Files.readAllLines(out.resolve("axial.csv")).get(0))
                 .isEqualTo("z_mm,potential_V,dV_dz_V_per_mm,d2V_dz2_V_per_mm2");
         try (Stream<Path> files = Files.list(out)) {

@@ -19,6 +19,6 @@ class HtmlReportVerificationTest {
         HtmlReport.verification(b, List.of(ok, bad));
         String html = b.toString();
         assertThat(html).contains("<td>sphere capacitance</td>", "<td>2.22530</td>", "C = 4 pi eps0 R &lt;classical&gt;",
-                "<td class=\"bad\">FAIL</td>", "<td class=\"bad\">5.00e-01</td>", "1 of 2 cases within tolerance");
+                "<td class=\"over\">FAIL</td>", "<td class=\"over\">5.00e-01</td>", "1 of 2 cases within tolerance");
     }
 }

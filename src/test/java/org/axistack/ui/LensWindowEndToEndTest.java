@@ -63,16 +63,38 @@ class LensWindowEndToEndTest {
     @TempDir
     Path tmp;
 
+    /** Whatever escaped on the event thread (or any other) during a test: nothing may. */
+    private final List<Throwable> escaped = java.util.Collections.synchronizedList(new ArrayList<>());
+    private Thread.UncaughtExceptionHandler previousHandler;
+
+    @org.junit.jupiter.api.BeforeEach
+    void watchUncaught() {
+        previousHandler = Thread.getDefaultUncaughtExceptionHandler();
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> escaped.add(e));
+    }
+
     @AfterEach
     void close() throws Exception {
-        for (LensWindow w : windows) {
-            SwingUtilities.invokeAndWait(() -> {
-                w.shutdown();
-                w.dispose();
-            });
-        }
-        for (Window d : Window.getWindows()) {
-            SwingUtilities.invokeAndWait(d::dispose);
+        try {
+            for (LensWindow w : windows) {
+                SwingUtilities.invokeAndWait(() -> {
+                    w.shutdown();
+                    // a slider event or a queued redraw after the workers stopped (as when the window closes
+                    // while a bias moves) is dropped, never a RejectedExecutionException on the event thread
+                    if (w.session != null) {
+                        w.biasesChanged(w.session.stack().biases_V());
+                    }
+                    w.dispose();
+                });
+            }
+            for (Window d : Window.getWindows()) {
+                SwingUtilities.invokeAndWait(d::dispose);
+            }
+            Thread.sleep(200);
+            SwingUtilities.invokeAndWait(() -> { }); // let queued events run
+            assertThat(escaped).as("exceptions thrown on the event thread or a worker").isEmpty();
+        } finally {
+            Thread.setDefaultUncaughtExceptionHandler(previousHandler);
         }
     }
 
@@ -138,8 +160,21 @@ class LensWindowEndToEndTest {
         JDialog choose = waitForDialog("Focus on a plane", d -> find(d, AbstractButton.class,
                 x -> "Use 1".equals(x.getText())).isPresent());
         // reference: the tuning package on the same solution, stack and request
-        TuneResult ref = new BiasTuner(w.session.solution(), shown).focus("focus", Units.mmToM(planeMm));
-        assertThat(ref.found()).isTrue();
+        TuneResult found = new BiasTuner(w.session.solution(), shown).focus("focus", Units.mmToM(planeMm));
+        assertThat(found.found()).isTrue();
+        List<org.axistack.tune.FocusSensitivity> budgets = new ArrayList<>();
+        for (FocusSolution s : found.solutions()) {
+            budgets.add(org.axistack.tune.FocusSensitivity.of(w.session.solution(), shown, s.biases_V(), found.target(),
+                    org.axistack.tune.FocusSensitivity.DEFAULT_DEPTH_M));
+        }
+        // the dialog lists them most useful first and never offers a near-mirror one first
+        org.axistack.tune.FocusRanking.Ranked ranked = org.axistack.tune.FocusRanking.rank(found, budgets);
+        TuneResult ref = ranked.result();
+        int first = FocusAction.defaultChoice(ranked);
+        assertThat(first == ref.solutions().size()
+                || !org.axistack.tune.FocusRanking.nearMirror(ref.solutions().get(first))).isTrue();
+        assertThat(onEdt(() -> find(choose, javax.swing.JTextArea.class, t -> true).map(t -> t.getText()).orElse("")
+                + String.join("\n", labels(choose)))).contains("most useful first");
         int pick = ref.solutions().size() - 1;
         FocusSolution expected = ref.solutions().get(pick);
         SwingUtilities.invokeAndWait(() -> button(choose, "Use " + (pick + 1)).doClick());
@@ -241,6 +276,50 @@ class LensWindowEndToEndTest {
         SwingUtilities.invokeAndWait(() -> button(fromHelp, ok()).doClick());
     }
 
+    /**
+     * What a new user hit in the built-in demo: quitting it untouched asked about unsaved changes; a focusing bias
+     * beyond the slider range pinned the slider at its end; the stack text kept the old bias after a slider
+     * change; a box zoom blanked the axial-potential curve; Ctrl-0 (fit) looked like Ctrl-O (open).
+     * Common practice, no source.
+     */
+    @Test
+    void theDemoBehavesAsANewUserExpects() throws Exception {
+        Preferences prefs = freshPreferences();
+        RecentFiles recent = new RecentFiles(prefs);
+        recent.markCautionsSeen();
+        LensWindow w = Desktop.open(null, recent);
+        windows.add(w);
+        waitFor(() -> w.current != null && w.session != null, "the first view");
+        boolean unsavedAtStart = onEdt(() -> w.unsaved());
+        assertThat(unsavedAtStart).as("the untouched demo has nothing to save").isFalse();
+
+        int k = w.session.stack().indexOf("focus");
+        double far = 3 * w.biasPanel.scale().limit_V() + 0.8;
+        SwingUtilities.invokeAndWait(() -> w.biasPanel.set(k, far, false));
+        assertThat(w.biasPanel.scale().limit_V()).isGreaterThan(far);
+        assertThat(onEdt(() -> w.biasPanel.slider(k).getValue())).isLessThan(w.biasPanel.slider(k).getMaximum());
+
+        // the stack text shows the bias set with the controls
+        SwingUtilities.invokeAndWait(() -> find(w.getContentPane(), javax.swing.JTabbedPane.class, t -> true)
+                .orElseThrow().setSelectedIndex(1));
+        String text = onEdt(() -> w.editor.getText());
+        assertThat(text).contains("bias_V = " + UiFormat.num(far));
+        boolean unsavedNow = onEdt(() -> w.unsaved());
+        assertThat(unsavedNow).isTrue();
+
+        // a zoom of the potential's range leaves the curve in view (the range stays fitted to it)
+        waitFor(() -> w.lensChart.potential().getDataset().getItemCount(0) > 0, "the axial potential");
+        org.jfree.data.Range before = onEdt(() -> w.lensChart.potential().getRangeAxis().getRange());
+        SwingUtilities.invokeAndWait(() -> w.lensChart.potential().zoomRangeAxes(0.9, 0.95, null, null));
+        assertThat(onEdt(() -> w.lensChart.potential().getRangeAxis().getRange())).isEqualTo(before);
+
+        JMenuItem fit = onEdt(() -> menuItem(w.getJMenuBar(), "Fit the whole lens")).orElseThrow();
+        JMenuItem open = onEdt(() -> menuItem(w.getJMenuBar(), "Open stack file...")).orElseThrow();
+        assertThat(fit.getAccelerator().getKeyCode()).isNotIn(java.awt.event.KeyEvent.VK_0,
+                open.getAccelerator().getKeyCode());
+        screenshot(w, "gui-demo-moved-bias.png");
+    }
+
     /** Screenshot of a second lens; runs only when screenshots are asked for (it solves another geometry). */
     @Test
     void screenshotOfTheArgonLens() throws Exception {
@@ -248,6 +327,20 @@ class LensWindowEndToEndTest {
         LensWindow w = open("lens-library/argon-sputter-einzel.toml", freshPreferences());
         waitFor(() -> w.current.layers().envelope().size() > 0, "the envelope");
         screenshot(w, "gui-argon-sputter-einzel.png");
+    }
+
+    /** The texts of every label in a dialog (an option pane shows a message as labels). */
+    private static List<String> labels(Container root) {
+        List<String> out = new ArrayList<>();
+        for (Component c : root.getComponents()) {
+            if (c instanceof javax.swing.JLabel l && l.getText() != null) {
+                out.add(l.getText());
+            }
+            if (c instanceof Container k) {
+                out.addAll(labels(k));
+            }
+        }
+        return out;
     }
 
     private static String g6(double m) {
