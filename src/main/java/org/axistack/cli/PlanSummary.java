@@ -10,6 +10,7 @@ import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.SpotSizeBudget;
 import org.axistack.report.LensPlan;
+import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSolution;
 import org.axistack.tune.SurfaceFieldCheck;
 import org.axistack.tune.TuneResult;
@@ -103,8 +104,9 @@ final class PlanSummary {
             w.println(String.format(Locale.ROOT, "  %s = %s V (%s): image at %s mm, magnification %s, max surface field "
                     + "%s V/mm on %s%s", f.electrode(), g(f.bias_V()), f.mode().name().toLowerCase(Locale.ROOT),
                     g(Units.mToMm(f.imageZ_m())), f.magnification() == 0 || !Double.isFinite(f.magnification()) ? "- (object at infinity)" : g(f.magnification()), g(Units.vPerMToVPerMm(f.maxSurfaceField_V_per_m())),
-                    f.worstElectrode(), f.surfaceFieldCheck().warning() ? " (above the " + (f.surfaceFieldCheck()
-                            == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort") + " limit)" : ""));
+                    f.worstElectrode(), (f.surfaceFieldCheck().warning() ? " (" + f.surfaceFieldCheck().words() + ")" : "")
+                            + (FocusRanking.nearMirror(f) ? "; NEAR A MIRROR (" + f.axisCrossings()
+                                    + " crossover(s) inside the lens)" : "")));
         }
         if (!p.budgets().isEmpty()) {
             TuneReport.budget(w, t.solutions(), p.budgets(),

@@ -83,7 +83,7 @@ final class PlanSections {
         b.append("<h2>Spot-size budget</h2>\n");
         List<List<String>> rows = new ArrayList<>();
         for (SpotSizeBudget.Row r : plan.spotRows()) {
-            rows.add(List.of(Html.g(Units.radToMrad(r.alpha_rad())), um(r.spherical_m()), um(r.chromatic_m()),
+            rows.add(List.of(Html.trim(Units.radToMrad(r.alpha_rad())), um(r.spherical_m()), um(r.chromatic_m()),
                     um(r.total_m())));
         }
         b.append(Html.table(List.of("half-angle alpha (mrad)", "spherical disc Cs a^3/2 (um)",
@@ -94,8 +94,9 @@ final class PlanSections {
                 + "is not included.</p>%n", in.energySpread()));
     }
 
+    /** A disc diameter in um to three significant digits: an estimate (discs added in quadrature). */
     private static String um(double m) {
-        return Html.g(m * 1e6);
+        return Rounding.sig(m * 1e6, 3);
     }
 
     static void tuning(StringBuilder b, LensPlan plan) {
@@ -129,7 +130,7 @@ final class PlanSections {
                     (mirror ? "!!" : "") + f.axisCrossings() + (mirror ? " (near a mirror)" : " (direct)"),
                     (mirror ? "!!" : "") + shift, (mirror ? "!!" : "") + hold));
         }
-        String depth = plan.budgets().isEmpty() ? "the depth" : HtmlReport.num(Units.mToMm(plan.budgets().get(0).depth_m()))
+        String depth = plan.budgets().isEmpty() ? "the depth" : Html.trim(Units.mToMm(plan.budgets().get(0).depth_m()))
                 + " mm";
         b.append(Html.table(List.of("rank", "bias (V)", "mode", "image z (mm)", "magnification", "max surface field (V/mm)",
                 "on electrode", "crossovers before the image", "image shift per volt of " + t.electrode() + " (mm/V)",

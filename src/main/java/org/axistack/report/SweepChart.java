@@ -68,6 +68,8 @@ public final class SweepChart {
         ab.setSmallestValue(1e-3);
         ab.setNumberFormatOverride(new java.text.DecimalFormat("#,##0.###", // plain tick labels: 10, 100, 1,000
                 java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT)));
+        ab.setAutoTickUnitSelection(false);
+        ab.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(1), false, false); // one tick per decade
         XYPlot upper = new XYPlot(top, null, mm, renderer(0));
         XYPlot lower = new XYPlot(bottom, null, ab, renderer(3));
         stack.screenZ_m().ifPresent(z -> {
@@ -79,9 +81,15 @@ public final class SweepChart {
             screen.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
             upper.addRangeMarker(screen, Layer.FOREGROUND);
         });
+        double span = points.isEmpty() ? 1 : Math.abs(points.get(points.size() - 1).bias_V() - points.get(0).bias_V());
+        List<Double> labelled = new java.util.ArrayList<>();
         for (double b : focusBiases_V) {
             ValueMarker m = new ValueMarker(b, MARK, new BasicStroke(1.0f));
-            m.setLabel("focus " + HtmlReport.num(b) + " V");
+            // labels only where they do not overlap (near-mirror biases sit within a few volts of each other)
+            if (labelled.stream().allMatch(o -> Math.abs(o - b) > 0.12 * span)) {
+                m.setLabel("focus " + HtmlReport.num(b) + " V");
+                labelled.add(b);
+            }
             m.setLabelPaint(MARK);
             m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
             m.setLabelTextAnchor(TextAnchor.TOP_LEFT);
