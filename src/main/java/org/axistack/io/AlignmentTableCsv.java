@@ -1,13 +1,9 @@
 package org.axistack.io;
 
-import java.io.IOException;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.optics.MisalignmentBudget;
 
 /**
@@ -46,23 +42,13 @@ public final class AlignmentTableCsv {
         return out;
     }
 
-    /** The whole table as CSV text. */
+    /** The whole table as CSV text (through the one CSV cell writer, {@link CsvTable}). */
     public static String text(MisalignmentBudget b) {
-        StringWriter sw = new StringWriter();
-        try (CSVPrinter p = new CSVPrinter(sw, CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new))
-                .get())) {
-            for (Object[] r : rows(b)) {
-                for (int i = 0; i < r.length; i++) {
-                    if (r[i] == null) {
-                        r[i] = "";
-                    }
-                }
-                p.printRecord(r);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        List<List<Object>> rows = new ArrayList<>();
+        for (Object[] r : rows(b)) {
+            rows.add(Arrays.asList(r));
         }
-        return sw.toString();
+        return CsvTable.text(HEADER, rows);
     }
 
     private static Double finite(double v) {

@@ -1,12 +1,9 @@
 package org.axistack.io;
 
-import java.io.IOException;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.axistack.probe.ProbePoint;
 import org.axistack.probe.ProbeStudy;
 
@@ -31,18 +28,14 @@ public final class ProbeTableCsv {
             p.dominant().name().toLowerCase(java.util.Locale.ROOT), p.interior()};
     }
 
-    /** Every curve of the study as CSV text. */
+    /** Every curve of the study as CSV text (through the one CSV cell writer, {@link CsvTable}). */
     public static String text(ProbeStudy study) {
-        StringWriter sw = new StringWriter();
-        try (CSVPrinter p = new CSVPrinter(sw, CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new)).get())) {
-            for (ProbeStudy.Curve c : study.curves()) {
-                for (ProbePoint pt : c.points()) {
-                    p.printRecord(row(c.workingPoint().label(), pt));
-                }
+        List<List<Object>> rows = new ArrayList<>();
+        for (ProbeStudy.Curve c : study.curves()) {
+            for (ProbePoint pt : c.points()) {
+                rows.add(Arrays.asList(row(c.workingPoint().label(), pt)));
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
         }
-        return sw.toString();
+        return CsvTable.text(HEADER, rows);
     }
 }
