@@ -6,13 +6,14 @@ import java.util.Locale;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
+import org.axistack.plan.PlanFormat;
+import org.axistack.tune.SurfaceFields;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.SpotSizeBudget;
 import org.axistack.report.LensPlan;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSolution;
-import org.axistack.tune.SurfaceFieldCheck;
 import org.axistack.tune.TuneResult;
 import org.axistack.verify.CheckResult;
 
@@ -122,14 +123,17 @@ final class PlanSummary {
 
     private static void surfaceFields(PrintWriter w, LensPlan p) {
         Stack s = p.stack();
-        double[] max = p.field().maxSurfaceFieldPerElectrode_V_per_m();
         w.println(String.format(Locale.ROOT, "Surface fields (limits: comfort %s V/mm, aggressive %s V/mm):",
                 g(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())), g(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))));
-        for (int i = 0; i < max.length; i++) {
-            SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], s.limits());
-            w.println(String.format(Locale.ROOT, "  %-14s %12s V/mm  %5.1f%% of comfort  %s", s.electrodes().get(i).name(),
-                    g(Units.vPerMToVPerMm(max[i])), 100 * max[i] / s.limits().comfort_V_per_m(),
-                    c.words()));
+        for (SurfaceFields.Row r : SurfaceFields.of(s, p.field())) {
+            if (r.peak().sharp()) {
+                w.println(String.format(Locale.ROOT, "  %-14s %s", r.name(), r.describe()));
+            } else {
+                w.println(String.format(Locale.ROOT, "  %-14s %12s V/mm  %5.1f%% of comfort  %s  (at z = %s, r = %s mm)",
+                        r.name(), g(Units.vPerMToVPerMm(r.peak().field_V_per_m())),
+                        100 * r.peak().field_V_per_m() / s.limits().comfort_V_per_m(), r.verdict(),
+                        PlanFormat.num(Units.mToMm(r.peak().z_m())), PlanFormat.num(Units.mToMm(r.peak().r_m()))));
+            }
         }
     }
 

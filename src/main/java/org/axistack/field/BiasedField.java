@@ -227,6 +227,86 @@ public final class BiasedField implements Field, AxialField {
         return out;
     }
 
+    /**
+     * The largest surface field on each electrode with where it sits, and whether it sits at a sharp corner
+     * (the node of the largest field lies on a panel that touches a singular point: a convex corner or a free
+     * sheet edge, where the field has no finite limit).
+     */
+    public SurfacePeak[] surfacePeaks() {
+        double[] all = surfaceFields_V_per_m();
+        BoundaryMesh mesh = solution.mesh();
+        int ne = solution.electrodes().size();
+        int[] at = new int[ne];
+        java.util.Arrays.fill(at, -1);
+        for (int j = 0; j < all.length; j++) {
+            int e = mesh.electrodeOf(j);
+            if (at[e] < 0 || all[j] > all[at[e]]) {
+                at[e] = j;
+            }
+        }
+        SurfacePeak[] out = new SurfacePeak[ne];
+        for (int e = 0; e < ne; e++) {
+            int j = at[e];
+            if (j < 0) {
+                out[e] = new SurfacePeak(e, 0, Double.NaN, Double.NaN, false);
+                continue;
+            }
+            Panel p = mesh.panelOf(j);
+            if (p.singularEnd() != 0) {
+                org.axistack.model.ZR corner = p.at(p.singularEnd() < 0 ? 0 : 1);
+                out[e] = new SurfacePeak(e, all[j], corner.z_m(), corner.r_m(), true);
+                continue;
+            }
+            out[e] = new SurfacePeak(e, all[j], mesh.nodeZ(j), mesh.nodeR(j), false);
+            // Between the nodes: on a solid conductor's smooth panel the density is the panel's interpolating
+            // polynomial; its largest value on the panel of the largest node and on the two beside it.
+            int order = mesh.order();
+            int pj = j / order;
+            for (int q = Math.max(0, pj - 1); q <= Math.min(mesh.panels().size() - 1, pj + 1); q++) {
+                Panel pq = mesh.panels().get(q);
+                if (pq.sheet() || pq.singularEnd() != 0 || pq.electrode() != e) {
+                    continue;
+                }
+                double[] best = panelMaximum(mesh, q);
+                if (best[0] > out[e].field_V_per_m()) {
+                    org.axistack.model.ZR where = pq.at(best[1]);
+                    out[e] = new SurfacePeak(e, best[0], where.z_m(), where.r_m(), false);
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Samples between the panel's ends at which the interpolated density is examined. */
+    private static final int PEAK_SAMPLES = 64;
+
+    /** {largest |sigma|/eps0 of the panel's interpolating polynomial over tau in [0, 1], the tau where it is}. */
+    private double[] panelMaximum(BoundaryMesh mesh, int panel) {
+        int order = mesh.order();
+        double[] tau = mesh.nodeTau();
+        int base = panel * order;
+        double best = 0;
+        double bestTau = 0;
+        for (int k = 0; k <= PEAK_SAMPLES; k++) {
+            double t = (double) k / PEAK_SAMPLES;
+            double v = 0;
+            for (int a = 0; a < order; a++) {
+                double l = 1;
+                for (int b = 0; b < order; b++) {
+                    if (b != a) {
+                        l *= (t - tau[b]) / (tau[a] - tau[b]);
+                    }
+                }
+                v += l * density[base + a];
+            }
+            if (Math.abs(v) > best) {
+                best = Math.abs(v);
+                bestTau = t;
+            }
+        }
+        return new double[] {best, bestTau};
+    }
+
     /** Largest surface field on each electrode, V/m (see {@link #surfaceFields_V_per_m()}). */
     public double[] maxSurfaceFieldPerElectrode_V_per_m() {
         double[] all = surfaceFields_V_per_m();

@@ -27,8 +27,8 @@ final class ElectrodeReader {
     static final Map<String, List<String>> SHAPE_KEYS = new LinkedHashMap<>();
 
     static {
-        SHAPE_KEYS.put("tube", List.of("radius_mm", "z_start_mm", "z_end_mm", "wall_mm"));
-        SHAPE_KEYS.put("aperture", List.of("z_mm", "hole_radius_mm", "outer_radius_mm", "thickness_mm"));
+        SHAPE_KEYS.put("tube", List.of("radius_mm", "z_start_mm", "z_end_mm", "wall_mm", "edge_radius_mm"));
+        SHAPE_KEYS.put("aperture", List.of("z_mm", "hole_radius_mm", "outer_radius_mm", "thickness_mm", "edge_radius_mm"));
         SHAPE_KEYS.put("disk", List.of("z_mm", "radius_mm", "thickness_mm"));
         SHAPE_KEYS.put("ring", List.of("z_mm", "radius_mm", "wire_radius_mm"));
         SHAPE_KEYS.put("outline", List.of("points_mm", "closed"));
@@ -143,7 +143,9 @@ final class ElectrodeReader {
         if (!(z1 > z0)) {
             throw t.error(StackMessage.Z_ORDER, "z_end_mm", Map.of("start", fmt(z0), "end", fmt(z1)));
         }
-        return new Electrode.Tube(name, bias, Units.mmToM(r), Units.mmToM(z0), Units.mmToM(z1), Units.mmToM(wall));
+        double edge = edgeRadius(t, "wall_mm", wall, "length (z_end_mm - z_start_mm)", z1 - z0);
+        return new Electrode.Tube(name, bias, Units.mmToM(r), Units.mmToM(z0), Units.mmToM(z1), Units.mmToM(wall),
+                Units.mmToM(edge));
     }
 
     private static Electrode aperture(TableFields t, String name, double bias) throws StackInputException {
@@ -154,7 +156,38 @@ final class ElectrodeReader {
         if (!(hole < outer)) {
             throw t.error(StackMessage.HOLE_TOO_LARGE, "hole_radius_mm", Map.of("hole", fmt(hole), "outer", fmt(outer)));
         }
-        return new Electrode.Aperture(name, bias, Units.mmToM(z), Units.mmToM(hole), Units.mmToM(outer), Units.mmToM(th));
+        double edge = edgeRadius(t, "thickness_mm", th, "plate width (outer_radius_mm - hole_radius_mm)", outer - hole);
+        return new Electrode.Aperture(name, bias, Units.mmToM(z), Units.mmToM(hole), Units.mmToM(outer), Units.mmToM(th),
+                Units.mmToM(edge));
+    }
+
+    /**
+     * The optional edge_radius_mm of a tube or aperture (absent: 0, sharp corners): not negative, only on a solid
+     * section, at most half its thickness and half its other side (so that the rounded corners do not overlap).
+     */
+    private static double edgeRadius(TableFields t, String thicknessKey, double thickness, String otherName,
+            double other) throws StackInputException {
+        String key = "edge_radius_mm";
+        if (!t.has(key)) {
+            return 0;
+        }
+        double rho = t.toNumber(t.table().get(List.of(key)), key, "0.25", -1);
+        if (rho < 0) {
+            throw t.error(StackMessage.EDGE_RADIUS_NEGATIVE, key, Map.of("value", fmt(rho)));
+        }
+        if (rho == 0) {
+            return 0;
+        }
+        if (thickness == 0) {
+            throw t.error(StackMessage.EDGE_RADIUS_ON_SHEET, key, Map.of("radius", fmt(rho), "key", thicknessKey));
+        }
+        String what = rho > thickness / 2 ? thicknessKey : rho > other / 2 ? otherName : null;
+        if (what != null) {
+            double size = what.equals(thicknessKey) ? thickness : other;
+            throw t.error(StackMessage.EDGE_RADIUS_TOO_LARGE, key, Map.of("radius", fmt(rho), "what", what,
+                    "size", fmt(size), "max", fmt(Math.min(thickness, other) / 2)));
+        }
+        return t.checkRange(rho, key, "mm", Limits.MIN_SIZE_MM, Limits.MAX_LENGTH_MM, "0.25", t.line(key));
     }
 
     private static Electrode ring(TableFields t, String name, double bias) throws StackInputException {

@@ -85,17 +85,25 @@ public final class StackWriter {
         }
     }
 
+    private static void edgeRadius(StringBuilder sb, double edgeRadius_m) {
+        if (edgeRadius_m > 0) {
+            sb.append("edge_radius_mm = ").append(mm(edgeRadius_m)).append('\n');
+        }
+    }
+
     private static void electrode(StringBuilder sb, Electrode e) {
         if (e instanceof Electrode.Tube t) {
             sb.append("radius_mm = ").append(mm(t.radius_m()))
                     .append("\nz_start_mm = ").append(mm(t.zStart_m()))
                     .append("\nz_end_mm = ").append(mm(t.zEnd_m()))
                     .append("\nwall_mm = ").append(mm(t.wall_m())).append('\n');
+            edgeRadius(sb, t.edgeRadius_m());
         } else if (e instanceof Electrode.Aperture a) {
             sb.append("z_mm = ").append(mm(a.z_m()))
                     .append("\nhole_radius_mm = ").append(mm(a.holeRadius_m()))
                     .append("\nouter_radius_mm = ").append(mm(a.outerRadius_m()))
                     .append("\nthickness_mm = ").append(mm(a.thickness_m())).append('\n');
+            edgeRadius(sb, a.edgeRadius_m());
         } else if (e instanceof Electrode.Disk d) {
             sb.append("z_mm = ").append(mm(d.z_m()))
                     .append("\nradius_mm = ").append(mm(d.radius_m()))

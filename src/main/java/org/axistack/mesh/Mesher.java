@@ -25,12 +25,56 @@ public final class Mesher {
     public static final int ORDER = 8;
     /** Tangent turn (radians) above which a vertex counts as a corner. */
     private static final double CORNER_TURN = 0.02;
-
+    /** Largest angle one panel spans on a circular arc (rounded edge), radians. */
+    private static final double ARC_ANGLE = Math.PI / 4;
+    /**
+     * Uniform panel size, as a share of the whole outline length, below which arc panels span less than
+     * {@link #ARC_ANGLE}: arc panels then shrink in proportion to the uniform size, so that one refinement knob
+     * refines rounded edges and the rest of the outline together.
+     */
+    private static final double ARC_REFERENCE_SHARE = 1.0 / 192;
     private Mesher() {
     }
 
     /** Meshes the outlines of the given electrodes. */
     public static BoundaryMesh mesh(List<Electrode> electrodes, MeshSettings settings) {
+        List<SegPlan> plans = plans(electrodes);
+        double totalLength = 0;
+        for (Electrode e : electrodes) {
+            totalLength += e.contour().length_m();
+        }
+        int levels = settings.edgeLevels();
+        int targetPanels = Math.max(1, settings.targetElements() / ORDER);
+        // Bisection on the uniform panel size h (panel count decreases with h).
+        double lo = totalLength * 1e-7, hi = totalLength;
+        for (int it = 0; it < 80; it++) {
+            double mid = Math.sqrt(lo * hi);
+            if (countPanels(plans, mid, levels, totalLength) > targetPanels) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return build(plans, hi, levels, totalLength);
+    }
+
+    private static BoundaryMesh build(List<SegPlan> plans, double h, int levels, double totalLength) {
+        List<Panel> panels = new ArrayList<>();
+        for (SegPlan p : plans) {
+            cut(p, h, levels, totalLength, panels);
+        }
+        GaussIntegrator gauss = new GaussIntegratorFactory().legendre(ORDER, 0, 1);
+        double[] tau = new double[ORDER];
+        double[] w = new double[ORDER];
+        for (int j = 0; j < ORDER; j++) {
+            tau[j] = gauss.getPoint(j);
+            w[j] = gauss.getWeight(j);
+        }
+        return new BoundaryMesh(panels, ORDER, tau, w);
+    }
+
+    /** The per-segment plans of all outlines: singular ends, their exponents, feature sizes and arc joints. */
+    private static List<SegPlan> plans(List<Electrode> electrodes) {
         List<SegPlan> plans = new ArrayList<>();
         double totalLength = 0;
         for (int e = 0; e < electrodes.size(); e++) {
@@ -53,38 +97,16 @@ public final class Mesher {
             double fe = p.gradeEnd ? feature(p.segment.end(), plans, i) : Double.POSITIVE_INFINITY;
             plans.set(i, p.withFeatures(fs, fe));
         }
-        int levels = settings.edgeLevels();
-        int targetPanels = Math.max(1, settings.targetElements() / ORDER);
-        // Bisection on the uniform panel size h (panel count decreases with h).
-        double lo = totalLength * 1e-7, hi = totalLength;
-        for (int it = 0; it < 80; it++) {
-            double mid = Math.sqrt(lo * hi);
-            if (countPanels(plans, mid, levels) > targetPanels) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        double h = hi;
-        List<Panel> panels = new ArrayList<>();
-        for (SegPlan p : plans) {
-            cut(p, h, levels, panels);
-        }
-        GaussIntegrator gauss = new GaussIntegratorFactory().legendre(ORDER, 0, 1);
-        double[] tau = new double[ORDER];
-        double[] w = new double[ORDER];
-        for (int j = 0; j < ORDER; j++) {
-            tau[j] = gauss.getPoint(j);
-            w[j] = gauss.getWeight(j);
-        }
-        return new BoundaryMesh(panels, ORDER, tau, w);
+        return plans;
     }
 
     /** Per-segment plan: where the singular ends are and their exponents. */
     private record SegPlan(Segment segment, int electrode, int contour, String name, boolean sheet, boolean gradeStart,
-            boolean gradeEnd, double betaStart, double betaEnd, double featureStart, double featureEnd) {
+            boolean gradeEnd, double betaStart, double betaEnd, double featureStart, double featureEnd,
+            double arcStart, double arcEnd) {
         SegPlan withFeatures(double fs, double fe) {
-            return new SegPlan(segment, electrode, contour, name, sheet, gradeStart, gradeEnd, betaStart, betaEnd, fs, fe);
+            return new SegPlan(segment, electrode, contour, name, sheet, gradeStart, gradeEnd, betaStart, betaEnd, fs, fe,
+                    arcStart, arcEnd);
         }
     }
 
@@ -123,11 +145,28 @@ public final class Mesher {
                 betaE[n - 1] = -0.5;
             }
         }
+        // Smooth joints onto an arc (a rounded edge): the straight side is graded toward the arc, so that its
+        // panels shrink to the arc's panel size where the charge varies on the scale of the arc's radius.
+        double[] arcS = new double[n], arcE = new double[n];
+        java.util.Arrays.fill(arcS, Double.POSITIVE_INFINITY);
+        java.util.Arrays.fill(arcE, Double.POSITIVE_INFINITY);
+        for (int v = 0; v < vertices; v++) {
+            Segment in = segs.get(v);
+            Segment out = segs.get((v + 1) % n);
+            if (gradeE[v] || in instanceof Segment.Arc == out instanceof Segment.Arc) {
+                continue;
+            }
+            if (out instanceof Segment.Arc a) {
+                arcE[v] = a.radius_m();
+            } else if (in instanceof Segment.Arc a) {
+                arcS[(v + 1) % n] = a.radius_m();
+            }
+        }
         int contourId = electrode;
         List<SegPlan> out = new ArrayList<>();
         for (int k = 0; k < n; k++) {
             out.add(new SegPlan(segs.get(k), electrode, contourId, name, sheet, gradeS[k], gradeE[k], betaS[k], betaE[k],
-                    Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY));
+                    Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, arcS[k], arcE[k]));
         }
         return out;
     }
@@ -172,50 +211,79 @@ public final class Mesher {
         return best;
     }
 
-    /** Levels needed at an end: the settings' levels, more if the feature there is smaller than the panels. */
-    private static int levelsFor(double graded, double feature, int levels) {
+    /**
+     * Levels needed at an end: the settings' levels, more if the feature there is smaller than the panels (the
+     * smallest panel a quarter of the feature, smaller in proportion to h below the reference size).
+     */
+    private static int levelsFor(double graded, double feature, int levels, double refine) {
         if (!(feature < Double.POSITIVE_INFINITY) || feature <= 0) {
             return levels;
         }
-        int need = (int) Math.ceil(Math.log(4 * graded / feature) / Math.log(2));
+        double smallest = 0.25 * feature * refine;
+        int need = (int) Math.ceil(Math.log(graded / smallest) / Math.log(2));
         return Math.max(levels, Math.min(need, 40));
     }
 
-    private static int countPanels(List<SegPlan> plans, double h, int levels) {
+    private static int countPanels(List<SegPlan> plans, double h, int levels, double totalLength) {
         List<Panel> sink = new ArrayList<>();
         int count = 0;
         for (SegPlan p : plans) {
             sink.clear();
-            cut(p, h, levels, sink);
+            cut(p, h, levels, totalLength, sink);
             count += sink.size();
         }
         return count;
     }
 
+    /**
+     * Panel length on a circular arc of the given radius: the arc angle per panel is {@link #ARC_ANGLE} at most and
+     * shrinks with the uniform size h below the reference size.
+     */
+    private static double arcPanel(double radius, double refine) {
+        return radius * ARC_ANGLE * refine;
+    }
+
+    /** Graded levels from zone size g down to a smallest panel of about size (none if g is already that small). */
+    private static int levelsDownTo(double g, double size) {
+        return g > size ? Math.min(40, (int) Math.ceil(Math.log(g / size) / Math.log(2))) : 0;
+    }
+
     /** Cuts one segment into panels (appends to out). */
-    private static void cut(SegPlan p, double h, int levels, List<Panel> out) {
+    private static void cut(SegPlan p, double h, int levels, double totalLength, List<Panel> out) {
+        // below the reference size every locally set size (arc panels, the smallest panel across a narrow gap)
+        // shrinks in proportion to h, so that refining h refines them too
+        double refine = Math.min(1, h / (ARC_REFERENCE_SHARE * totalLength));
         double len = p.segment.length_m();
-        int ends = (p.gradeStart ? 1 : 0) + (p.gradeEnd ? 1 : 0);
+        boolean arcS = p.arcStart < Double.POSITIVE_INFINITY;
+        boolean arcE = p.arcEnd < Double.POSITIVE_INFINITY;
+        boolean gradeS = p.gradeStart || arcS;
+        boolean gradeE = p.gradeEnd || arcE;
+        int ends = (gradeS ? 1 : 0) + (gradeE ? 1 : 0);
         double g = ends == 0 ? 0 : Math.min(h, len / (ends == 2 ? 3 : 2));
         List<double[]> pieces = new ArrayList<>(); // [s0, s1, singularEnd, power]
         double s = 0;
-        if (p.gradeStart) {
-            s = graded(pieces, 0, g, levelsFor(g, p.featureStart, levels), true, p.betaStart);
+        if (gradeS) {
+            int lv = arcS ? levelsDownTo(g, arcPanel(p.arcStart, refine)) : levelsFor(g, p.featureStart, levels, refine);
+            s = graded(pieces, 0, g, lv, true, arcS ? 0 : p.betaStart);
         }
-        double midEnd = p.gradeEnd ? len - g : len;
+        double midEnd = gradeE ? len - g : len;
         double mid = midEnd - s;
         if (mid > 1e-14 * len) {
             // No panel longer than its distance from the axis (a quarter of the segment at least): the charge on a
             // bore varies on the scale of the bore radius, and long panels would make every interaction "near".
             double rMin = Math.min(p.segment.at(s / len).r_m(), p.segment.at(midEnd / len).r_m());
             double cap = Math.max(rMin, 0.25 * len);
+            if (p.segment instanceof Segment.Arc arc) {
+                cap = Math.min(cap, arcPanel(arc.radius_m(), refine));
+            }
             int k = Math.max(1, (int) Math.ceil(mid / Math.min(h, cap) - 1e-9));
             for (int i = 0; i < k; i++) {
                 pieces.add(new double[] {s + mid * i / k, s + mid * (i + 1) / k, 0, 1});
             }
         }
-        if (p.gradeEnd) {
-            graded(pieces, len - g, len, levelsFor(g, p.featureEnd, levels), false, p.betaEnd);
+        if (gradeE) {
+            int lv = arcE ? levelsDownTo(g, arcPanel(p.arcEnd, refine)) : levelsFor(g, p.featureEnd, levels, refine);
+            graded(pieces, len - g, len, lv, false, arcE ? 0 : p.betaEnd);
         }
         for (double[] q : pieces) {
             int singular = (int) q[2];

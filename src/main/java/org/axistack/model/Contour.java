@@ -46,6 +46,67 @@ public record Contour(List<Segment> segments, boolean closed) {
         return new Contour(segs, closed);
     }
 
+    /**
+     * Closed polygon through the given points with every corner replaced by a tangent circular arc of the given
+     * radius (0: sharp corners, the plain polygon). At a corner where the outline turns by phi the arc starts and
+     * ends rho tan(phi/2) from the corner along the two sides; a side shorter than its two tangent lengths is
+     * rejected, a side exactly as long is left out (the arcs meet).
+     */
+    public static Contour rounded(double radius_m, ZR... points) {
+        if (!(radius_m > 0)) {
+            return polyline(true, points);
+        }
+        int n = points.length;
+        ZR[] a = new ZR[n];
+        ZR[] b = new ZR[n];
+        ZR[] mid = new ZR[n];
+        for (int i = 0; i < n; i++) {
+            ZR p = points[i];
+            ZR prev = points[(i + n - 1) % n];
+            ZR next = points[(i + 1) % n];
+            double[] din = unit(prev, p);
+            double[] dout = unit(p, next);
+            double turn = Math.atan2(din[0] * dout[1] - din[1] * dout[0], din[0] * dout[0] + din[1] * dout[1]);
+            double t = radius_m * Math.tan(Math.abs(turn) / 2);
+            a[i] = new ZR(p.z_m() - t * din[0], p.r_m() - t * din[1]);
+            b[i] = new ZR(p.z_m() + t * dout[0], p.r_m() + t * dout[1]);
+            // centre on the inside of the turn, radius_m from both sides
+            double s = Math.signum(turn);
+            ZR c = new ZR(a[i].z_m() - s * radius_m * din[1], a[i].r_m() + s * radius_m * din[0]);
+            double cp = c.distanceTo(p);
+            mid[i] = new ZR(c.z_m() + radius_m * (p.z_m() - c.z_m()) / cp, c.r_m() + radius_m * (p.r_m() - c.r_m()) / cp);
+        }
+        List<Segment> segs = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            segs.add(new Segment.Arc(a[i], mid[i], b[i]));
+            ZR next = a[(i + 1) % n];
+            double side = points[i].distanceTo(points[(i + 1) % n]);
+            double gap = b[i].distanceTo(next);
+            double used = points[i].distanceTo(b[i]) + points[(i + 1) % n].distanceTo(next);
+            if (used > side * (1 + 1e-9)) {
+                throw new IllegalArgumentException("edge radius " + radius_m + " m is too large for a side of "
+                        + side + " m");
+            }
+            if (gap > 1e-9 * side) {
+                segs.add(new Segment.Line(b[i], next));
+            } else {
+                // the arcs meet: join them exactly at the same point
+                segs.set(segs.size() - 1, new Segment.Arc(a[i], mid[i], next));
+            }
+        }
+        // the first arc must start where the last piece ends
+        Segment last = segs.get(segs.size() - 1);
+        if (last.end().distanceTo(segs.get(0).start()) > 0 && last instanceof Segment.Arc arc) {
+            segs.set(segs.size() - 1, new Segment.Arc(arc.start(), arc.via(), segs.get(0).start()));
+        }
+        return new Contour(segs, true);
+    }
+
+    private static double[] unit(ZR from, ZR to) {
+        double d = from.distanceTo(to);
+        return new double[] {(to.z_m() - from.z_m()) / d, (to.r_m() - from.r_m()) / d};
+    }
+
     public double length_m() {
         return scale(segments);
     }

@@ -50,35 +50,60 @@ public sealed interface Electrode permits Electrode.Tube, Electrode.Aperture, El
         }
     }
 
-    /** Hollow cylinder of inner radius radius_m from zStart_m to zEnd_m; wall_m = 0 is a thin sheet. */
-    record Tube(String name, double bias_V, double radius_m, double zStart_m, double zEnd_m, double wall_m)
-            implements Electrode {
+    /**
+     * An edge radius must be 0 or positive, needs a solid section (thickness &gt; 0) and may be at most half of
+     * the section's thickness and half of its other side, so that neighbouring rounded corners do not overlap.
+     */
+    private static void requireEdgeRadius(String name, double edgeRadius_m, double thickness_m, double otherSide_m) {
+        if (edgeRadius_m < 0) {
+            throw new IllegalArgumentException("'" + name + "': edge radius must not be negative");
+        }
+        if (edgeRadius_m > 0 && (thickness_m == 0 || edgeRadius_m > 0.5 * thickness_m * (1 + 1e-12)
+                || edgeRadius_m > 0.5 * otherSide_m * (1 + 1e-12))) {
+            throw new IllegalArgumentException("'" + name + "': edge radius " + edgeRadius_m
+                    + " m needs a solid section at least twice as thick and twice as wide");
+        }
+    }
+
+    /**
+     * Hollow cylinder of inner radius radius_m from zStart_m to zEnd_m; wall_m = 0 is a thin sheet. With
+     * edgeRadius_m &gt; 0 every corner of the wall's rectangular section is a tangent quarter circle of that
+     * radius (at most half the wall and half the length; a sheet has no corners to round).
+     */
+    record Tube(String name, double bias_V, double radius_m, double zStart_m, double zEnd_m, double wall_m,
+            double edgeRadius_m) implements Electrode {
         public Tube {
             requireName(name);
-            requireFinite(bias_V, radius_m, zStart_m, zEnd_m, wall_m);
+            requireFinite(bias_V, radius_m, zStart_m, zEnd_m, wall_m, edgeRadius_m);
             if (!(radius_m > 0) || !(zEnd_m > zStart_m) || wall_m < 0) {
                 throw new IllegalArgumentException("tube '" + name + "': need radius > 0, z_end > z_start, wall >= 0");
             }
+            requireEdgeRadius(name, edgeRadius_m, wall_m, zEnd_m - zStart_m);
+        }
+
+        /** A tube with sharp corners. */
+        public Tube(String name, double bias_V, double radius_m, double zStart_m, double zEnd_m, double wall_m) {
+            this(name, bias_V, radius_m, zStart_m, zEnd_m, wall_m, 0);
         }
 
         @Override
         public Electrode withBias_V(double b) {
-            return new Tube(name, b, radius_m, zStart_m, zEnd_m, wall_m);
+            return new Tube(name, b, radius_m, zStart_m, zEnd_m, wall_m, edgeRadius_m);
         }
 
         @Override
         public Electrode scaled(double k) {
-            return new Tube(name, bias_V, radius_m * k, zStart_m * k, zEnd_m * k, wall_m * k);
+            return new Tube(name, bias_V, radius_m * k, zStart_m * k, zEnd_m * k, wall_m * k, edgeRadius_m * k);
         }
 
         @Override
         public Electrode shifted(double dz) {
-            return new Tube(name, bias_V, radius_m, zStart_m + dz, zEnd_m + dz, wall_m);
+            return new Tube(name, bias_V, radius_m, zStart_m + dz, zEnd_m + dz, wall_m, edgeRadius_m);
         }
 
         @Override
         public Electrode mirrored() {
-            return new Tube(name, bias_V, radius_m, -zEnd_m, -zStart_m, wall_m);
+            return new Tube(name, bias_V, radius_m, -zEnd_m, -zStart_m, wall_m, edgeRadius_m);
         }
 
         @Override
@@ -87,8 +112,8 @@ public sealed interface Electrode permits Electrode.Tube, Electrode.Aperture, El
                 return Contour.polyline(false, new ZR(zStart_m, radius_m), new ZR(zEnd_m, radius_m));
             }
             double ro = radius_m + wall_m;
-            return Contour.polyline(true, new ZR(zStart_m, radius_m), new ZR(zEnd_m, radius_m), new ZR(zEnd_m, ro),
-                    new ZR(zStart_m, ro));
+            return Contour.rounded(edgeRadius_m, new ZR(zStart_m, radius_m), new ZR(zEnd_m, radius_m),
+                    new ZR(zEnd_m, ro), new ZR(zStart_m, ro));
         }
 
         @Override
@@ -97,36 +122,48 @@ public sealed interface Electrode permits Electrode.Tube, Electrode.Aperture, El
         }
     }
 
-    /** Flat plate with a round hole, mid-plane at z_m; thickness_m = 0 is a thin sheet. */
+    /**
+     * Flat plate with a round hole, mid-plane at z_m; thickness_m = 0 is a thin sheet. With edgeRadius_m &gt; 0
+     * every corner of the plate's section is a tangent quarter circle of that radius (at most half the
+     * thickness and half the plate's radial width).
+     */
     record Aperture(String name, double bias_V, double z_m, double holeRadius_m, double outerRadius_m,
-            double thickness_m) implements Electrode {
+            double thickness_m, double edgeRadius_m) implements Electrode {
         public Aperture {
             requireName(name);
-            requireFinite(bias_V, z_m, holeRadius_m, outerRadius_m, thickness_m);
+            requireFinite(bias_V, z_m, holeRadius_m, outerRadius_m, thickness_m, edgeRadius_m);
             if (!(holeRadius_m > 0) || !(outerRadius_m > holeRadius_m) || thickness_m < 0) {
                 throw new IllegalArgumentException(
                         "aperture '" + name + "': need 0 < hole radius < outer radius, thickness >= 0");
             }
+            requireEdgeRadius(name, edgeRadius_m, thickness_m, outerRadius_m - holeRadius_m);
+        }
+
+        /** An aperture with sharp corners. */
+        public Aperture(String name, double bias_V, double z_m, double holeRadius_m, double outerRadius_m,
+                double thickness_m) {
+            this(name, bias_V, z_m, holeRadius_m, outerRadius_m, thickness_m, 0);
         }
 
         @Override
         public Electrode withBias_V(double b) {
-            return new Aperture(name, b, z_m, holeRadius_m, outerRadius_m, thickness_m);
+            return new Aperture(name, b, z_m, holeRadius_m, outerRadius_m, thickness_m, edgeRadius_m);
         }
 
         @Override
         public Electrode scaled(double k) {
-            return new Aperture(name, bias_V, z_m * k, holeRadius_m * k, outerRadius_m * k, thickness_m * k);
+            return new Aperture(name, bias_V, z_m * k, holeRadius_m * k, outerRadius_m * k, thickness_m * k,
+                    edgeRadius_m * k);
         }
 
         @Override
         public Electrode shifted(double dz) {
-            return new Aperture(name, bias_V, z_m + dz, holeRadius_m, outerRadius_m, thickness_m);
+            return new Aperture(name, bias_V, z_m + dz, holeRadius_m, outerRadius_m, thickness_m, edgeRadius_m);
         }
 
         @Override
         public Electrode mirrored() {
-            return new Aperture(name, bias_V, -z_m, holeRadius_m, outerRadius_m, thickness_m);
+            return new Aperture(name, bias_V, -z_m, holeRadius_m, outerRadius_m, thickness_m, edgeRadius_m);
         }
 
         @Override
@@ -135,7 +172,7 @@ public sealed interface Electrode permits Electrode.Tube, Electrode.Aperture, El
                 return Contour.polyline(false, new ZR(z_m, holeRadius_m), new ZR(z_m, outerRadius_m));
             }
             double h = thickness_m / 2;
-            return Contour.polyline(true, new ZR(z_m - h, holeRadius_m), new ZR(z_m + h, holeRadius_m),
+            return Contour.rounded(edgeRadius_m, new ZR(z_m - h, holeRadius_m), new ZR(z_m + h, holeRadius_m),
                     new ZR(z_m + h, outerRadius_m), new ZR(z_m - h, outerRadius_m));
         }
 

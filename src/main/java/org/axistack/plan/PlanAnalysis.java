@@ -35,6 +35,7 @@ import org.axistack.tune.BiasSweep;
 import org.axistack.tune.BiasTuner;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.SurfaceFieldCheck;
+import org.axistack.tune.SurfaceFields;
 import org.axistack.tune.SweepPoint;
 import org.axistack.tune.TuneResult;
 import org.axistack.verify.CheckResult;
@@ -270,16 +271,22 @@ public final class PlanAnalysis {
     }
 
     private static void surfaceFieldWarnings(Stack stack, BiasedField field, List<String> warnings) {
-        double[] max = field.maxSurfaceFieldPerElectrode_V_per_m();
-        for (int i = 0; i < max.length; i++) {
-            SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], stack.limits());
+        for (SurfaceFields.Row row : SurfaceFields.of(stack, field)) {
+            SurfaceFieldCheck c = row.check();
             if (c.warning()) {
-                warnings.add(String.format(Locale.ROOT, "electrode %s: surface field %s V/mm is above the %s limit "
-                        + "(%s V/mm): round its edges, widen the gap or lower the bias", stack.electrodes().get(i).name(),
-                        PlanFormat.num(Units.vPerMToVPerMm(max[i])),
-                        c == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort",
-                        PlanFormat.num(Units.vPerMToVPerMm(c == SurfaceFieldCheck.ABOVE_AGGRESSIVE
-                                ? stack.limits().aggressive_V_per_m() : stack.limits().comfort_V_per_m()))));
+                double limit = c == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? stack.limits().aggressive_V_per_m()
+                        : stack.limits().comfort_V_per_m();
+                String kind = c == SurfaceFieldCheck.ABOVE_AGGRESSIVE ? "aggressive" : "comfort";
+                if (row.peak().sharp()) {
+                    warnings.add(String.format(Locale.ROOT, "electrode %s: %s; already %s V/mm at the mesh's resolution, "
+                            + "above the %s limit (%s V/mm)", row.name(), SurfaceFields.sharpStatement(row.peak()),
+                            PlanFormat.num(Units.vPerMToVPerMm(row.peak().field_V_per_m())), kind,
+                            PlanFormat.num(Units.vPerMToVPerMm(limit))));
+                } else {
+                    warnings.add(String.format(Locale.ROOT, "electrode %s: surface field %s is above the %s limit "
+                            + "(%s V/mm): round its edges, widen the gap or lower the bias", row.name(), row.describe(),
+                            kind, PlanFormat.num(Units.vPerMToVPerMm(limit))));
+                }
             }
         }
     }

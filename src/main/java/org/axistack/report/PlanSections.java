@@ -14,7 +14,7 @@ import org.axistack.optics.SpotSizeBudget;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
-import org.axistack.tune.SurfaceFieldCheck;
+import org.axistack.tune.SurfaceFields;
 import org.axistack.tune.TuneResult;
 
 /** The report's table sections (optics, spot budget, tuning, surface fields, capacitance, method). */
@@ -142,23 +142,27 @@ final class PlanSections {
 
     static void surfaceFields(StringBuilder b, LensPlan plan) {
         Stack s = plan.stack();
-        double[] max = plan.field().maxSurfaceFieldPerElectrode_V_per_m();
         double[] q = plan.field().charges_C();
         List<List<String>> rows = new ArrayList<>();
-        for (int i = 0; i < max.length; i++) {
-            SurfaceFieldCheck c = SurfaceFieldCheck.of(max[i], s.limits());
-            rows.add(List.of(s.electrodes().get(i).name(), HtmlReport.num(s.electrodes().get(i).bias_V()),
-                    HtmlReport.field(max[i], c), Html.g(max[i] / s.limits().comfort_V_per_m() * 100),
-                    c.words(), Html.g(q[i] * 1e12)));
+        List<SurfaceFields.Row> assessed = SurfaceFields.of(s, plan.field());
+        for (int i = 0; i < assessed.size(); i++) {
+            SurfaceFields.Row r = assessed.get(i);
+            double max = r.peak().field_V_per_m();
+            rows.add(List.of(r.name(), HtmlReport.num(s.electrodes().get(i).bias_V()),
+                    r.peak().sharp() ? Html.esc(r.describe()) : HtmlReport.field(max, r.check()),
+                    r.peak().sharp() ? "-" : Html.g(max / s.limits().comfort_V_per_m() * 100),
+                    Html.esc(r.verdict()), Html.g(r.peak().z_m() * 1e3), Html.g(r.peak().r_m() * 1e3), Html.g(q[i] * 1e12)));
         }
         b.append("<h2>Electrode surface fields</h2>\n");
         b.append(Html.table(List.of("electrode", "bias (V)", "largest surface field (V/mm)", "% of comfort limit",
-                "against the limits", "charge (pC)"), rows));
+                "against the limits", "at z (mm)", "at r (mm)", "charge (pC)"), rows));
         b.append(String.format(Locale.ROOT, "<p class=\"note\">Surface field sigma/eps0 from the solved charge density, "
-                + "largest over each electrode's elements (sheets: per face). Limits from the stack: comfort %s V/mm, "
+                + "largest over each electrode (between the collocation nodes by the element's polynomial on solid "
+                + "electrodes; sheets: per face at the nodes). Limits from the stack: comfort %s V/mm, "
                 + "aggressive %s V/mm (common practice for polished electrodes in good vacuum, no single source; large "
-                + "gaps hold less per mm). Sharp edges are resolved only to the mesh: refine edge_levels to see the "
-                + "field grow at a truly sharp edge.</p>%n", HtmlReport.num(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())),
+                + "gaps hold less per mm). On rounded edges (edge_radius_mm) the value converges as the mesh is refined; "
+                + "at a sharp corner the field has no finite limit and the table says so instead of giving a number.</p>%n",
+                HtmlReport.num(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())),
                 HtmlReport.num(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))));
     }
 

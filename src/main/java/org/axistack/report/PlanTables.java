@@ -63,16 +63,19 @@ final class PlanTables {
             t.put("cardinal.csv", csv(List.of("quantity", "object_side", "image_side"), cr));
         }
         Stack s = plan.stack();
-        double[] max = plan.field().maxSurfaceFieldPerElectrode_V_per_m();
         double[] q = plan.field().charges_C();
         List<List<Object>> sf = new ArrayList<>();
-        for (int i = 0; i < max.length; i++) {
-            sf.add(List.of(s.electrodes().get(i).name(), s.electrodes().get(i).bias_V(), Units.vPerMToVPerMm(max[i]),
+        List<org.axistack.tune.SurfaceFields.Row> assessed = org.axistack.tune.SurfaceFields.of(s, plan.field());
+        for (int i = 0; i < assessed.size(); i++) {
+            org.axistack.field.SurfacePeak p = assessed.get(i).peak();
+            sf.add(List.of(s.electrodes().get(i).name(), s.electrodes().get(i).bias_V(),
+                    Units.vPerMToVPerMm(p.field_V_per_m()), Units.mToMm(p.z_m()), Units.mToMm(p.r_m()),
+                    p.sharp() ? "yes" : "no",
                     Units.vPerMToVPerMm(s.limits().comfort_V_per_m()), Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()),
                     q[i] * 1e12));
         }
-        t.put("surface_fields.csv", csv(List.of("electrode", "bias_V", "max_surface_field_V_per_mm",
-                "comfort_limit_V_per_mm", "aggressive_limit_V_per_mm", "charge_pC"), sf));
+        t.put("surface_fields.csv", csv(List.of("electrode", "bias_V", "max_surface_field_V_per_mm", "at_z_mm", "at_r_mm",
+                "sharp_corner_unbounded", "comfort_limit_V_per_mm", "aggressive_limit_V_per_mm", "charge_pC"), sf));
         double[][] cap = plan.solution().capacitanceMatrix_F();
         List<String> head = new ArrayList<>();
         head.add("electrode");

@@ -120,6 +120,18 @@ final class MalformedStacks {
         add(c, "z_end before z_start", edit("z_end_mm = -1.0", "z_end_mm = -30.0"), Z_ORDER, 12, "z_end_mm", "greater than z_start_mm");
         add(c, "zero-length tube", edit("z_end_mm = -1.0", "z_end_mm = -20.0"), Z_ORDER, 12, "z_end_mm", "swap");
         add(c, "negative wall", edit("z_end_mm = -1.0", "z_end_mm = -1.0\nwall_mm = -1.0"), NEGATIVE, 13, "wall_mm", "not be negative");
+        // edge radius (a rounded section needs room: at most half the wall and half the length; only on solids)
+        add(c, "negative edge radius", edit("z_end_mm = -1.0", "z_end_mm = -1.0\nwall_mm = 1.0\nedge_radius_mm = -0.2"),
+                EDGE_RADIUS_NEGATIVE, 14, "edge_radius_mm", "-0.2");
+        add(c, "edge radius on a sheet tube", edit("z_end_mm = -1.0", "z_end_mm = -1.0\nedge_radius_mm = 0.2"),
+                EDGE_RADIUS_ON_SHEET, 13, "edge_radius_mm", "wall_mm = 0");
+        add(c, "edge radius more than half the wall", edit("z_end_mm = -1.0", "z_end_mm = -1.0\nwall_mm = 1.0\nedge_radius_mm = 0.6"),
+                EDGE_RADIUS_TOO_LARGE, 14, "edge_radius_mm", "at most 0.5 mm");
+        add(c, "edge radius more than half a short tube", edit("z_start_mm = -20.0", "z_start_mm = -1.5")
+                .replaceFirst("z_end_mm = -1.0", "z_end_mm = -1.0\nwall_mm = 2.0\nedge_radius_mm = 0.4"),
+                EDGE_RADIUS_TOO_LARGE, 14, "edge_radius_mm", "length");
+        add(c, "aperture edge radius more than half its thickness", replaceB("shape = \"aperture\"\nbias_V = 1.0\nz_mm = 5.0\nhole_radius_mm = 1.0\nouter_radius_mm = 8.0\nthickness_mm = 0.5\nedge_radius_mm = 0.3"),
+                EDGE_RADIUS_TOO_LARGE, 22, "edge_radius_mm", "thickness_mm");
         add(c, "bias missing", edit("bias_V = 0.0\n", ""), MISSING_KEY, 6, "bias_V", "bias_V");
         add(c, "name missing", edit("name = \"a\"\n", ""), MISSING_KEY, 6, "name", "name");
         add(c, "blank name", edit("name = \"a\"", "name = \"  \""), BLANK_NAME, 7, "name", "empty");

@@ -100,6 +100,23 @@ class StackReaderTest {
     }
 
     @Test
+    void edgeRadiiOfTubesAndAperturesAreReadAndWrittenBack() throws Exception {
+        String text = MalformedStacks.edit("z_end_mm = -1.0", "z_end_mm = -1.0\nwall_mm = 1.0\nedge_radius_mm = 0.25")
+                .replace("z_end_mm = 20.0", "z_end_mm = 20.0\n\n[[electrode]]\nname = \"p\"\nshape = \"aperture\"\n"
+                        + "bias_V = 0.0\nz_mm = 30.0\nhole_radius_mm = 2.0\nouter_radius_mm = 9.0\nthickness_mm = 1.0\n"
+                        + "edge_radius_mm = 0.5");
+        Stack s = StackReader.parse(text, "rounded.toml");
+        Electrode.Tube a = (Electrode.Tube) s.electrode("a");
+        Electrode.Aperture p = (Electrode.Aperture) s.electrode("p");
+        assertThat(a.edgeRadius_m()).isEqualTo(0.25e-3);
+        assertThat(p.edgeRadius_m()).isEqualTo(0.5e-3);
+        assertThat(((Electrode.Tube) s.electrode("b")).edgeRadius_m()).isZero();
+        String written = StackWriter.toToml(s);
+        assertThat(written).contains("edge_radius_mm = 0.25", "edge_radius_mm = 0.5");
+        assertThat(StackReader.parse(written, "again.toml")).isEqualTo(s);
+    }
+
+    @Test
     void aClosedOutlineMayEndOnItsFirstPointToCloseWithAnArc() throws Exception {
         String text = MalformedStacks.replaceB("""
                 shape = "outline"
