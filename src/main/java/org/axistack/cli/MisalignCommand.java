@@ -93,6 +93,7 @@ final class MisalignCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--focus " + focus + ": no such electrode in " + input.shownAs()
                     + "; choose one of " + String.join(", ", stack.names()));
         }
+        OutputCheck.file(cl, "--csv", csv);
         PrintWriter err = cl.getErr();
         boolean silent = quiet || json;
         FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, silent));

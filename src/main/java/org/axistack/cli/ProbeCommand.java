@@ -132,6 +132,9 @@ final class ProbeCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--tune " + tune + ": no such electrode in " + input.shownAs()
                     + "; choose one of " + String.join(", ", stack.names()));
         }
+        if (out != null) {
+            OutputCheck.folder(cl, "--out", out, "probe.csv");
+        }
         FieldSolution solution = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), json));
         ProbeStudy study = ProbeStudy.run(solution, stack, settings, stack.screenZ_m().isPresent() ? name : null);
         if (out != null) {

@@ -49,7 +49,8 @@ class OutputPathsTest {
                         List.of("--csv", "--png")),
                 new Cmd("envelope", List.of("envelope", s, "--current", "1e-6", "--emittance", "1", "--scan-steps", "2"),
                         List.of("--csv", "--png", "--scan-csv", "--scan-png")),
-                new Cmd("trace", List.of("trace", s, "--count", "3"), List.of("--table")));
+                new Cmd("trace", List.of("trace", s, "--count", "3"), List.of("--table")),
+                new Cmd("misalign", List.of("misalign", s, "--quiet"), List.of("--csv")));
     }
 
     private static Path stack(Path dir) throws Exception {
