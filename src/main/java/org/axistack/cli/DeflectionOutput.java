@@ -42,7 +42,7 @@ final class DeflectionOutput {
             return;
         }
         SectorField sf = SectorField.solve(field.solution(), byIndex, 1, progress);
-        SplitDeflection d = SplitDeflection.of(sf, optics.potential(), optics.zStart_m(), new double[] {zScreen});
+        SplitDeflection d = SplitDeflection.of(sf, optics, optics.zStart_m(), new double[] {zScreen});
         double[] ray = d.ray(0, biases);
         out.put("deflection_plane_z_mm", Units.mToMm(zScreen));
         out.put("screen_offset_x_mm", Units.mToMm(ray[0]));

@@ -58,7 +58,7 @@ final class SteeringBench {
                 + String.format(java.util.Locale.ROOT, "%.2f", solve / roundSolve_s), solve, Math.round(3000 * roundSolve_s) / 1000.0);
         ParaxialOptics optics = ParaxialOptics.of(sol.withBiases(stack.biases_V()), stack);
         double zScreen = stack.screenZ_m().orElse(optics.zEnd_m());
-        SplitDeflection d = SplitDeflection.of(sf, optics.potential(), optics.zStart_m(), new double[] {zScreen});
+        SplitDeflection d = SplitDeflection.of(sf, optics, optics.zStart_m(), new double[] {zScreen});
         double[] rb = new double[Math.max(repeat, 200)];
         double sink = 0;
         for (int i = 0; i < rb.length; i++) {
@@ -81,7 +81,7 @@ final class SteeringBench {
             }
             long t0 = System.nanoTime();
             ParaxialOptics o = ParaxialOptics.of(sol.withBiases(b), stack.withBiases(b));
-            SplitDeflection dd = SplitDeflection.of(sf, o.potential(), o.zStart_m(), new double[] {zScreen});
+            SplitDeflection dd = SplitDeflection.of(sf, o, o.zStart_m(), new double[] {zScreen});
             sink += dd.perVolt(0, dd.electrodes().get(0)).xPerVx_m();
             rc[i] = (System.nanoTime() - t0) * 1e-9;
         }

@@ -1,10 +1,9 @@
 package org.axistack.optics;
 
-import java.util.stream.IntStream;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.axistack.field.MisalignmentResponse;
-import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
-import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
 
 /**
  * How the central ray (the ray that enters on the mechanical axis, parallel to it, at the object-side reference
@@ -15,52 +14,56 @@ import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
  *   x'' + g U' x' / (2 U*) + g U'' x / (4 U*) = -s g Phi_1 / (2 U*),   s = sign of the charge,
  * </pre>
  *
- * so the central ray is the response of the round lens to that source term, started at 0 with slope 0:
- * x(z) = Int T_12(z' -&gt; z) F(z') dz', x'(z) = Int T_22(z' -&gt; z) F(z') dz' (variation of constants,
- * T the round lens's transfer matrix). Composite Gauss-Legendre quadrature over the optics' traced range
- * (8 points on each of {@code intervals} equal intervals); Phi_1 of every response is tabulated once at the
- * nodes. Immutable and thread-safe.
+ * solved, as for split electrodes, by {@link CentralRayDeflection} (variation of constants on the round lens's
+ * transfer matrix, composite Gauss-Legendre quadrature): one source per electrode and motion, acting over the
+ * optics' traced range (object-side to image-side reference plane, where the round field is taken as ended too,
+ * so a whole moved lens stays consistent); beyond it the ray follows the round lens. Immutable and thread-safe
+ * (planes inside the range are computed on demand and kept).
  */
 public final class CentralRayShift {
 
-    /** Gauss points per interval. */
-    static final int POINTS = 8;
-
     private final ParaxialOptics optics;
-    private final int electrodes;
-    private final double[] nodeZ;
-    /** F(z') times the quadrature weight, [2k + motion][node], 1/m per unit motion. */
-    private final double[][] source;
-    /** Height and slope at the end of the quadrature range per unit slope at each node: T_12, T_22. */
-    private final double[] toEndHeight;
-    private final double[] toEndSlope;
-
     private final MisalignmentResponse response;
     private final int intervals;
-    /** End of the quadrature range (the optics' image-side plane, or a plane inside it), m. */
-    private final double rangeEnd;
+    private final int electrodes;
+    /** The responses up to the end of the range. */
+    private final CentralRayDeflection whole;
+    /** Planes inside the range, each with its own quadrature up to the plane. */
+    private final Map<Double, CentralRayDeflection> inside = new ConcurrentHashMap<>();
 
-    private CentralRayShift(MisalignmentResponse response, ParaxialOptics optics, int intervals, int electrodes,
-            double[] nodeZ, double[][] source, double rangeEnd) {
+    private CentralRayShift(MisalignmentResponse response, ParaxialOptics optics, int intervals) {
         this.response = response;
-        this.intervals = intervals;
         this.optics = optics;
-        this.electrodes = electrodes;
-        this.nodeZ = nodeZ;
-        this.source = source;
-        this.rangeEnd = rangeEnd;
-        toEndHeight = new double[nodeZ.length];
-        toEndSlope = new double[nodeZ.length];
-        for (int j = 0; j < nodeZ.length; j++) {
-            TransferMatrix t = optics.transfer(nodeZ[j], rangeEnd);
-            toEndHeight[j] = t.b();
-            toEndSlope[j] = t.d();
-        }
+        this.intervals = intervals;
+        this.electrodes = response.electrodes();
+        this.whole = CentralRayDeflection.of(optics, optics.zStart_m(), optics.zEnd_m(),
+                new double[] {optics.zEnd_m()}, sources(response), intervals);
+    }
+
+    /** Every response of every electrode as a dipole source, index 2 k + motion. */
+    static CentralRayDeflection.Sources sources(MisalignmentResponse response) {
+        int ne = response.electrodes();
+        return new CentralRayDeflection.Sources() {
+            @Override
+            public int count() {
+                return 2 * ne;
+            }
+
+            @Override
+            public void at(double z_m, double[] out) {
+                double[][] dip = new double[ne][2];
+                response.dipoles(z_m, dip);
+                for (int k = 0; k < ne; k++) {
+                    out[2 * k] = dip[k][0];
+                    out[2 * k + 1] = dip[k][1];
+                }
+            }
+        };
     }
 
     /** The central-ray shifts of every response, default quadrature (96 intervals). */
     public static CentralRayShift of(MisalignmentResponse response, ParaxialOptics optics) {
-        return of(response, optics, 96);
+        return of(response, optics, CentralRayDeflection.DEFAULT_INTERVALS);
     }
 
     /**
@@ -71,38 +74,7 @@ public final class CentralRayShift {
         if (intervals < 1) {
             throw new IllegalArgumentException("need at least one quadrature interval, got " + intervals);
         }
-        return over(response, optics, intervals, optics.zEnd_m());
-    }
-
-    private static CentralRayShift over(MisalignmentResponse response, ParaxialOptics optics, int intervals,
-            double zEnd) {
-        GaussIntegrator g = new GaussIntegratorFactory().legendre(POINTS, 0, 1);
-        double zs = optics.zStart_m();
-        double h = (zEnd - zs) / intervals;
-        int n = intervals * POINTS;
-        double[] z = new double[n];
-        double[] w = new double[n];
-        for (int i = 0; i < intervals; i++) {
-            for (int q = 0; q < POINTS; q++) {
-                z[i * POINTS + q] = zs + h * (i + g.getPoint(q));
-                w[i * POINTS + q] = h * g.getWeight(q);
-            }
-        }
-        int ne = response.electrodes();
-        double[][] src = new double[2 * ne][n];
-        AccelerationPotential p = optics.potential();
-        double sign = p.chargeSign();
-        IntStream.range(0, n).parallel().forEach(j -> {
-            double[][] dip = new double[ne][2];
-            response.dipoles(z[j], dip);
-            double u = p.u_V(z[j]);
-            double factor = -sign * p.g(u) / (2 * p.uStar(u)) * w[j];
-            for (int k = 0; k < ne; k++) {
-                src[2 * k][j] = factor * dip[k][0];
-                src[2 * k + 1][j] = factor * dip[k][1];
-            }
-        });
-        return new CentralRayShift(response, optics, intervals, ne, z, src, zEnd);
+        return new CentralRayShift(response, optics, intervals);
     }
 
     /** The paraxial optics the shifts are computed in. */
@@ -113,27 +85,23 @@ public final class CentralRayShift {
     /**
      * Height (m) and slope of the central ray at plane z, per unit motion of {@code electrode} (per metre of
      * decentre along x, per radian of tilt about y through its centre). Planes beyond the traced range are
-     * reached by a drift; a plane inside it gets its own quadrature up to the plane (the same number of
-     * intervals over the shorter range).
+     * reached through the round lens (a drift where the field is taken as ended); a plane inside it gets its own
+     * quadrature up to the plane.
      */
     public double[] at(int electrode, MisalignmentResponse.Motion motion, double z_m) {
         if (electrode < 0 || electrode >= electrodes) {
             throw new IllegalArgumentException("electrode index " + electrode + " outside 0.." + (electrodes - 1));
         }
-        if (z_m < rangeEnd) {
-            if (!(z_m > optics.zStart_m())) {
-                return new double[] {0, 0};
-            }
-            return over(response, optics, intervals, z_m).at(electrode, motion, z_m);
+        int source = 2 * electrode + motion.ordinal();
+        double end = whole.sourceEnd_m();
+        if (z_m >= end) {
+            return whole.beyondSources(source, z_m);
         }
-        double[] f = source[2 * electrode + motion.ordinal()];
-        double x = 0;
-        double s = 0;
-        for (int j = 0; j < nodeZ.length; j++) {
-            x += toEndHeight[j] * f[j];
-            s += toEndSlope[j] * f[j];
+        if (!(z_m > optics.zStart_m())) {
+            return new double[] {0, 0};
         }
-        // beyond the end of the range the field is taken as free (the optics' image-side plane): a drift
-        return new double[] {x + (z_m - rangeEnd) * s, s};
+        CentralRayDeflection d = inside.computeIfAbsent(z_m, z -> CentralRayDeflection.of(optics, optics.zStart_m(),
+                z, new double[] {z}, sources(response), intervals));
+        return new double[] {d.unitOffset_m(0, source), d.unitSlope_rad(0, source)};
     }
 }

@@ -35,19 +35,45 @@ public final class SplitDeflection {
     }
 
     /**
-     * Integrates the unit responses from zStart (central ray on the axis and parallel to it) to the planes.
+     * The unit responses from zStart (central ray on the axis and parallel to it) to the planes, the round lens
+     * traced between zStart and the last plane and taken as ended there ({@link CentralRayDeflection#of(
+     * AccelerationPotential, double, double[], List)}).
      *
      * @param field  the solved harmonics of the split electrodes (at least m = 1)
      * @param u      acceleration potential of the round field at the stack's biases
-     * @param planes ascending planes after zStart, m
+     * @param planes planes after zStart, m
      */
     public static SplitDeflection of(SectorField field, AccelerationPotential u, double zStart, double[] planes) {
         List<Integer> es = new ArrayList<>(field.split().keySet());
+        return new SplitDeflection(List.copyOf(es), field.split(),
+                CentralRayDeflection.of(u, zStart, planes, dipoles(field, es)));
+    }
+
+    /**
+     * The unit responses in a stack's round optics: the ray starts at zStart, the split electrodes' dipoles act
+     * up to the last plane (or the optics' image-side plane if that is farther).
+     */
+    public static SplitDeflection of(SectorField field, ParaxialOptics optics, double zStart, double[] planes) {
+        List<Integer> es = new ArrayList<>(field.split().keySet());
+        double end = optics.zEnd_m();
+        for (double p : planes) {
+            end = Math.max(end, p);
+        }
+        return new SplitDeflection(List.copyOf(es), field.split(), CentralRayDeflection.of(optics, zStart, end,
+                planes, CentralRayDeflection.functions(dipoles(field, es)), CentralRayDeflection.DEFAULT_INTERVALS));
+    }
+
+    private static List<DoubleUnaryOperator> dipoles(SectorField field, List<Integer> es) {
         List<DoubleUnaryOperator> dip = new ArrayList<>();
         for (int e : es) {
             dip.add(z -> field.unitDipole_V_per_m(e, z));
         }
-        return new SplitDeflection(List.copyOf(es), field.split(), CentralRayDeflection.of(u, zStart, planes, dip));
+        return dip;
+    }
+
+    /** The unit responses (per unit harmonic-1 coefficient of each split electrode, in {@link #electrodes()} order). */
+    public CentralRayDeflection responses() {
+        return response;
     }
 
     /** Split electrode indices, in the order of the responses. */
