@@ -21,18 +21,10 @@ import java.util.OptionalDouble;
  * s'(z_o) = 1) replaces u: Cs_o = -Integral s sqrt(U*) F3[s] dz / sqrt(U*_o),
  * Cc_o = U_o Integral s sqrt(U*) K[s] dz / sqrt(U*_o). Vr = m c^2/|q| is infinite non-relativistically.
  *
- * <p>Quadrature: composite 8-point Gauss-Legendre over the traced range and, on open sides, over the far-field
- * tails in s = 1/|z - z0| out to infinity (issue 23), panels doubled until the integrals
- * change by less than 1e-10 relative (the change reached is reported).
+ * <p>Quadrature: {@link AberrationQuadrature} (the traced range and, on open sides, the far-field tails in
+ * s = 1/|z - z0| out to infinity; the change at the last refinement is reported).
  */
 final class AberrationIntegrals {
-
-    static final double[] GL_X = {
-        -0.9602898564975363, -0.7966664774136267, -0.5255324099163290, -0.1834346424956498,
-        0.1834346424956498, 0.5255324099163290, 0.7966664774136267, 0.9602898564975363};
-    static final double[] GL_W = {
-        0.1012285362903763, 0.2223810344533745, 0.3137066557661458, 0.3626837833783620,
-        0.3626837833783620, 0.3137066557661458, 0.2223810344533745, 0.1012285362903763};
 
     private AberrationIntegrals() {
     }
@@ -75,6 +67,28 @@ final class AberrationIntegrals {
                 Math.max(inf.quadratureChange(), integrals[2]));
     }
 
+    /**
+     * Object-side {Cs_o, Cc_o, quadrature change} for the asymptotic object of lateral magnification M: the axial
+     * ray whose object-side asymptote leaves z_o = F1 + f1/M at slope 1, integrated over the whole axis (through the
+     * object-side tail of an open lens, from infinity). On a lens whose object side ends in a drift this is the
+     * real object at z_o before the object-side plane; on an open lens it is the asymptotic coefficient of the lens
+     * data books (the object seen along its asymptote), which {@link AberrationPolynomials} gives for every M.
+     */
+    static double[] forAsymptoticObject(ParaxialOptics optics, double magnification) {
+        CardinalElements c = optics.cardinal();
+        requireFocusing(c);
+        double zo = c.focalPointObjectZ_m() + c.focalLengthObject_m() / magnification;
+        double h = optics.zStart_m() - zo;
+        double[] integrals = integrals(optics, z -> {
+            TransferMatrix t = optics.fromObjectAsymptote(z);
+            return new double[] {t.height(h, 1), t.slope(h, 1)};
+        }, Double.NEGATIVE_INFINITY);
+        AccelerationPotential p = optics.potential();
+        double uo = c.uObject_V();
+        double so = Math.sqrt(p.uStar(uo));
+        return new double[] {-integrals[0] / so, uo * integrals[1] / so, integrals[2]};
+    }
+
     private static void requireFocusing(CardinalElements c) {
         if (c.kind() == CardinalElements.Kind.AFOCAL) {
             throw new IllegalStateException("the lens is afocal: aberration coefficients at the focal plane are undefined");
@@ -83,67 +97,19 @@ final class AberrationIntegrals {
 
     /**
      * {spherical integral, chromatic integral, last relative change} for the ray given by z -> (r, r'), from
-     * fromZ on: over the traced range between the reference planes in z and, on open sides, over the far-field
-     * tails in s = 1/|z - z0| (dz = ds/s^2; the integrands fall off like 1/|z|^2 there, so the s-form is finite).
+     * fromZ on, through {@link AberrationQuadrature} (traced range in z, far-field tails of open sides in s).
      */
     private static double[] integrals(ParaxialOptics optics, java.util.function.DoubleFunction<double[]> ray,
             double fromZ) {
-        java.util.List<double[]> parts = new java.util.ArrayList<>(); // {t0, t1, kind, centre, side}
-        double a = Math.max(fromZ, optics.zStart_m());
-        double b = optics.zEnd_m();
-        if (a < b) {
-            parts.add(new double[] {a, b, 0, 0, 0});
-        }
-        FarTail in = optics.objectTail();
-        if (in != null && fromZ < optics.zStart_m()) {
-            double sFrom = Double.isFinite(fromZ) ? 1 / Math.abs(fromZ - in.centreZ_m()) : 0;
-            parts.add(new double[] {sFrom, 1 / Math.abs(optics.zStart_m() - in.centreZ_m()), 1, in.centreZ_m(), -1});
-        }
-        FarTail out = optics.imageTail();
-        if (out != null) {
-            double sFrom = fromZ > optics.zEnd_m() ? 1 / Math.abs(fromZ - out.centreZ_m()) : Double.POSITIVE_INFINITY;
-            double sTo = Math.min(sFrom, 1 / Math.abs(optics.zEnd_m() - out.centreZ_m()));
-            parts.add(new double[] {0, sTo, 1, out.centreZ_m(), +1});
-        }
         AccelerationPotential p = optics.potential();
         double inverseRest = 1 / p.restPotential_V();
         double[] d = new double[5];
-        double[] prev = null;
-        double change = Double.POSITIVE_INFINITY;
-        for (int panels = 64; panels <= 8192; panels *= 2) {
-            double[] sum = new double[2];
-            for (double[] part : parts) {
-                double h = (part[1] - part[0]) / panels;
-                for (int k = 0; k < panels; k++) {
-                    double mid = part[0] + (k + 0.5) * h;
-                    for (int j = 0; j < GL_X.length; j++) {
-                        double t = mid + 0.5 * h * GL_X[j];
-                        double w = 0.5 * h * GL_W[j];
-                        double z = t;
-                        if (part[2] == 1) {
-                            z = part[3] + part[4] / t;
-                            w /= t * t;
-                        }
-                        double[] r = ray.apply(z);
-                        p.derivatives(z, 4, d);
-                        integrand(d, inverseRest, r[0], r[1], sum, w);
-                    }
-                }
-            }
-            if (prev != null) {
-                change = Math.max(relChange(sum[0], prev[0]), relChange(sum[1], prev[1]));
-                if (change < 1e-10) {
-                    return new double[] {sum[0], sum[1], change};
-                }
-            }
-            prev = sum;
-        }
-        return new double[] {prev[0], prev[1], change};
-    }
-
-    private static double relChange(double now, double before) {
-        double scale = Math.max(Math.abs(now), Double.MIN_NORMAL);
-        return Math.abs(now - before) / scale;
+        AberrationQuadrature.Result q = AberrationQuadrature.integrate(optics, fromZ, new int[] {0, 1}, (z, w, acc) -> {
+            double[] r = ray.apply(z);
+            p.derivatives(z, 4, d);
+            integrand(d, inverseRest, r[0], r[1], acc, w);
+        });
+        return new double[] {q.values()[0], q.values()[1], q.change()};
     }
 
     /** Adds w * r sqrt(U*) F3 to sum[0] and w * r sqrt(U*) K to sum[1]. */

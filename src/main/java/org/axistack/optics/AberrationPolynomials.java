@@ -27,16 +27,20 @@ import org.hipparchus.linear.RealMatrix;
  * infinity.
  *
  * <p>Derivation. The object-side coefficients are Cs_o = -I_s[s]/sqrt(U*_o) and Cc_o = U_o I_c[s]/sqrt(U*_o) with
- * I the aberration integrals over the axial ray s (s(z_o) = 0, s'(z_o) = 1) of {@link AberrationIntegrals}. For an
- * object in the field-free space before the object-side reference plane z_1, s enters at height z_1 - z_o with
- * slope 1, and z_o = F1 + f1 m, so s = a + m b with a = (z_1 - F1) u1 + u2 and b = -f1 u1 (u1, u2 the rays
- * started at z_1 with (1, 0) and (0, 1)). The spherical integrand is a homogeneous quartic form in (s, s') and
- * the chromatic one a quadratic form, so I_s is a quartic and I_c a quadratic polynomial in m. The coefficients
- * come from the integrals of the same integrand at m = -2, -1, 0, 1, 2 (one quadrature pass for all five rays)
- * and the exact interpolating polynomial through them.
+ * I the aberration integrals over the axial ray s of {@link AberrationIntegrals}, integrated over the whole axis
+ * by {@link AberrationQuadrature} (far-field tails of an open lens included). The object is asymptotic: s is the
+ * ray whose object-side asymptote leaves z_o at slope 1, so it has asymptote height z_1 - z_o at the object-side
+ * plane z_1; with z_o = F1 + f1 m, s = a + m b with a = (z_1 - F1) u1 + u2 and b = -f1 u1 (u1, u2 the rays whose
+ * object-side asymptotes have (height at z_1, slope) = (1, 0) and (0, 1); on a side that ends in a drift, the rays
+ * given at z_1). The spherical integrand is a homogeneous quartic form in (s, s') and the chromatic one a quadratic
+ * form, so I_s is a quartic and I_c a quadratic polynomial in m. The coefficients come from the integrals of the
+ * same integrand at m = -2, -1, 0, 1, 2 (one quadrature pass for all five rays) and the exact interpolating
+ * polynomial through them.
  *
- * <p>Valid for objects at or before the object-side reference plane (asymptotic coefficients); objects
- * inside the field need {@link ParaxialOptics#aberrations(double)}.
+ * <p>Valid for objects at or before the object-side plane of a lens that ends in a drift there (the real object is
+ * then the asymptotic one); on an open lens for the object seen along its asymptote (the lens data books'
+ * asymptotic coefficients), which differs from a real object placed inside the decaying field by the part of the
+ * field the ray does not cross. Real objects inside the field: {@link ParaxialOptics#aberrations(double)}.
  *
  * @param zObjectPlane_m    the object-side reference plane z_1; the polynomials hold for objects at z_o &lt;= z_1
  * @param quadratureChange  relative change of the integrals at the last quadrature refinement
@@ -74,61 +78,46 @@ public record AberrationPolynomials(double[] spherical_m, double[] chromatic_m, 
             throw new IllegalStateException("the lens is afocal: the magnification is not defined by an object position");
         }
         double z1 = optics.zStart_m();
-        double z2 = optics.zEnd_m();
         double lead = z1 - c.focalPointObjectZ_m();
         double f1 = c.focalLengthObject_m();
         AccelerationPotential p = optics.potential();
         double inverseRest = 1 / p.restPotential_V();
         double[] d = new double[5];
         double[] part = new double[2];
-        double[][] prev = null;
-        double change = Double.POSITIVE_INFINITY;
-        double[][] sums = null;
-        for (int panels = 64; panels <= 8192; panels *= 2) {
-            sums = new double[NODES.length][2];
-            double h = (z2 - z1) / panels;
-            for (int k = 0; k < panels; k++) {
-                double mid = z1 + (k + 0.5) * h;
-                for (int j = 0; j < AberrationIntegrals.GL_X.length; j++) {
-                    double z = mid + 0.5 * h * AberrationIntegrals.GL_X[j];
-                    double w = 0.5 * h * AberrationIntegrals.GL_W[j];
-                    double[] u1 = optics.ray(z1, 1, 0, z);
-                    double[] u2 = optics.ray(z1, 0, 1, z);
+        int[] groups = new int[2 * NODES.length];
+        for (int n = 0; n < NODES.length; n++) {
+            groups[2 * n + 1] = 1;
+        }
+        // u1, u2: the rays whose object-side asymptotes have (height at z1, slope) = (1, 0) and (0, 1); on an ended
+        // object side these are the rays given at z1 (the asymptote is the ray there)
+        AberrationQuadrature.Result q = AberrationQuadrature.integrate(optics, Double.NEGATIVE_INFINITY, groups,
+                (z, w, acc) -> {
+                    TransferMatrix u = optics.fromObjectAsymptote(z);
                     p.derivatives(z, 4, d);
-                    double ar = lead * u1[0] + u2[0];
-                    double ap = lead * u1[1] + u2[1];
+                    double ar = lead * u.a() + u.b();
+                    double ap = lead * u.c() + u.d();
                     for (int n = 0; n < NODES.length; n++) {
                         double m = NODES[n];
-                        AberrationIntegrals.integrand(d, inverseRest, ar - m * f1 * u1[0], ap - m * f1 * u1[1],
-                                sums[n], w);
+                        part[0] = 0;
+                        part[1] = 0;
+                        AberrationIntegrals.integrand(d, inverseRest, ar - m * f1 * u.a(), ap - m * f1 * u.c(), part, w);
+                        acc[2 * n] += part[0];
+                        acc[2 * n + 1] += part[1];
                     }
-                }
-            }
-            if (prev != null) {
-                change = 0;
-                for (int n = 0; n < NODES.length; n++) {
-                    for (int q = 0; q < 2; q++) {
-                        double scale = Math.max(Math.abs(sums[n][q]), Math.abs(sums[2][q]));
-                        change = Math.max(change, Math.abs(sums[n][q] - prev[n][q]) / Math.max(scale, Double.MIN_NORMAL));
-                    }
-                }
-                if (change < 1e-10) {
-                    break;
-                }
-            }
-            prev = sums;
-        }
-        double uo = p.u_V(z1);
+                });
+        double[] sums = q.values();
+        double uo = c.uObject_V();
         double so = Math.sqrt(p.uStar(uo));
         double[] is = new double[NODES.length];
         double[] ic = new double[3];
         for (int n = 0; n < NODES.length; n++) {
-            is[n] = -sums[n][0] / so;
+            is[n] = -sums[2 * n] / so;
         }
         for (int n = 0; n < 3; n++) {
-            ic[n] = uo * sums[n + 1][1] / so;
+            ic[n] = uo * sums[2 * (n + 1) + 1] / so;
         }
-        double ui = p.u_V(z2);
+        double ui = c.uImage_V();
+        double change = q.change();
         return new AberrationPolynomials(interpolate(NODES, is), interpolate(new double[] {-1, 0, 1}, ic), uo,
                 p.uStar(uo), ui, p.uStar(ui), z1, optics.relativistic(), change);
     }
@@ -194,7 +183,8 @@ public record AberrationPolynomials(double[] spherical_m, double[] chromatic_m, 
         return String.format(Locale.ROOT, "object side, polynomials in 1/M (M the signed lateral magnification, negative"
                 + " for a real inverted image): Cs_o = sum Cs_k M^-k (k = 0..4), Cc_o = sum Cc_k M^-k (k = 0..2); an axial"
                 + " ray leaving the object at slope a_o meets the Gaussian image at M Cs_o a_o^3 - M Cc_o a_o dT/T_o;"
-                + " image side Cs_i = M^4 (U*_i/U*_o)^1.5 Cs_o, Cc_i = M^2 (U*_i/U*_o)^0.5 (U_i/U_o) Cc_o; valid for"
-                + " objects at or before z = %.4f mm", zObjectPlane_m * 1e3);
+                + " image side Cs_i = M^4 (U*_i/U*_o)^1.5 Cs_o, Cc_i = M^2 (U*_i/U*_o)^0.5 (U_i/U_o) Cc_o; asymptotic"
+                + " (the object seen along its straight object-side asymptote, the whole field including far-field tails"
+                + " crossed), the real object for objects at or before z = %.4f mm when the field ends there", zObjectPlane_m * 1e3);
     }
 }

@@ -25,7 +25,7 @@ public record ProbeWorkingPoint(String label, List<Double> biases_V, double prob
     /**
      * The lens data of a paraxial optics for an object at objectZ (empty: at infinity): image-side Cs_i and Cc_i from
      * {@link AberrationPolynomials} at the object's magnification (the object must lie at or before the object-side
-     * reference plane), U at the image-side plane, the magnification.
+     * reference plane), U on the image side (at infinity on an open side), the magnification.
      *
      * @throws IllegalArgumentException when the lens is not converging, or the object lies inside the field
      */
@@ -54,7 +54,7 @@ public record ProbeWorkingPoint(String label, List<Double> biases_V, double prob
                         "the object at z = %.3f mm has no real image (magnification %.4g): no probe", zo * 1e3, m));
             }
         }
-        double uImage = optics.potential().u_V(optics.zEnd_m());
+        double uImage = c.uImage_V(); // at infinity on an open image side
         ProbeLens lens = new ProbeLens(poly.sphericalImage_m(m), poly.chromaticImage_m(m), particle, uImage,
                 objectZ_m.isPresent() ? m : Double.NaN);
         Double[] boxed = new Double[biases_V.length];
