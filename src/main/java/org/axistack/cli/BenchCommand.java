@@ -10,7 +10,6 @@ import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
 import org.axistack.field.SolveProgress;
-import org.axistack.io.StackInputException;
 import org.axistack.model.MeshSettings;
 import org.axistack.model.Stack;
 import org.axistack.optics.ParaxialOptics;
@@ -220,13 +219,13 @@ final class BenchCommand implements Callable<Integer> {
         }
         double z0 = stack.beam().startZ_m().getAsDouble();
         double z1 = stack.screenZ_m().getAsDouble();
-        double bore = stack.minBore_m();
+        double bore = stack.openBore_m();
         BiasedField field = sol.withBiases(stack.biases_V());
         double f2 = ParaxialOptics.of(field, stack).cardinal().focalLengthImage_m();
         double radius = Math.min(Math.abs(8e-3 * f2), 0.4 * bore);
         org.axistack.trace.ElectrodeGeometry geometry = org.axistack.trace.ElectrodeGeometry.of(stack);
-        org.axistack.trace.FieldMap map = new org.axistack.trace.FieldMap(field, new org.axistack.trace.NearAxisField(field),
-                geometry, z0 - 1e-3, z1 + 1e-3, bore, bore / 40, org.axistack.trace.TraceProgress.none());
+        org.axistack.trace.FieldMap map = org.axistack.trace.FieldMap.forRays(field, geometry, z0, z1, bore,
+                org.axistack.trace.FieldMap.defaultStep_m(bore), org.axistack.trace.TraceProgress.none());
         org.axistack.trace.Tracer tracer = new org.axistack.trace.Tracer(map, geometry,
                 org.axistack.trace.TraceSettings.defaults());
         org.axistack.trace.TraceTargets targets = org.axistack.trace.TraceTargets.screenOnly(z1);
@@ -253,11 +252,11 @@ final class BenchCommand implements Callable<Integer> {
         }
         double z0 = stack.beam().startZ_m().getAsDouble();
         double z1 = stack.screenZ_m().getAsDouble();
-        double bore = stack.minBore_m();
+        double bore = stack.openBore_m();
         BiasedField field = sol.withBiases(stack.biases_V());
         org.axistack.trace.ElectrodeGeometry geometry = org.axistack.trace.ElectrodeGeometry.of(stack);
-        org.axistack.trace.FieldMap map = new org.axistack.trace.FieldMap(field, new org.axistack.trace.NearAxisField(field),
-                geometry, z0 - 1e-3, z1 + 1e-3, bore, bore / 40, org.axistack.trace.TraceProgress.none());
+        org.axistack.trace.FieldMap map = org.axistack.trace.FieldMap.forRays(field, geometry, z0, z1, bore,
+                org.axistack.trace.FieldMap.defaultStep_m(bore), org.axistack.trace.TraceProgress.none());
         org.axistack.trace.Tracer tracer = new org.axistack.trace.Tracer(map, geometry,
                 org.axistack.trace.TraceSettings.defaults());
         org.axistack.trace.RaySet rays = org.axistack.trace.RaySets.uniformDisk(stack.beam().particle(),
@@ -312,7 +311,7 @@ final class BenchCommand implements Callable<Integer> {
      */
     private void misalignRows(PrintWriter out, Stack stack, FieldSolution sol) {
         java.util.List<org.axistack.model.Electrode> es = new java.util.ArrayList<>(stack.electrodes());
-        double bore = stack.minBore_m();
+        double bore = stack.openBore_m();
         double outer = 0;
         for (org.axistack.model.Electrode e : es) {
             outer = Math.max(outer, e.contour().maxR_m());

@@ -129,17 +129,19 @@ final class OpticsCommand implements Callable<Integer> {
         out.put("principal_plane_image_z_mm", mm(c.principalPlaneImageZ_m()));
         out.put("real_focus_image_z_mm", c.realFocusImageZ_m().isPresent() ? mm(c.realFocusImageZ_m().getAsDouble()) : null);
         out.put("real_focus_object_z_mm", c.realFocusObjectZ_m().isPresent() ? mm(c.realFocusObjectZ_m().getAsDouble()) : null);
-        if (objectZ.isPresent()) {
-            Imaging im = optics.imaging(objectZ.getAsDouble());
+        java.util.Optional<Imaging> imaging = objectZ.isPresent() ? java.util.Optional.of(optics.imaging(objectZ.getAsDouble()))
+                : java.util.Optional.empty();
+        if (imaging.isPresent()) {
+            Imaging im = imaging.get();
             out.put("image_z_mm", mm(im.imageZ_m()));
             out.put("magnification", finite(im.lateralMagnification()));
             out.put("angular_magnification", finite(im.angularMagnification()));
             out.put("real_image_z_mm", im.realImageZ_m().isPresent() ? mm(im.realImageZ_m().getAsDouble()) : null);
             out.put("real_magnification", finite(im.realLateralMagnification()));
         }
-        if (c.kind() != CardinalElements.Kind.AFOCAL) {
-            Aberrations ab = objectZ.isPresent() && objectZ.getAsDouble() < optics.zEnd_m() && Double.isFinite(optics.imaging(objectZ.getAsDouble()).imageZ_m())
-                    ? optics.aberrations(objectZ.getAsDouble()) : optics.aberrations();
+        java.util.Optional<Aberrations> quoted = optics.quotedAberrations(imaging);
+        if (quoted.isPresent()) {
+            Aberrations ab = quoted.get();
             out.put("spherical_aberration_mm", mm(ab.sphericalImage_m()));
             out.put("chromatic_aberration_mm", mm(ab.chromaticImage_m()));
             if (ab.objectZ_m().isPresent()) {
@@ -165,10 +167,8 @@ final class OpticsCommand implements Callable<Integer> {
         org.axistack.optics.OpticsAccuracy.shortfall(c, accuracy).ifPresent(w -> {
             throw new OutcomeException(w);
         });
-        if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
-            throw new OutcomeException("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
-                    + "): a parallel beam leaves " + (c.kind() == CardinalElements.Kind.AFOCAL ? "parallel" : "diverging")
-                    + "; change the biases (e.g. with --set) to get a real focus");
+        if (!c.focuses()) {
+            throw new OutcomeException(c.notFocusingStatement() + "; change the biases (e.g. with --set) to get a real focus");
         }
         return 0;
     }

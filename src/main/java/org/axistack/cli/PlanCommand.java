@@ -11,6 +11,7 @@ import org.axistack.model.Beam;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
 import org.axistack.model.Stack;
+import org.axistack.optics.CardinalElements;
 import org.axistack.plan.PlanAnalysis;
 import org.axistack.plan.PlanFolder;
 import org.axistack.plan.PlanFormat;
@@ -121,7 +122,8 @@ final class PlanCommand implements Callable<Integer> {
         if (plan.needsAction()) {
             throw new OutcomeException(plan.reflection().isPresent()
                     ? "the beam is reflected (see the report): lower the retarding bias or raise the beam energy"
-                    : "the lens does not focus: change the biases (e.g. with --set) to get a real focus");
+                    : plan.cardinal().map(CardinalElements::notFocusingStatement).orElse(plan.optics())
+                            + "; change the biases (e.g. with --set) to get a real focus");
         }
         return 0;
     }

@@ -23,7 +23,6 @@ import org.axistack.trace.BundleResult;
 import org.axistack.trace.BundleTracer;
 import org.axistack.trace.ElectrodeGeometry;
 import org.axistack.trace.FieldMap;
-import org.axistack.trace.NearAxisField;
 import org.axistack.trace.PlaneStatistics;
 import org.axistack.trace.RayPoint;
 import org.axistack.trace.RaySet;
@@ -155,7 +154,7 @@ final class TraceCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Beam beam = stack.beam();
         ElectrodeGeometry geometry = ElectrodeGeometry.of(stack);
-        double bore = bore(stack);
+        double bore = stack.openBore_m();
         Kind k = kind != null ? kind : beam.objectZ_m().isPresent() ? Kind.fan : Kind.disk;
         double startZ = startZMm != null ? Units.mmToM(startZMm)
                 : k == Kind.fan && beam.objectZ_m().isPresent() ? beam.objectZ_m().getAsDouble()
@@ -193,12 +192,13 @@ final class TraceCommand implements Callable<Integer> {
         }
 
         if (!exact) {
-            double step = mapStepMm != null ? Units.mmToM(mapStepMm) : bore / 40;
+            double step = mapStepMm != null ? Units.mmToM(mapStepMm) : FieldMap.defaultStep_m(bore);
             if (!(step > 0) || !Double.isFinite(step)) {
                 throw usage("--map-step must be a positive number of mm");
             }
-            double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, screenZ) - 4 * step);
-            double z1 = Math.min(geometry.regionZMax_m(), screenZ + 4 * step);
+            double[] zr = FieldMap.zRange_m(geometry, startZ, screenZ, step);
+            double z0 = zr[0];
+            double z1 = zr[1];
             double nodes = FieldMap.nodeCount(z0, z1, bore, step);
             if (nodes > FieldMap.MAX_NODES) {
                 throw usage(String.format(Locale.ROOT, "--map-step %s mm would make a field map of %.3g nodes, more than"
@@ -215,15 +215,9 @@ final class TraceCommand implements Callable<Integer> {
         if (exact) {
             method = "boundary-element field evaluated directly at every step";
         } else {
-            double step = mapStepMm != null ? Units.mmToM(mapStepMm) : bore / 40;
-            if (!(step > 0)) {
-                throw usage("--map-step must be positive");
-            }
-            double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, screenZ) - 4 * step);
-            double z1 = Math.min(geometry.regionZMax_m(), screenZ + 4 * step);
+            double step = mapStepMm != null ? Units.mmToM(mapStepMm) : FieldMap.defaultStep_m(bore);
             err.println("mapping the field ...");
-            FieldMap map = new FieldMap(biased, new NearAxisField(biased), geometry, z0, z1, bore, step,
-                    TraceProgress.none());
+            FieldMap map = FieldMap.forRays(biased, geometry, startZ, screenZ, bore, step, TraceProgress.none());
             field = map;
             method = String.format(Locale.ROOT, "near-axis series of the axial potential's Chebyshev expansion (relative"
                     + " error %s) plus a %s mm map of the remainder (measured map error: %s V, %s V/mm); direct element"
@@ -290,14 +284,6 @@ final class TraceCommand implements Callable<Integer> {
                 String.join("; ", why));
     }
 
-    private static double bore(Stack s) {
-        double b = s.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(r -> r > 0).min()
-                .orElse(0);
-        if (b == 0) {
-            b = s.electrodes().stream().mapToDouble(e -> e.contour().maxR_m()).max().orElseThrow() / 2;
-        }
-        return b;
-    }
 
     private RaySet raySet(Kind k, Beam beam, double startZ, double bore) {
         double e = beam.energy_eV();

@@ -5,6 +5,7 @@ import java.util.List;
 import org.axistack.mesh.BoundaryMesh;
 import org.axistack.model.Codata2018;
 import org.axistack.model.Electrode;
+import org.axistack.model.Stack;
 
 /**
  * The solved stack: one unit-bias surface-charge solution per electrode on a fixed mesh. By linearity any
@@ -165,16 +166,11 @@ public final class FieldSolution {
             synchronized (this) {
                 x = axialExpansion;
                 if (x == null) {
-                    double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
-                    for (Electrode e : electrodes) {
-                        lo = Math.min(lo, e.contour().minZ_m());
-                        hi = Math.max(hi, e.contour().maxZ_m());
-                    }
-                    double span = Math.max(hi - lo, 1e-6);
+                    double[] fringe = Stack.fringeRange_m(electrodes);
                     // as far as the far-field series starts, so the axis is covered without the exact sum
                     double reach = FarField.FACTOR * chargeRadius();
-                    x = AxialExpansion.build(this, Math.min(lo - 0.5 * span, chargeCentre() - reach),
-                            Math.max(hi + 0.5 * span, chargeCentre() + reach));
+                    x = AxialExpansion.build(this, Math.min(fringe[0], chargeCentre() - reach),
+                            Math.max(fringe[1], chargeCentre() + reach));
                     axialExpansion = x;
                 }
             }

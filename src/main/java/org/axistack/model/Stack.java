@@ -215,8 +215,38 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         return electrodes.stream().mapToDouble(e -> e.contour().maxZ_m()).max().orElseThrow();
     }
 
-    /** Smallest radius any electrode reaches (the narrowest bore), m; 0 if an electrode crosses the axis. */
+    /**
+     * Smallest radius any electrode reaches, m; 0 if an electrode crosses the axis (a closed electrode counts:
+     * the sizing's least-bore limit). For the bore a beam passes through, see {@link #openBore_m()}.
+     */
     public double minBore_m() {
         return electrodes.stream().mapToDouble(e -> e.contour().minR_m()).min().orElseThrow();
+    }
+
+    /** The stack's z extent widened by half its length on each side, m: see {@link #fringeRange_m(List)}. */
+    public double[] fringeRange_m() {
+        return fringeRange_m(electrodes);
+    }
+
+    /**
+     * The z extent of some electrodes widened by half its length on each side, m ({lo, hi}): where fringe fields
+     * outside plate lenses are looked for (the optics' scan for field-free planes, the axial expansion's table).
+     * One place for the widening, so the optics never scans beyond the tabulated axis.
+     */
+    public static double[] fringeRange_m(List<Electrode> electrodes) {
+        double lo = electrodes.stream().mapToDouble(e -> e.contour().minZ_m()).min().orElseThrow();
+        double hi = electrodes.stream().mapToDouble(e -> e.contour().maxZ_m()).max().orElseThrow();
+        double span = Math.max(hi - lo, 1e-6);
+        return new double[] {lo - 0.5 * span, hi + 0.5 * span};
+    }
+
+    /**
+     * The narrowest open bore, m: the smallest radius reached by an electrode that leaves the axis open. Default
+     * beams, ray fans, envelope radii and field-map extents scale with it (the one place for that scale). A
+     * stack in which every electrode closes the axis has no open bore; half its largest radius stands in.
+     */
+    public double openBore_m() {
+        double b = electrodes.stream().mapToDouble(e -> e.contour().minR_m()).filter(r -> r > 0).min().orElse(0);
+        return b > 0 ? b : electrodes.stream().mapToDouble(e -> e.contour().maxR_m()).max().orElseThrow() / 2;
     }
 }

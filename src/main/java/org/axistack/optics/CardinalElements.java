@@ -92,6 +92,24 @@ public record CardinalElements(double zStart_m, double zEnd_m, double uObject_V,
     }
 
     /**
+     * Whether the lens brings a parallel beam to a real focus: it converges, or the real ray that enters
+     * parallel crosses the axis (a lens whose asymptotic elements say diverging can still focus in its field).
+     * The one test behind every "the lens does not focus" outcome.
+     */
+    public boolean focuses() {
+        return kind == Kind.CONVERGING || realFocusImageZ_m.isPresent();
+    }
+
+    /**
+     * The plain statement of a lens that does not focus, e.g. "the lens does not focus (diverging): a parallel
+     * beam leaves diverging" (the caller adds the remedy that fits its interface).
+     */
+    public String notFocusingStatement() {
+        return "the lens does not focus (" + kind.name().toLowerCase(java.util.Locale.ROOT) + "): a parallel beam leaves "
+                + (kind == Kind.AFOCAL ? "parallel" : "diverging");
+    }
+
+    /**
      * Asymptotic image position of an axial object at z_o, m, from Newton's relation, which in these z
      * coordinates (both focal lengths positive when converging) reads (z_o - F1)(z_i - F2) = -f1 f2.
      */

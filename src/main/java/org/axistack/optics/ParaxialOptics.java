@@ -143,8 +143,7 @@ public final class ParaxialOptics {
      * fields outside plate lenses are seen; inside long tubes the tube plane is found anyway.
      */
     public static double[] searchRange_m(Stack stack) {
-        double span = stack.maxZ_m() - stack.minZ_m();
-        return new double[] {stack.minZ_m() - 0.5 * span, stack.maxZ_m() + 0.5 * span};
+        return stack.fringeRange_m();
     }
 
     /**
@@ -578,5 +577,20 @@ public final class ParaxialOptics {
     /** Aberration coefficients for an axial object at objectZ: image side at infinity plus object side. */
     public Aberrations aberrations(double objectZ_m) {
         return AberrationIntegrals.forObject(this, objectZ_m);
+    }
+
+    /**
+     * The aberrations every output quotes (plan, optics, sweep, window): for the stack's axial object when it lies
+     * before the image-side reference plane and has a finite image, else for an object at infinity; empty for an
+     * afocal lens. One rule, so no two outputs quote Cs and Cc for different object positions.
+     *
+     * @param imaging the image of the stack's object point, if it has one (computed once by the caller)
+     */
+    public java.util.Optional<Aberrations> quotedAberrations(java.util.Optional<Imaging> imaging) {
+        if (cardinal().kind() == CardinalElements.Kind.AFOCAL) {
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of(imaging.filter(im -> im.objectZ_m() < zEnd_m() && Double.isFinite(im.imageZ_m()))
+                .map(im -> aberrations(im.objectZ_m())).orElseGet(this::aberrations));
     }
 }

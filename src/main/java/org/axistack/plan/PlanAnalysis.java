@@ -32,7 +32,6 @@ import org.axistack.report.LensPlan;
 import org.axistack.trace.Trajectory;
 import org.axistack.tune.BiasRange;
 import org.axistack.tune.BiasSweep;
-import org.axistack.tune.BiasTuner;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.SurfaceFieldCheck;
 import org.axistack.tune.SurfaceFields;
@@ -252,9 +251,7 @@ public final class PlanAnalysis {
 
     /** The default envelope beam's edge radius: a quarter of the narrowest open bore, m (plan and envelope commands). */
     public static double defaultEnvelopeRadius_m(Stack stack) {
-        double b = stack.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(x -> x > 0).min()
-                .orElse(1e-3);
-        return 0.25 * b;
+        return 0.25 * stack.openBore_m();
     }
 
     /** The electrode with the largest |bias| (null if all are 0 V). */
@@ -364,13 +361,9 @@ public final class PlanAnalysis {
                 if (obj.isPresent()) {
                     imaging = Optional.of(optics.imaging(obj.getAsDouble()));
                 }
-                if (c.kind() != CardinalElements.Kind.AFOCAL) {
-                    aberrations = Optional.of(imaging.isPresent() && Double.isFinite(imaging.get().imageZ_m())
-                            ? optics.aberrations(imaging.get().objectZ_m()) : optics.aberrations());
-                }
-                if (c.kind() != CardinalElements.Kind.CONVERGING && c.realFocusImageZ_m().isEmpty()) {
-                    warnings.add("the lens does not focus (" + c.kind().name().toLowerCase(Locale.ROOT)
-                            + "): change the biases (with --set or the window's bias controls) to get a real focus");
+                aberrations = optics.quotedAberrations(imaging);
+                if (!c.focuses()) {
+                    warnings.add(c.notFocusingStatement() + "; change the biases (with --set or the window's bias controls) to get a real focus");
                 }
             } catch (ReflectionException e) {
                 reflection = Optional.of(e.getMessage());

@@ -14,7 +14,6 @@ import org.axistack.trace.BundleResult;
 import org.axistack.trace.BundleTracer;
 import org.axistack.trace.ElectrodeGeometry;
 import org.axistack.trace.FieldMap;
-import org.axistack.trace.NearAxisField;
 import org.axistack.trace.RaySets;
 import org.axistack.trace.RayStart;
 import org.axistack.trace.TraceProgress;
@@ -39,8 +38,7 @@ final class PlanRays {
     static Fan trace(Stack stack, BiasedField biased) {
         Beam beam = stack.beam();
         ElectrodeGeometry geometry = ElectrodeGeometry.of(stack);
-        double bore = stack.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(r -> r > 0).min()
-                .orElse(1e-3);
+        double bore = stack.openBore_m();
         // rays stop where the beam lands: the screen when the stack has one, else the stack's right end
         double endZ = stack.screenZ_m().orElse(stack.maxZ_m());
         boolean fromObject = beam.objectZ_m().isPresent() && beam.objectZ_m().getAsDouble() < endZ;
@@ -73,10 +71,8 @@ final class PlanRays {
         for (RayStart r : starts) {
             Tracer.checkPlacement(geometry, r, targets);
         }
-        double step = bore / 40;
-        double z0 = Math.max(geometry.regionZMin_m(), Math.min(startZ, endZ) - 4 * step);
-        double z1 = Math.min(geometry.regionZMax_m(), endZ + 4 * step);
-        FieldMap map = new FieldMap(biased, new NearAxisField(biased), geometry, z0, z1, bore, step, TraceProgress.none());
+        FieldMap map = FieldMap.forRays(biased, geometry, startZ, endZ, bore, FieldMap.defaultStep_m(bore),
+                TraceProgress.none());
         Tracer tracer = new Tracer(map, geometry, TraceSettings.defaults().withRecordPath(true));
         BundleResult res = BundleTracer.perCore(tracer).trace(RaySets.of(beam.particle(), starts, what), targets,
                 TraceProgress.none());

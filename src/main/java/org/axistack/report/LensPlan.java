@@ -66,7 +66,6 @@ public record LensPlan(Stack stack, String source, FieldSolution solution, Biase
 
     /** True when the plan has an outcome the user must act on (reflection or no real focus). */
     public boolean needsAction() {
-        return reflection.isPresent() || cardinal.map(c -> c.kind() != CardinalElements.Kind.CONVERGING
-                && c.realFocusImageZ_m().isEmpty()).orElse(true);
+        return reflection.isPresent() || cardinal.map(c -> !c.focuses()).orElse(true);
     }
 }

@@ -4,6 +4,7 @@ import java.util.concurrent.CancellationException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
 
+import org.axistack.field.BiasedField;
 import org.axistack.field.Field;
 
 /**
@@ -38,6 +39,55 @@ public final class FieldMap implements Field {
     private final double maxFieldError_V_per_m;
     private final int mappedCells;
 
+    /** Most nodes a map may have (three arrays of doubles: about 100 MB). */
+    public static final int MAX_NODES = 4_000_000;
+
+    /**
+     * The number of nodes of a map over [zMin, zMax] x [0, rMax] with this step, computed in floating point so that
+     * a tiny step gives a huge number (never an overflowed one); infinity for a step that is not positive.
+     */
+    public static double nodeCount(double zMin_m, double zMax_m, double rMax_m, double step_m) {
+        if (!(step_m > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return (Math.max(1, Math.ceil((zMax_m - zMin_m) / step_m)) + 1) * (Math.max(1, Math.ceil(rMax_m / step_m)) + 1);
+    }
+
+    /** Node spacings per mapped radius when no step is given: the default step is a fortieth of the bore. */
+    public static final int STEPS_PER_BORE = 40;
+
+    /** The default node spacing for a map out to this bore radius, m. */
+    public static double defaultStep_m(double bore_m) {
+        return bore_m / STEPS_PER_BORE;
+    }
+
+    /**
+     * The z range of a map for rays traced from startZ to endZ: four steps beyond each end, inside the geometry's
+     * region, m ({zMin, zMax}).
+     */
+    public static double[] zRange_m(ElectrodeGeometry geometry, double startZ_m, double endZ_m, double step_m) {
+        return new double[] {Math.max(geometry.regionZMin_m(), Math.min(startZ_m, endZ_m) - 4 * step_m),
+                Math.min(geometry.regionZMax_m(), endZ_m + 4 * step_m)};
+    }
+
+    /**
+     * The map every ray bundle uses (trace command, plan figure, window table): the difference of the solved field
+     * from its near-axis series, from four steps before the start to four after the end, out to the bore.
+     *
+     * @param field    the solved field at its biases
+     * @param geometry the electrodes
+     * @param startZ_m where the rays start, m
+     * @param endZ_m   where they end (screen), m
+     * @param bore_m   outer radius of the map (the narrowest open bore), m
+     * @param step_m   node spacing, m (see {@link #defaultStep_m(double)})
+     * @param progress told about the nodes done; may cancel
+     */
+    public static FieldMap forRays(BiasedField field, ElectrodeGeometry geometry, double startZ_m, double endZ_m,
+            double bore_m, double step_m, TraceProgress progress) {
+        double[] z = zRange_m(geometry, startZ_m, endZ_m, step_m);
+        return new FieldMap(field, new NearAxisField(field), geometry, z[0], z[1], bore_m, step_m, progress);
+    }
+
     /**
      * Builds the map (in parallel).
      *
@@ -53,20 +103,6 @@ public final class FieldMap implements Field {
      * @param step_m   largest node spacing, m
      * @param progress told about the fraction done as rays (done, total) = (nodes done, nodes); may cancel
      */
-    /** Most nodes a map may have (three arrays of doubles: about 100 MB). */
-    public static final int MAX_NODES = 4_000_000;
-
-    /**
-     * The number of nodes of a map over [zMin, zMax] x [0, rMax] with this step, computed in floating point so that
-     * a tiny step gives a huge number (never an overflowed one); infinity for a step that is not positive.
-     */
-    public static double nodeCount(double zMin_m, double zMax_m, double rMax_m, double step_m) {
-        if (!(step_m > 0)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        return (Math.max(1, Math.ceil((zMax_m - zMin_m) / step_m)) + 1) * (Math.max(1, Math.ceil(rMax_m / step_m)) + 1);
-    }
-
     public FieldMap(Field source, Field base, ElectrodeGeometry geometry, double zMin_m, double zMax_m,
             double rMax_m, double step_m, TraceProgress progress) {
         if (!(zMax_m > zMin_m) || !(rMax_m > 0) || !(step_m > 0) || !Double.isFinite(zMax_m - zMin_m + rMax_m)) {

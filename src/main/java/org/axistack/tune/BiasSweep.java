@@ -98,11 +98,10 @@ public final class BiasSweep {
         }
         double cs = Double.NaN;
         double cc = Double.NaN;
-        if (c.kind() != CardinalElements.Kind.AFOCAL) {
-            Aberrations ab = finiteObject && Double.isFinite(im.imageZ_m())
-                    ? optics.aberrations(objectZ_m.getAsDouble()) : optics.aberrations();
-            cs = ab.sphericalImage_m();
-            cc = ab.chromaticImage_m();
+        java.util.Optional<Aberrations> ab = optics.quotedAberrations(java.util.Optional.ofNullable(im));
+        if (ab.isPresent()) {
+            cs = ab.get().sphericalImage_m();
+            cc = ab.get().chromaticImage_m();
         }
         return new SweepPoint(bias_V, "ok", c.focalLengthObject_m(), c.focalLengthImage_m(), c.focalPointObjectZ_m(),
                 c.focalPointImageZ_m(), c.principalPlaneObjectZ_m(), c.principalPlaneImageZ_m(), imageZ, m, cs, cc, realImageZ,

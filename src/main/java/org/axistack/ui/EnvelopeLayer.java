@@ -41,7 +41,7 @@ public record EnvelopeLayer(double current_A, double emittance_m_rad, double rad
 
     /** The request for a stack: parallel start at the beam's start plane. */
     public EnvelopeRequest request(Stack stack) {
-        return new EnvelopeRequest(current_A, new EnvelopeStart.RadiusSlope(radiusFraction * LiveRays.bore_m(stack),
+        return new EnvelopeRequest(current_A, new EnvelopeStart.RadiusSlope(radiusFraction * stack.openBore_m(),
                 0, new Emittance(emittance_m_rad, Emittance.Measure.EDGE, Emittance.Frame.GEOMETRIC_AT_START)),
                 OptionalDouble.empty(), OptionalDouble.empty());
     }

@@ -91,19 +91,10 @@ public final class LiveRays {
         return t.start().dirX() == 0 ? new double[] {1, -1} : new double[] {1};
     }
 
-    /** Narrowest open bore of the stack, m (half the largest radius if nothing is open). */
-    public static double bore_m(Stack s) {
-        double b = s.electrodes().stream().mapToDouble(e -> e.contour().minR_m()).filter(r -> r > 0).min().orElse(0);
-        if (b == 0) {
-            b = s.electrodes().stream().mapToDouble(e -> e.contour().maxR_m()).max().orElseThrow() / 2;
-        }
-        return b;
-    }
-
     /** The rays' start set for a stack. */
     static RaySet raySet(Stack stack, ElectrodeGeometry geometry, TraceTargets targets) {
         Beam beam = stack.beam();
-        double bore = bore_m(stack);
+        double bore = stack.openBore_m();
         if (beam.objectZ_m().isPresent()) {
             double z0 = beam.objectZ_m().getAsDouble();
             double distance = Math.max(stack.minZ_m() - z0, bore);

@@ -115,11 +115,11 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
             }
             rows.add(new Row("optics error estimate (of f)", String.format(java.util.Locale.ROOT, "%.1e", c.errorEstimate()),
                     c.errorEstimate() > org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED ? Level.CAUTION : Level.PLAIN));
-            if (c.kind() != CardinalElements.Kind.AFOCAL) {
-                Aberrations ab = optics.aberrations();
+            // the same object position as the plan and optics outputs (image side)
+            optics.quotedAberrations(img).ifPresent(ab -> {
                 rows.add(mm(CS, ab.sphericalImage_m()));
                 rows.add(mm(CC, ab.chromaticImage_m()));
-            }
+            });
         } catch (RuntimeException e) {
             problem = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
             rows.add(new Row("optics", "not available: " + problem, Level.CAUTION));

@@ -9,7 +9,6 @@ import org.axistack.trace.BundleResult;
 import org.axistack.trace.BundleTracer;
 import org.axistack.trace.ElectrodeGeometry;
 import org.axistack.trace.FieldMap;
-import org.axistack.trace.NearAxisField;
 import org.axistack.trace.RaySet;
 import org.axistack.trace.RaySets;
 import org.axistack.trace.TraceProgress;
@@ -38,7 +37,7 @@ public final class TableBundle {
      */
     public static BundleResult trace(Stack stack, BiasedField field, TraceProgress progress) {
         ElectrodeGeometry geometry = ElectrodeGeometry.of(stack);
-        double bore = LiveRays.bore_m(stack);
+        double bore = stack.openBore_m();
         double start = stack.beam().startZ_m().orElse(stack.minZ_m());
         double screen = stack.screenZ_m().orElse(stack.maxZ_m());
         List<Double> planes = new ArrayList<>();
@@ -49,10 +48,7 @@ public final class TableBundle {
         planes.add(screen);
         TraceTargets targets = new TraceTargets(planes, screen);
         RaySet rays = RaySets.uniformDisk(stack.beam().particle(), stack.beam().energy_eV(), start, 0.4 * bore, RAYS, 1);
-        double step = bore / 40;
-        double z0 = Math.max(geometry.regionZMin_m(), Math.min(start, screen) - 4 * step);
-        double z1 = Math.min(geometry.regionZMax_m(), screen + 4 * step);
-        FieldMap map = new FieldMap(field, new NearAxisField(field), geometry, z0, z1, bore, step, progress);
+        FieldMap map = FieldMap.forRays(field, geometry, start, screen, bore, FieldMap.defaultStep_m(bore), progress);
         Tracer tracer = new Tracer(map, geometry, TraceSettings.defaults());
         return BundleTracer.perCore(tracer).trace(rays, targets, progress);
     }
