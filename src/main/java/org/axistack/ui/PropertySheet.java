@@ -71,6 +71,8 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
     public static final String MAGNIFICATION = "magnification";
     public static final String CS = "spherical aberration Cs (mm)";
     public static final String CC = "chromatic aberration Cc (mm)";
+    public static final String CS_OBJECT = "Cs, object side, for the object point (mm)";
+    public static final String CC_OBJECT = "Cc, object side, for the object point (mm)";
 
     /** Computes the sheet for the stack (with the biases of the field) and its field. */
     public static PropertySheet of(Stack stack, BiasedField field) {
@@ -119,6 +121,8 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
             optics.quotedAberrations(img).ifPresent(ab -> {
                 rows.add(mm(CS, ab.sphericalImage_m()));
                 rows.add(mm(CC, ab.chromaticImage_m()));
+                ab.sphericalObject_m().ifPresent(cs -> rows.add(mm(CS_OBJECT, cs)));
+                ab.chromaticObject_m().ifPresent(cc -> rows.add(mm(CC_OBJECT, cc)));
             });
         } catch (RuntimeException e) {
             problem = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();

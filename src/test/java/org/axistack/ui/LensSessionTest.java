@@ -54,6 +54,26 @@ class LensSessionTest {
     }
 
     @Test
+    void windowQuotesCsAndCcForTheStacksObjectAsThePlanDoes() {
+        // an object 60 mm before the lens: the window quotes, beside the image-side Cs and Cc, the object-side ones
+        // for that object, as plan and optics do (the object side is chosen in one place)
+        double zObject = stack.minZ_m() - 0.06;
+        Stack withObject = stack.withBeam(stack.beam().withObjectZ_m(java.util.OptionalDouble.of(zObject)));
+        LensSession s = LensSession.open(withObject, SolveProgress.NONE);
+        ParaxialOptics optics = ParaxialOptics.of(s.solution().withBiases(withObject.biases_V()), withObject);
+        var forObject = optics.aberrations(zObject);
+        LensView v = s.view(withObject.biases_V());
+        assertThat(v.properties().value(PropertySheet.CS))
+                .contains(UiFormat.num(Units.mToMm(forObject.sphericalImage_m())));
+        assertThat(v.properties().value(PropertySheet.CS_OBJECT))
+                .contains(UiFormat.num(Units.mToMm(forObject.sphericalObject_m().getAsDouble())));
+        assertThat(v.properties().value(PropertySheet.CC_OBJECT))
+                .contains(UiFormat.num(Units.mToMm(forObject.chromaticObject_m().getAsDouble())));
+        // the stored stack has no object: no object-side rows
+        assertThat(session.view(stack.biases_V()).properties().value(PropertySheet.CS_OBJECT)).isEmpty();
+    }
+
+    @Test
     void trajectoryTableHasEveryRayAtEveryPlaneAndCancelWritesNothing(@org.junit.jupiter.api.io.TempDir Path dir)
             throws Exception {
         var field = session.solution().biased();
