@@ -1,12 +1,14 @@
 package org.axistack.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.Locale;
 
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.plan.PlanFormat;
+import org.axistack.tune.GapMargins;
 import org.axistack.tune.SurfaceFields;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
@@ -40,6 +42,7 @@ final class PlanSummary {
                     + " V, " + p.sweep().stream().filter(x -> x.ok()).count() + " usable (sweep.png, sweep.csv)");
         }
         surfaceFields(w, p);
+        gaps(w, p);
         if (!p.checks().isEmpty()) {
             long passed = p.checks().stream().filter(CheckResult::passed).count();
             w.println("Verification: " + passed + " of " + p.checks().size() + " closed-form cases within tolerance"
@@ -134,6 +137,24 @@ final class PlanSummary {
                         100 * r.peak().field_V_per_m() / s.limits().comfort_V_per_m(), r.verdict(),
                         PlanFormat.num(Units.mToMm(r.peak().z_m())), PlanFormat.num(Units.mToMm(r.peak().r_m()))));
             }
+        }
+    }
+
+    private static void gaps(PrintWriter w, LensPlan p) {
+        Stack s = p.stack();
+        List<GapMargins.Row> rows = GapMargins.of(s);
+        w.println("Gaps between facing electrodes (gap rule: " + GapMargins.ruleWords(s.limits().gapRule())
+                + "; common practice, no single source):");
+        if (rows.isEmpty()) {
+            w.println("  no facing electrodes with a voltage between them");
+        }
+        for (GapMargins.Row r : rows) {
+            w.println(String.format(Locale.ROOT, "  %-24s gap %s mm, %s V across (%s V/mm average), %5.1f%% of the "
+                    + "comfort voltage %s V: %s  (at z = %s, r = %s mm)", r.pair(), PlanFormat.num(r.gap().gap_m() * 1e3),
+                    PlanFormat.num(r.voltage_V()), PlanFormat.num(Units.vPerMToVPerMm(r.averageField_V_per_m())),
+                    r.percentOfComfort(), PlanFormat.num(Math.rint(r.comfort_V())), r.check().words(),
+                    PlanFormat.num(0.5e3 * (r.gap().from().z_m() + r.gap().to().z_m())),
+                    PlanFormat.num(0.5e3 * (r.gap().from().r_m() + r.gap().to().r_m()))));
         }
     }
 

@@ -197,7 +197,7 @@ final class TuneCommand implements Callable<Integer> {
         double c = comfort_V_per_mm != null ? Units.vPerMmToVPerM(comfort_V_per_mm) : stack.limits().comfort_V_per_m();
         double a = aggressive_V_per_mm != null ? Units.vPerMmToVPerM(aggressive_V_per_mm) : stack.limits().aggressive_V_per_m();
         try {
-            return stack.withLimits(new SurfaceFieldLimits(c, a));
+            return stack.withLimits(new SurfaceFieldLimits(c, a, stack.limits().gapRule()));
         } catch (IllegalArgumentException e) {
             throw new CommandLine.ParameterException(cl, "surface-field limits: need 0 < comfort <= aggressive (V/mm)");
         }

@@ -125,6 +125,11 @@ public enum StackMessage {
             + " field if the beam really starts there), or remove it"),
     LIMITS_ORDER("the aggressive limit ({aggressive} V/mm) is below the comfort limit ({comfort} V/mm)",
             "make aggressive_surface_field_V_per_mm at least comfort_surface_field_V_per_mm"),
+    GAP_LIMITS_ORDER("the gap rule's aggressive voltage at 1 mm ({aggressive} V) is below its comfort voltage ({comfort} V)",
+            "make gap_aggressive_V_at_1mm at least gap_comfort_V_at_1mm"),
+    GAP_EXPONENT_RANGE("gap_exponent must be greater than 0 and at most 1, found {value}",
+            "give the exponent of the rule V = V1 x (gap / 1 mm)^exponent, for example 0.5 (common practice for vacuum "
+            + "gaps above about a millimetre); 1 means a constant average field, more would let wide gaps hold more field"),
     SET_SYNTAX("--set '{arg}' is not of the form NAME=VOLTS",
             "write for example --set focus=-1400"),
     SET_UNKNOWN_NAME("--set names electrode '{name}', which the stack does not have{suggestion}",

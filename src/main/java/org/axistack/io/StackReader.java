@@ -26,6 +26,7 @@ import org.axistack.model.MeshSettings;
 import org.axistack.model.Particle;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
+import org.axistack.model.GapRule;
 import org.axistack.model.SurfaceFieldLimits;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
@@ -303,7 +304,8 @@ public final class StackReader {
 
     private static SurfaceFieldLimits limits(TableFields l) throws StackInputException {
         String ck = "comfort_surface_field_V_per_mm", ak = "aggressive_surface_field_V_per_mm";
-        l.rejectUnknown(List.of(ck, ak));
+        String gc = "gap_comfort_V_at_1mm", ga = "gap_aggressive_V_at_1mm", ge = "gap_exponent";
+        l.rejectUnknown(List.of(ck, ak, gc, ga, ge));
         double comfort = Units.vPerMToVPerMm(SurfaceFieldLimits.DEFAULT_COMFORT_V_PER_M);
         double aggressive = Units.vPerMToVPerMm(SurfaceFieldLimits.DEFAULT_AGGRESSIVE_V_PER_M);
         if (l.has(ck)) {
@@ -316,7 +318,30 @@ public final class StackReader {
             throw l.error(StackMessage.LIMITS_ORDER, l.has(ak) ? ak : ck,
                     Map.of("aggressive", fmt(aggressive), "comfort", fmt(comfort)));
         }
-        return new SurfaceFieldLimits(Units.vPerMmToVPerM(comfort), Units.vPerMmToVPerM(aggressive));
+        GapRule d = GapRule.defaults();
+        double gapComfort = l.has(gc) ? positiveVoltage(l, gc, "5000.0") : d.comfortAt1mm_V();
+        double gapAggressive = l.has(ga) ? positiveVoltage(l, ga, "10000.0") : d.aggressiveAt1mm_V();
+        if (gapAggressive < gapComfort) {
+            throw l.error(StackMessage.GAP_LIMITS_ORDER, l.has(ga) ? ga : gc,
+                    Map.of("aggressive", fmt(gapAggressive), "comfort", fmt(gapComfort)));
+        }
+        double exponent = d.exponent();
+        if (l.has(ge)) {
+            exponent = l.toNumber(l.table().get(List.of(ge)), ge, "0.5", -1);
+            if (!(exponent > 0) || exponent > 1) {
+                throw l.error(StackMessage.GAP_EXPONENT_RANGE, ge, Map.of("value", fmt(exponent)));
+            }
+        }
+        return new SurfaceFieldLimits(Units.vPerMmToVPerM(comfort), Units.vPerMmToVPerM(aggressive),
+                new GapRule(gapComfort, gapAggressive, exponent));
+    }
+
+    private static double positiveVoltage(TableFields l, String key, String example) throws StackInputException {
+        double x = l.toNumber(l.table().get(List.of(key)), key, example, -1);
+        if (!(x > 0)) {
+            throw l.error(StackMessage.NOT_POSITIVE, key, Map.of("unit", "V", "value", fmt(x), "example", example));
+        }
+        return l.checkRange(x, key, "V", 0, Limits.MAX_BIAS_V, example, l.line(key));
     }
 
     private static double positiveField(TableFields l, String key, String example) throws StackInputException {

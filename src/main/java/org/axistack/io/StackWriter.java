@@ -60,6 +60,11 @@ public final class StackWriter {
                     .append(num(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())))
                     .append("\naggressive_surface_field_V_per_mm = ")
                     .append(num(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))).append('\n');
+            if (!s.limits().gapRule().equals(org.axistack.model.GapRule.defaults())) {
+                sb.append("gap_comfort_V_at_1mm = ").append(num(s.limits().gapRule().comfortAt1mm_V()))
+                        .append("\ngap_aggressive_V_at_1mm = ").append(num(s.limits().gapRule().aggressiveAt1mm_V()))
+                        .append("\ngap_exponent = ").append(num(s.limits().gapRule().exponent())).append('\n');
+            }
         }
         return sb.toString();
     }

@@ -33,6 +33,7 @@ import org.axistack.trace.Trajectory;
 import org.axistack.tune.BiasRange;
 import org.axistack.tune.BiasSweep;
 import org.axistack.tune.FocusSensitivity;
+import org.axistack.tune.GapMargins;
 import org.axistack.tune.SurfaceFieldCheck;
 import org.axistack.tune.SurfaceFields;
 import org.axistack.tune.SweepPoint;
@@ -160,6 +161,12 @@ public final class PlanAnalysis {
         List<String> warnings = new ArrayList<>();
         BiasedField field = solution.withBiases(stack.biases_V());
         surfaceFieldWarnings(stack, field, warnings);
+        for (GapMargins.Row g : GapMargins.of(stack)) {
+            String w = GapMargins.warning(g);
+            if (w != null) {
+                warnings.add(w);
+            }
+        }
 
         announce(progress, "paraxial optics and aberrations", share.optics);
         Optics o = Optics.of(stack, field, warnings);

@@ -154,6 +154,7 @@ public final class HtmlReport {
                             + "Table: sweep.csv.</p>\n");
         }
         PlanSections.surfaceFields(b, plan);
+        PlanSections.gaps(b, plan);
         PlanSections.capacitance(b, plan);
         b.append("<h2>Axial potential</h2>\n<img src=\"axial.png\" alt=\"V, V' and V'' on the axis\">\n");
         b.append("<h2>Beam envelope</h2>\n");

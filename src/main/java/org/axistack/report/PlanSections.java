@@ -14,6 +14,7 @@ import org.axistack.optics.SpotSizeBudget;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
+import org.axistack.tune.GapMargins;
 import org.axistack.tune.SurfaceFields;
 import org.axistack.tune.TuneResult;
 
@@ -149,9 +150,9 @@ final class PlanSections {
             SurfaceFields.Row r = assessed.get(i);
             double max = r.peak().field_V_per_m();
             rows.add(List.of(r.name(), HtmlReport.num(s.electrodes().get(i).bias_V()),
-                    r.peak().sharp() ? Html.esc(r.describe()) : HtmlReport.field(max, r.check()),
+                    r.peak().sharp() ? r.describe() : HtmlReport.field(max, r.check()),
                     r.peak().sharp() ? "-" : Html.g(max / s.limits().comfort_V_per_m() * 100),
-                    Html.esc(r.verdict()), Html.g(r.peak().z_m() * 1e3), Html.g(r.peak().r_m() * 1e3), Html.g(q[i] * 1e12)));
+                    r.verdict(), Html.g(r.peak().z_m() * 1e3), Html.g(r.peak().r_m() * 1e3), Html.g(q[i] * 1e12)));
         }
         b.append("<h2>Electrode surface fields</h2>\n");
         b.append(Html.table(List.of("electrode", "bias (V)", "largest surface field (V/mm)", "% of comfort limit",
@@ -164,6 +165,32 @@ final class PlanSections {
                 + "at a sharp corner the field has no finite limit and the table says so instead of giving a number.</p>%n",
                 HtmlReport.num(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())),
                 HtmlReport.num(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))));
+    }
+
+    static void gaps(StringBuilder b, LensPlan plan) {
+        Stack s = plan.stack();
+        List<List<String>> rows = new ArrayList<>();
+        for (GapMargins.Row r : GapMargins.of(s)) {
+            rows.add(List.of(r.pair(), Html.trim(r.gap().gap_m() * 1e3), HtmlReport.num(r.voltage_V()),
+                    Html.trim(r.averageField_V_per_m() * 1e-3), HtmlReport.num(Math.rint(r.comfort_V())),
+                    HtmlReport.num(Math.rint(r.aggressive_V())), HtmlReport.mark(r.check()) + Html.trim(r.percentOfComfort()),
+                    r.check().words(),
+                    Html.trim(0.5e3 * (r.gap().from().z_m() + r.gap().to().z_m())),
+                    Html.trim(0.5e3 * (r.gap().from().r_m() + r.gap().to().r_m()))));
+        }
+        b.append("<h2>Gaps between facing electrodes</h2>\n");
+        if (rows.isEmpty()) {
+            b.append("<p>No facing electrodes have a voltage between them.</p>\n");
+        } else {
+            b.append(Html.table(List.of("electrodes", "gap (mm)", "voltage across (V)", "average field (V/mm)",
+                    "comfort voltage (V)", "aggressive voltage (V)", "% of comfort voltage", "against the gap rule",
+                    "middle of the gap z (mm)", "r (mm)"), rows));
+        }
+        b.append(String.format(Locale.ROOT, "<p class=\"note\">Gap: the shortest straight line between two electrodes "
+                + "that no third electrode blocks (pairs shielded by another electrode and pairs at the same bias are left "
+                + "out). A wide vacuum gap holds less field than a narrow one; the gap rule of the stack (%s; common "
+                + "practice, no single source; set in [limits]) gives the voltage each gap may carry. Below about 1 mm the "
+                + "surface-field limits above are the ones that bind.</p>%n", Html.esc(GapMargins.ruleWords(s.limits().gapRule()))));
     }
 
     static void capacitance(StringBuilder b, LensPlan plan) {

@@ -76,6 +76,16 @@ final class PlanTables {
         }
         t.put("surface_fields.csv", csv(List.of("electrode", "bias_V", "max_surface_field_V_per_mm", "at_z_mm", "at_r_mm",
                 "sharp_corner_unbounded", "comfort_limit_V_per_mm", "aggressive_limit_V_per_mm", "charge_pC"), sf));
+        List<List<Object>> gr = new ArrayList<>();
+        for (org.axistack.tune.GapMargins.Row r : org.axistack.tune.GapMargins.of(s)) {
+            gr.add(List.of(r.first(), r.second(), Units.mToMm(r.gap().gap_m()), r.voltage_V(),
+                    Units.vPerMToVPerMm(r.averageField_V_per_m()), r.comfort_V(), r.aggressive_V(), r.percentOfComfort(),
+                    r.check().name().toLowerCase(java.util.Locale.ROOT), Units.mToMm(r.gap().from().z_m()),
+                    Units.mToMm(r.gap().from().r_m()), Units.mToMm(r.gap().to().z_m()), Units.mToMm(r.gap().to().r_m())));
+        }
+        t.put("gaps.csv", csv(List.of("first_electrode", "second_electrode", "gap_mm", "voltage_across_V",
+                "average_field_V_per_mm", "comfort_voltage_V", "aggressive_voltage_V", "percent_of_comfort_voltage",
+                "verdict", "first_end_z_mm", "first_end_r_mm", "second_end_z_mm", "second_end_r_mm"), gr));
         double[][] cap = plan.solution().capacitanceMatrix_F();
         List<String> head = new ArrayList<>();
         head.add("electrode");

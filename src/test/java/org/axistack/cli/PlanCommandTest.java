@@ -25,10 +25,11 @@ class PlanCommandTest {
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("Flood-gun einzel lens", "built-in demo", "IEC 61010-1", "Cardinal elements (lens converging", "Aberrations: Cs =", "Spot-size budget",
                 "Focusing bias", "focus = ", "Supply-stability budget (focus held within +/- 0.1 mm", "mm/V  noise/drift +/- ",
-                "Surface fields", "Report: ", SafetyNotice.TITLE);
+                "Surface fields", "Gaps between facing electrodes", "inlet - focus", "gap 1 mm, 120 V across", "Report: ",
+                SafetyNotice.TITLE);
         assertThat(r.err()).contains("field solve: done, 100%", "plan: beam envelope");
         for (String f : new String[] {"report.html", "geometry.png", "geometry.svg", "axial.png", "axial.svg",
-            "envelope.png", "axial.csv", "cardinal.csv", "surface_fields.csv", "capacitance.csv", "spot_budget.csv",
+            "envelope.png", "axial.csv", "cardinal.csv", "surface_fields.csv", "gaps.csv", "capacitance.csv", "spot_budget.csv",
             "focus_biases.csv", "supply_budget.csv", "sweep.csv", "sweep.png", "stack.toml"}) {
             assertThat(out.resolve(f)).as(f).isNotEmptyFile();
         }
@@ -37,7 +38,7 @@ class PlanCommandTest {
         assertThat(png.getHeight()).isBetween(420, 900);
         assertThat(Files.readString(out.resolve("geometry.svg"))).startsWith("<?xml").contains("<svg").contains("-120 V");
         String html = Files.readString(out.resolve("report.html"));
-        assertThat(html).contains("<h2>Cardinal elements</h2>", "<h2>Electrode surface fields</h2>",
+        assertThat(html).contains("<h2>Cardinal elements</h2>", "<h2>Electrode surface fields</h2>", "<h2>Gaps between facing electrodes</h2>",
                 "<h2>Capacitance matrix (pF)</h2>", "<h2>Method and stated accuracy</h2>", "<h2>Inputs</h2>",
                 "[[electrode]]", SafetyNotice.TITLE, "<h2>Focus-bias sweep</h2>", "Not run (plan --no-check)",
                 "<h2>Supply-stability budget</h2>");

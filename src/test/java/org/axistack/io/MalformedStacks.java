@@ -210,6 +210,12 @@ final class MalformedStacks {
         add(c, "mesh key misspelt", append("[mesh]\nedge_level = 10\n"), UNKNOWN_KEY, 22, "edge_level", "did you mean 'edge_levels'");
         add(c, "limits in the wrong order", append("[limits]\ncomfort_surface_field_V_per_mm = 8000.0\naggressive_surface_field_V_per_mm = 4000.0\n"),
                 LIMITS_ORDER, 23, "aggressive_surface_field_V_per_mm", "below the comfort limit");
+        add(c, "gap rule limits in the wrong order", append("[limits]\ngap_comfort_V_at_1mm = 8000.0\ngap_aggressive_V_at_1mm = 6000.0\n"),
+                GAP_LIMITS_ORDER, 23, "gap_aggressive_V_at_1mm", "below its comfort voltage");
+        add(c, "gap rule exponent above 1", append("[limits]\ngap_exponent = 1.5\n"), GAP_EXPONENT_RANGE, 22, "gap_exponent", "at most 1");
+        add(c, "gap rule exponent zero", append("[limits]\ngap_exponent = 0.0\n"), GAP_EXPONENT_RANGE, 22, "gap_exponent", "found 0");
+        add(c, "gap rule voltage negative", append("[limits]\ngap_comfort_V_at_1mm = -5000.0\n"), NOT_POSITIVE, 22, "gap_comfort_V_at_1mm", "V");
+        add(c, "gap rule key misspelt", append("[limits]\ngap_exponant = 0.5\n"), UNKNOWN_KEY, 22, "gap_exponant", "did you mean 'gap_exponent'");
         add(c, "negative comfort limit", append("[limits]\ncomfort_surface_field_V_per_mm = -1.0\n"), NOT_POSITIVE, 22, "comfort_surface_field_V_per_mm", "V/mm");
         add(c, "screen z is nan", append("[screen]\nz_mm = nan\n"), NOT_FINITE, 22, "z_mm", "NaN");
         add(c, "screen key without unit", append("[screen]\nz = 40.0\n"), UNKNOWN_KEY, 22, "z", "did you mean 'z_mm'");

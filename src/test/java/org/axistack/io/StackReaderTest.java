@@ -8,8 +8,10 @@ import java.nio.file.Path;
 import org.axistack.model.Codata2018;
 import org.axistack.model.Contour;
 import org.axistack.model.Electrode;
+import org.axistack.model.GapRule;
 import org.axistack.model.Segment;
 import org.axistack.model.Stack;
+import org.axistack.model.SurfaceFieldLimits;
 import org.axistack.model.ZR;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -97,6 +99,17 @@ class StackReaderTest {
 
         Stack again = StackReader.parse(StackWriter.toToml(s), "again.toml");
         assertThat(again).isEqualTo(s);
+    }
+
+    @Test
+    void gapRuleSettingsAreReadAndWrittenBack() throws Exception {
+        Stack s = StackReader.parse(MalformedStacks.append("[limits]\ngap_comfort_V_at_1mm = 4000.0\n"
+                + "gap_aggressive_V_at_1mm = 9000.0\ngap_exponent = 0.4\n"), "gaps.toml");
+        assertThat(s.limits().gapRule()).isEqualTo(new GapRule(4000, 9000, 0.4));
+        assertThat(s.limits().comfort_V_per_m()).isEqualTo(SurfaceFieldLimits.DEFAULT_COMFORT_V_PER_M);
+        assertThat(StackReader.parse(StackWriter.toToml(s), "again.toml")).isEqualTo(s);
+        // the defaults when [limits] leaves the rule out
+        assertThat(StackReader.parse(MalformedStacks.BASE, "base.toml").limits().gapRule()).isEqualTo(GapRule.defaults());
     }
 
     @Test
