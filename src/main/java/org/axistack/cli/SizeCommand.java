@@ -187,7 +187,7 @@ final class SizeCommand implements Callable<Integer> {
             List<String> wins = res.best().entrySet().stream().filter(x -> x.getValue().equals(d))
                     .map(x -> x.getKey().keyword()).toList();
             String title = req.title() + " (sized: best for " + String.join(", ", wins) + ")";
-            st = new Stack(title, st.beam(), st.electrodes(), st.screenZ_m(), st.mesh(), st.limits());
+            st = st.withTitle(title);
             Path p = AtomicFiles.inside(dir, e.getValue());
             StackWriter.write(st, p);
             written.add(p + "  (best for " + String.join(", ", wins) + ")");

@@ -123,6 +123,15 @@ public enum StackMessage {
     START_AFTER_LENS("the beam starts at z = {start} mm, at or after the end of the lens (its last electrode ends at"
             + " z = {end} mm)", "set start_z_mm before the lens (upstream of the first electrode, or inside the lens"
             + " field if the beam really starts there), or remove it"),
+    START_OFFSET_OUTSIDE_BORE("the beam starts {offset} mm from the axis, not inside the narrowest bore ({bore} mm,"
+            + " electrode '{name}')", "give start_x_mm and start_y_mm so that the start lies well inside every bore"
+            + " (the steering analyses are first order: offsets of a small fraction of the bore)"),
+    DUPLICATE_MONITOR("the monitor name '{name}' is already used by the monitor at line {other}",
+            "give each [[monitor]] its own name, or leave name out"),
+    MONITOR_BEFORE_START("the monitor plane z = {z} mm is not after the beam start (start_z_mm = {start} mm)",
+            "put monitors downstream of the beam start, or move start_z_mm upstream"),
+    TOO_MANY_MONITORS("the stack has {count} [[monitor]] tables, more than the limit of {limit}",
+            "keep the planes the bench really watches"),
     LIMITS_ORDER("the aggressive limit ({aggressive} V/mm) is below the comfort limit ({comfort} V/mm)",
             "make aggressive_surface_field_V_per_mm at least comfort_surface_field_V_per_mm"),
     GAP_LIMITS_ORDER("the gap rule's aggressive voltage at 1 mm ({aggressive} V) is below its comfort voltage ({comfort} V)",

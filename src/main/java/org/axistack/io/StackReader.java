@@ -23,10 +23,12 @@ import org.axistack.model.Beam;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
 import org.axistack.model.MeshSettings;
+import org.axistack.model.Monitor;
 import org.axistack.model.Particle;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 import org.axistack.model.GapRule;
+import org.axistack.model.StartRay;
 import org.axistack.model.SurfaceFieldLimits;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
@@ -43,9 +45,14 @@ import org.tomlj.TomlTable;
  */
 public final class StackReader {
 
-    static final List<String> TOP_KEYS = List.of("title", "beam", "electrode", "screen", "mesh", "limits");
+    static final List<String> TOP_KEYS = List.of("title", "beam", "electrode", "screen", "mesh", "limits",
+            "monitor");
     static final List<String> BEAM_KEYS = List.of("particle", "energy_eV", "mass_u", "charge_state", "start_z_mm",
-            "object_z_mm");
+            "object_z_mm", "start_x_mm", "start_y_mm", "start_slope_x_mrad", "start_slope_y_mrad");
+    /** Largest start slope accepted, mrad: the central-ray analyses are paraxial (first order in the slope). */
+    static final double MAX_START_SLOPE_MRAD = 100;
+    /** Most monitor planes in a stack. */
+    static final int MAX_MONITORS = 50;
     static final List<String> PARTICLES = List.of("electron", "proton", "ion");
 
     private StackReader() {
@@ -215,6 +222,9 @@ public final class StackReader {
                     fmt(Units.mToMm(beam.startZ_m().getAsDouble())), "end", fmt(Units.mToMm(lensEnd))));
         }
 
+        startRayInsideBore(beam, electrodes, new TableFields(source, beamTable, "[beam]", lineOf(toml, "beam")));
+        List<Monitor> monitors = monitors(toml, top, beam);
+
         OptionalDouble screen = OptionalDouble.empty();
         TomlTable screenTable = table(top, "screen", false, "[screen]");
         if (screenTable != null) {
@@ -238,7 +248,7 @@ public final class StackReader {
         if (limTable != null) {
             limits = limits(new TableFields(source, limTable, "[limits]", lineOf(toml, "limits")));
         }
-        return new Stack(title == null ? "" : title, beam, electrodes, screen, mesh, limits, sectors);
+        return new Stack(title == null ? "" : title, beam, electrodes, screen, mesh, limits, sectors, monitors);
     }
 
     static TomlTable table(TableFields top, String key, boolean required, String label)
@@ -298,8 +308,77 @@ public final class StackReader {
         b.checkRange(energy, "energy_eV", "eV", 1e-6, Limits.MAX_ENERGY_EV, "500.0", b.line("energy_eV"));
         Double start = b.has("start_z_mm") ? b.requirePosition("start_z_mm", "-40.0") : null;
         Double object = b.has("object_z_mm") ? b.requirePosition("object_z_mm", "-80.0") : null;
+        double x = b.has("start_x_mm") ? b.requirePosition("start_x_mm", "0.2") : 0;
+        double y = b.has("start_y_mm") ? b.requirePosition("start_y_mm", "-0.1") : 0;
+        double sx = b.has("start_slope_x_mrad") ? b.requireNumber("start_slope_x_mrad", "mrad", -MAX_START_SLOPE_MRAD,
+                MAX_START_SLOPE_MRAD, "1.5") : 0;
+        double sy = b.has("start_slope_y_mrad") ? b.requireNumber("start_slope_y_mrad", "mrad", -MAX_START_SLOPE_MRAD,
+                MAX_START_SLOPE_MRAD, "-0.5") : 0;
         return new Beam(p, energy, start == null ? OptionalDouble.empty() : OptionalDouble.of(Units.mmToM(start)),
-                object == null ? OptionalDouble.empty() : OptionalDouble.of(Units.mmToM(object)));
+                object == null ? OptionalDouble.empty() : OptionalDouble.of(Units.mmToM(object)),
+                new StartRay(Units.mmToM(x), Units.mmToM(y), Units.mradToRad(sx), Units.mradToRad(sy)));
+    }
+
+    /**
+     * The central ray must start inside the narrowest bore of the electrodes around the axis (else every
+     * steering answer is about a beam that cannot pass).
+     */
+    private static void startRayInsideBore(Beam beam, List<Electrode> electrodes, TableFields b)
+            throws StackInputException {
+        double off = beam.startRay().radius_m();
+        if (off == 0) {
+            return;
+        }
+        Electrode narrowest = null;
+        for (Electrode e : electrodes) {
+            double r = e.contour().minR_m();
+            if (r > 0 && (narrowest == null || r < narrowest.contour().minR_m())) {
+                narrowest = e;
+            }
+        }
+        if (narrowest != null && !(off < narrowest.contour().minR_m())) {
+            String key = b.has("start_x_mm") ? "start_x_mm" : "start_y_mm";
+            throw b.error(StackMessage.START_OFFSET_OUTSIDE_BORE, key, Map.of("offset", fmt(Units.mToMm(off)),
+                    "bore", fmt(Units.mToMm(narrowest.contour().minR_m())), "name", narrowest.name()));
+        }
+    }
+
+    /** The [[monitor]] planes: z_mm and an optional name, unique names, not before the beam start. */
+    private static List<Monitor> monitors(TomlParseResult toml, TableFields top, Beam beam)
+            throws StackInputException {
+        Object v = toml.get(List.of("monitor"));
+        if (v == null) {
+            return List.of();
+        }
+        if (!(v instanceof TomlArray arr) || !allTables(arr)) {
+            throw top.error(StackMessage.WRONG_TYPE, "monitor", Map.of("expected", "[[monitor]] tables (double brackets)",
+                    "found", TableFields.typeName(v), "example", "[[monitor]] followed by z_mm = 120.0 and an optional name"));
+        }
+        if (arr.size() > MAX_MONITORS) {
+            throw top.error(StackMessage.TOO_MANY_MONITORS, "monitor", Map.of("count", arr.size(), "limit", MAX_MONITORS));
+        }
+        List<Monitor> list = new ArrayList<>();
+        Map<String, Integer> seen = new HashMap<>();
+        for (int i = 0; i < arr.size(); i++) {
+            int line = arr.inputPositionOf(i) == null ? 0 : arr.inputPositionOf(i).line();
+            TableFields t = new TableFields(top.source(), arr.getTable(i), "[[monitor]]", line);
+            t.rejectUnknown(List.of("z_mm", "name"));
+            double z = Units.mmToM(t.requirePosition("z_mm", "120.0"));
+            String name = t.optionalString("name", "\"viewer\"");
+            name = name == null ? "" : name.strip();
+            if (!name.isEmpty()) {
+                Integer other = seen.putIfAbsent(name, line);
+                if (other != null) {
+                    throw t.error(StackMessage.DUPLICATE_MONITOR, "name", Map.of("name", name, "other", other));
+                }
+            }
+            if (beam.startZ_m().isPresent() && !(z > beam.startZ_m().getAsDouble())) {
+                throw t.error(StackMessage.MONITOR_BEFORE_START, "z_mm", Map.of("z", fmt(Units.mToMm(z)),
+                        "start", fmt(Units.mToMm(beam.startZ_m().getAsDouble()))));
+            }
+            list.add(new Monitor(name, z));
+        }
+        return list;
     }
 
     private static SurfaceFieldLimits limits(TableFields l) throws StackInputException {

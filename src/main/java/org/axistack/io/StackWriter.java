@@ -8,10 +8,12 @@ import org.axistack.model.Beam;
 import org.axistack.model.Codata2018;
 import org.axistack.model.Electrode;
 import org.axistack.model.MeshSettings;
+import org.axistack.model.Monitor;
 import org.axistack.model.Particle;
 import org.axistack.model.Segment;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
+import org.axistack.model.StartRay;
 import org.axistack.model.SurfaceFieldLimits;
 import org.axistack.model.ZR;
 
@@ -51,6 +53,13 @@ public final class StackWriter {
         if (s.screenZ_m().isPresent()) {
             sb.append("\n[screen]\nz_mm = ").append(mm(s.screenZ_m().getAsDouble())).append('\n');
         }
+        for (Monitor m : s.monitors()) {
+            sb.append("\n[[monitor]]\n");
+            if (!m.name().isEmpty()) {
+                sb.append("name = ").append(quote(m.name())).append('\n');
+            }
+            sb.append("z_mm = ").append(mm(m.z_m())).append('\n');
+        }
         if (!s.mesh().equals(MeshSettings.defaults())) {
             sb.append("\n[mesh]\ntarget_elements = ").append(s.mesh().targetElements())
                     .append("\nedge_levels = ").append(s.mesh().edgeLevels()).append('\n');
@@ -87,6 +96,19 @@ public final class StackWriter {
         }
         if (b.objectZ_m().isPresent()) {
             sb.append("object_z_mm = ").append(mm(b.objectZ_m().getAsDouble())).append('\n');
+        }
+        StartRay r = b.startRay();
+        if (r.x_m() != 0) {
+            sb.append("start_x_mm = ").append(mm(r.x_m())).append('\n');
+        }
+        if (r.y_m() != 0) {
+            sb.append("start_y_mm = ").append(mm(r.y_m())).append('\n');
+        }
+        if (r.slopeX_rad() != 0) {
+            sb.append("start_slope_x_mrad = ").append(num(Units.radToMrad(r.slopeX_rad()))).append('\n');
+        }
+        if (r.slopeY_rad() != 0) {
+            sb.append("start_slope_y_mrad = ").append(num(Units.radToMrad(r.slopeY_rad()))).append('\n');
         }
     }
 

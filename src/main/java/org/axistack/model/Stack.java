@@ -18,9 +18,10 @@ import java.util.Set;
  * @param limits     surface-field limits for breakdown warnings
  * @param sectors    split electrodes by name (empty: every electrode round); a split electrode's bias_V is the
  *                   mean of its sector biases (set here), its round part
+ * @param monitors   planes where the beam position is watched (bench monitors), in the order given
  */
 public record Stack(String title, Beam beam, List<Electrode> electrodes, OptionalDouble screenZ_m,
-        MeshSettings mesh, SurfaceFieldLimits limits, Map<String, Sectors> sectors) {
+        MeshSettings mesh, SurfaceFieldLimits limits, Map<String, Sectors> sectors, List<Monitor> monitors) {
 
     public Stack {
         title = title == null ? "" : title;
@@ -57,11 +58,17 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
             }
             electrodes = List.copyOf(list);
         }
+        monitors = monitors == null ? List.of() : List.copyOf(monitors);
+    }
+
+    public Stack(String title, Beam beam, List<Electrode> electrodes, OptionalDouble screenZ_m, MeshSettings mesh,
+            SurfaceFieldLimits limits, Map<String, Sectors> sectors) {
+        this(title, beam, electrodes, screenZ_m, mesh, limits, sectors, List.of());
     }
 
     public Stack(String title, Beam beam, List<Electrode> electrodes, OptionalDouble screenZ_m, MeshSettings mesh,
             SurfaceFieldLimits limits) {
-        this(title, beam, electrodes, screenZ_m, mesh, limits, Map.of());
+        this(title, beam, electrodes, screenZ_m, mesh, limits, Map.of(), List.of());
     }
 
     public Stack(String title, Beam beam, List<Electrode> electrodes) {
@@ -73,7 +80,23 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         electrode(name);
         Map<String, Sectors> m = new java.util.LinkedHashMap<>(sectors);
         m.put(name, s);
-        return new Stack(title, beam, electrodes, screenZ_m, mesh, limits, m);
+        return new Stack(title, beam, electrodes, screenZ_m, mesh, limits, m, monitors);
+    }
+
+    /** The stack with another title (everything else kept). */
+    public Stack withTitle(String newTitle) {
+        return new Stack(newTitle, beam, electrodes, screenZ_m, mesh, limits, sectors, monitors);
+    }
+
+    /** The stack with other monitor planes. */
+    public Stack withMonitors(List<Monitor> newMonitors) {
+        return new Stack(title, beam, electrodes, screenZ_m, mesh, limits, sectors, newMonitors);
+    }
+
+    /** Label of monitor i: its name, or "monitor i+1" when it has none. */
+    public String monitorLabel(int i) {
+        String n = monitors.get(i).name();
+        return n.isEmpty() ? "monitor " + (i + 1) : n;
     }
 
     public int indexOf(String electrodeName) {
@@ -115,7 +138,7 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         for (String n : biases_V.keySet()) {
             electrode(n);
         }
-        return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list));
+        return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list), monitors);
     }
 
     public Stack withBiases(double[] biases_V) {
@@ -126,19 +149,19 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         for (int i = 0; i < biases_V.length; i++) {
             list.add(electrodes.get(i).withBias_V(biases_V[i]));
         }
-        return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list));
+        return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list), monitors);
     }
 
     public Stack withBeam(Beam newBeam) {
-        return new Stack(title, newBeam, electrodes, screenZ_m, mesh, limits, sectors);
+        return new Stack(title, newBeam, electrodes, screenZ_m, mesh, limits, sectors, monitors);
     }
 
     public Stack withMesh(MeshSettings newMesh) {
-        return new Stack(title, beam, electrodes, screenZ_m, newMesh, limits, sectors);
+        return new Stack(title, beam, electrodes, screenZ_m, newMesh, limits, sectors, monitors);
     }
 
     public Stack withLimits(SurfaceFieldLimits newLimits) {
-        return new Stack(title, beam, electrodes, screenZ_m, mesh, newLimits, sectors);
+        return new Stack(title, beam, electrodes, screenZ_m, mesh, newLimits, sectors, monitors);
     }
 
     /**
@@ -170,11 +193,16 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
 
     private Stack transformed(java.util.function.UnaryOperator<Electrode> e, java.util.function.DoubleUnaryOperator z) {
         List<Electrode> list = electrodes.stream().map(e).toList();
-        Beam b = new Beam(beam.particle(), beam.energy_eV(), map(beam.startZ_m(), z), map(beam.objectZ_m(), z));
         double k = Math.abs(z.applyAsDouble(1) - z.applyAsDouble(0));
+        // offsets scale with the lengths; a reflection z -> -z turns the slopes over
+        double turn = Math.signum(z.applyAsDouble(1) - z.applyAsDouble(0));
+        StartRay r = beam.startRay();
+        Beam b = new Beam(beam.particle(), beam.energy_eV(), map(beam.startZ_m(), z), map(beam.objectZ_m(), z),
+                new StartRay(r.x_m() * k, r.y_m() * k, turn * r.slopeX_rad(), turn * r.slopeY_rad()));
         Map<String, Sectors> m = new java.util.LinkedHashMap<>();
         sectors.forEach((n, s) -> m.put(n, s.scaled(k)));
-        return new Stack(title, b, list, map(screenZ_m, z), mesh, limits, m);
+        List<Monitor> mon = monitors.stream().map(x -> new Monitor(x.name(), z.applyAsDouble(x.z_m()))).toList();
+        return new Stack(title, b, list, map(screenZ_m, z), mesh, limits, m, mon);
     }
 
     /**

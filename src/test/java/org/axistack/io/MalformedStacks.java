@@ -167,6 +167,18 @@ final class MalformedStacks {
                 OUT_OF_RANGE, 21, "sectors", "17");
         add(c, "sector bias not a number", replaceB("shape = \"tube\"\nradius_mm = 5.0\nz_start_mm = 1.0\nz_end_mm = 20.0\nsectors = 2\nsector_biases_V = [1.0, \"x\"]"),
                 WRONG_TYPE, 21, "sector_biases_V", "number");
+        // the central ray's start and the monitor planes
+        add(c, "start offset outside the bore", edit(BEAM_END, BEAM_END + "start_x_mm = 4.0\nstart_y_mm = 3.5\n"),
+                START_OFFSET_OUTSIDE_BORE, 5, "start_x_mm", "narrowest bore (5 mm, electrode 'a')");
+        add(c, "start slope beyond paraxial", edit(BEAM_END, BEAM_END + "start_slope_y_mrad = 150.0\n"),
+                OUT_OF_RANGE, 5, "start_slope_y_mrad", "150");
+        add(c, "two monitors with one name", append("[[monitor]]\nname = \"viewer\"\nz_mm = 30.0\n[[monitor]]\nname = \"viewer\"\nz_mm = 40.0\n"),
+                DUPLICATE_MONITOR, 25, "name", "line 21");
+        add(c, "monitor before the beam start", edit(BEAM_END, BEAM_END + "start_z_mm = -30.0\n") + "[[monitor]]\nz_mm = -40.0\n",
+                MONITOR_BEFORE_START, 23, "z_mm", "not after the beam start");
+        add(c, "monitor without a plane", append("[[monitor]]\nname = \"wire\"\n"), MISSING_KEY, 21, "z_mm", "z_mm");
+        add(c, "monitor given as a table", append("[monitor]\nz_mm = 30.0\n"), WRONG_TYPE, 21, "monitor", "[[monitor]]");
+        add(c, "too many monitors", append("[[monitor]]\nz_mm = 30.0\n".repeat(51)), TOO_MANY_MONITORS, 21, "monitor", "51");
         // geometry between electrodes
         add(c, "thick tubes overlapping", edit("z_end_mm = -1.0", "z_end_mm = 5.0\nwall_mm = 1.0").replace("z_end_mm = 20.0", "z_end_mm = 20.0\nwall_mm = 1.0"),
                 OVERLAP, 6, null, "overlap");
