@@ -5,6 +5,7 @@ import java.util.List;
 import org.axistack.mesh.BoundaryMesh;
 import org.axistack.model.Codata2018;
 import org.axistack.model.Electrode;
+import org.axistack.model.GeometryKey;
 import org.axistack.model.Stack;
 
 /**
@@ -100,6 +101,24 @@ public final class FieldSolution {
 
     public List<Electrode> electrodes() {
         return electrodes;
+    }
+
+    /** The geometry this solution was solved for (its electrodes at 0 V). */
+    public GeometryKey geometryKey() {
+        return new GeometryKey(electrodes);
+    }
+
+    /**
+     * Throws unless this solution was solved for the stack's geometry (same names, shapes and positions; biases
+     * may differ): the one check behind plan, tuning and sweeps.
+     *
+     * @throws IllegalArgumentException naming the remedy when the geometries differ
+     */
+    public void requireGeometryOf(Stack stack) {
+        if (!geometryKey().equals(stack.geometryKey())) {
+            throw new IllegalArgumentException("the field solution was made for other electrodes than the stack's;"
+                    + " solve the stack's own geometry first");
+        }
     }
 
     public BoundaryMesh mesh() {

@@ -152,6 +152,35 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         return new Stack(title, beam, list, screenZ_m, mesh, limits, shiftedSectors(list), monitors);
     }
 
+    /** The stack's biases as a value (electrodes and sectors). */
+    public Biases biases() {
+        return Biases.of(this);
+    }
+
+    /** The stack at other biases (same electrode names in the same order; sector biases for split electrodes). */
+    public Stack withBiases(Biases b) {
+        if (!b.names().equals(names())) {
+            throw new IllegalArgumentException("the biases name other electrodes than the stack's: " + b.names());
+        }
+        for (String n : b.sectors_V().keySet()) {
+            if (!sectors.containsKey(n)) {
+                throw new IllegalArgumentException("sector biases for electrode '" + n + "', which is not split");
+            }
+        }
+        List<Electrode> list = new ArrayList<>();
+        for (int i = 0; i < electrodes.size(); i++) {
+            list.add(electrodes.get(i).withBias_V(b.volts_V().get(i)));
+        }
+        Map<String, Sectors> m = new java.util.LinkedHashMap<>(shiftedSectors(list));
+        b.sectors_V().forEach((n, v) -> m.put(n, sectors.get(n).withBiases_V(v)));
+        return new Stack(title, beam, list, screenZ_m, mesh, limits, m);
+    }
+
+    /** What a field solution of this stack depends on besides the mesh (its electrodes at 0 V). */
+    public GeometryKey geometryKey() {
+        return GeometryKey.of(this);
+    }
+
     public Stack withBeam(Beam newBeam) {
         return new Stack(title, newBeam, electrodes, screenZ_m, mesh, limits, sectors, monitors);
     }

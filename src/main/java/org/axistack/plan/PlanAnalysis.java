@@ -138,21 +138,8 @@ public final class PlanAnalysis {
      * @throws CancellationException    when progress cancels
      */
     public static LensPlan run(Stack stack, String source, Settings s, FieldSolution solution, Progress progress) {
-        requireSameGeometry(stack, solution);
+        solution.requireGeometryOf(stack);
         return analyse(stack, source, s, solution, progress, System.nanoTime());
-    }
-
-    private static void requireSameGeometry(Stack stack, FieldSolution solution) {
-        List<Electrode> a = stack.electrodes();
-        List<Electrode> b = solution.electrodes();
-        boolean same = a.size() == b.size();
-        for (int i = 0; same && i < a.size(); i++) {
-            same = a.get(i).withBias_V(0).equals(b.get(i).withBias_V(0));
-        }
-        if (!same) {
-            throw new IllegalArgumentException("the field solution was made for other electrodes than the stack's;"
-                    + " solve the stack's own geometry first");
-        }
     }
 
     private static LensPlan analyse(Stack stack, String source, Settings s, FieldSolution solution, Progress progress,

@@ -9,6 +9,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
 
 import org.axistack.field.FieldSolution;
+import org.axistack.model.Biases;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;
@@ -50,7 +51,7 @@ public final class BiasSweep {
         if (steps < 1 || !Double.isFinite(from_V) || !Double.isFinite(to_V) || from_V == to_V) {
             throw new IllegalArgumentException("a sweep needs finite, different ends and at least one step");
         }
-        double[] base = stack.biases_V();
+        Biases base = stack.biases();
         int n = steps + 1;
         SweepPoint[] out = new SweepPoint[n];
         AtomicInteger done = new AtomicInteger();
@@ -60,8 +61,7 @@ public final class BiasSweep {
                 return;
             }
             double v = i == steps ? to_V : from_V + (to_V - from_V) * i / steps;
-            double[] b = base.clone();
-            b[index] = v;
+            double[] b = base.with(electrode, v).toArray_V();
             out[i] = point(solution, stack, b, v, objectZ_m);
             int k = done.incrementAndGet();
             if (!progress.update(k, n)) {

@@ -10,6 +10,7 @@ import java.util.function.DoubleFunction;
 import java.util.stream.IntStream;
 
 import org.axistack.field.FieldSolution;
+import org.axistack.model.Biases;
 import org.axistack.model.Stack;
 import org.axistack.optics.TransferMatrix;
 import org.hipparchus.analysis.solvers.AllowedSolution;
@@ -48,9 +49,7 @@ public final class BiasTuner {
      * @param stack    the stack (its biases are the starting biases of every electrode not varied)
      */
     public BiasTuner(FieldSolution solution, Stack stack) {
-        if (solution.electrodes().size() != stack.electrodes().size()) {
-            throw new IllegalArgumentException("the field solution belongs to a different stack");
-        }
+        solution.requireGeometryOf(stack);
         this.solution = solution;
         this.stack = stack;
     }
@@ -72,10 +71,10 @@ public final class BiasTuner {
         }
         FocusProbe coarse = new FocusProbe(solution, stack, target, FocusProbe.scanSettings());
         FocusProbe fine = new FocusProbe(solution, stack, target);
-        double[] base = stack.biases_V();
+        Biases base = stack.biases();
         AtomicInteger count = new AtomicInteger();
-        DoubleFunction<FocusProbe.Point> scanEval = v -> coarse.at(with(base, index, v, count));
-        DoubleFunction<FocusProbe.Point> fineEval = v -> fine.at(with(base, index, v, count));
+        DoubleFunction<FocusProbe.Point> scanEval = v -> coarse.at(with(base, electrode, v, count));
+        DoubleFunction<FocusProbe.Point> fineEval = v -> fine.at(with(base, electrode, v, count));
         TreeMap<Double, FocusProbe.Point> scan = new TreeMap<>();
         double[] grid = new double[SCAN_POINTS];
         for (int i = 0; i < SCAN_POINTS; i++) {
@@ -173,11 +172,9 @@ public final class BiasTuner {
         }
     }
 
-    private static double[] with(double[] base, int index, double v, AtomicInteger count) {
+    private static double[] with(Biases base, String electrode, double v, AtomicInteger count) {
         count.incrementAndGet();
-        double[] b = base.clone();
-        b[index] = v;
-        return b;
+        return base.with(electrode, v).toArray_V();
     }
 
     /**

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.axistack.field.FieldSolution;
+import org.axistack.model.Biases;
 import org.axistack.model.Stack;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
@@ -40,9 +41,7 @@ public final class PairTuner {
     private final Stack stack;
 
     public PairTuner(FieldSolution solution, Stack stack) {
-        if (solution.electrodes().size() != stack.electrodes().size()) {
-            throw new IllegalArgumentException("the field solution belongs to a different stack");
-        }
+        solution.requireGeometryOf(stack);
         this.solution = solution;
         this.stack = stack;
     }
@@ -89,7 +88,7 @@ public final class PairTuner {
             throw new IllegalArgumentException("a magnification needs a finite object position");
         }
         FocusProbe probe = new FocusProbe(solution, stack, target);
-        double[] base = stack.biases_V();
+        Biases base = stack.biases();
         int[] count = {0};
         double[][][] res = new double[GRID][GRID][];
         double[] g1 = new double[GRID];
@@ -149,7 +148,7 @@ public final class PairTuner {
         return new PairResult(first, second, target, condition, firstRange, secondRange, solutions, nearest, count[0]);
     }
 
-    private PairSolution describe(FocusProbe probe, double[] base, int i1, int i2, double[] x, String first,
+    private PairSolution describe(FocusProbe probe, Biases base, int i1, int i2, double[] x, String first,
             SecondCondition condition, FocusTarget target) {
         FocusProbe.Point p = probe.at(biases(base, i1, i2, x[0], x[1]));
         FocusSolution focus = BiasTuner.describe(stack, first, i1, p, target);
@@ -173,15 +172,12 @@ public final class PairTuner {
         return Math.hypot(r[0], r[1]);
     }
 
-    private static double[] biases(double[] base, int i1, int i2, double v1, double v2) {
-        double[] b = base.clone();
-        b[i1] = v1;
-        b[i2] = v2;
-        return b;
+    private static double[] biases(Biases base, int i1, int i2, double v1, double v2) {
+        return base.with(base.names().get(i1), v1).with(base.names().get(i2), v2).toArray_V();
     }
 
     /** The two residuals, or null when the beam turns back. */
-    private static double[] residuals(FocusProbe probe, double[] base, int i1, int i2, double v1, double v2,
+    private static double[] residuals(FocusProbe probe, Biases base, int i1, int i2, double v1, double v2,
             SecondCondition condition, FocusTarget target, int[] count) {
         count[0]++;
         FocusProbe.Point p = probe.at(biases(base, i1, i2, v1, v2));
@@ -196,7 +192,7 @@ public final class PairTuner {
      * the centre and half-width of a range; a bounded minimum then is a stationary point in t); a forward-difference
      * Jacobian. Returns {v1, v2, residual norm}, or the best point reached if it stops early, or null.
      */
-    private static double[] refine(FocusProbe probe, double[] base, int i1, int i2, double[] start,
+    private static double[] refine(FocusProbe probe, Biases base, int i1, int i2, double[] start,
             SecondCondition condition, FocusTarget target, int[] count, BiasRange r1, BiasRange r2) {
         double c1 = 0.5 * (r1.from_V() + r1.to_V());
         double c2 = 0.5 * (r2.from_V() + r2.to_V());

@@ -33,4 +33,20 @@ class DemoTuneTest {
             assertThat(Math.abs(f2 - 0.035)).isLessThan(1e-9);
         }
     }
+
+    @Test
+    void tunersRefuseASolutionOfAnotherGeometryWithAsManyElectrodes() {
+        // the demo with its last electrode 1 mm longer: same count and names, another geometry
+        Stack stack = SolvedDemo.STACK;
+        java.util.List<org.axistack.model.Electrode> es = new java.util.ArrayList<>(stack.electrodes());
+        int last = es.size() - 1;
+        es.set(last, es.get(last).scaled(1.001));
+        Stack other = new Stack(stack.title(), stack.beam(), es, stack.screenZ_m(), stack.mesh(), stack.limits());
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> new BiasTuner(SolvedDemo.SOLUTION, other))
+                .hasMessageContaining("other electrodes");
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> new PairTuner(SolvedDemo.SOLUTION, other))
+                .hasMessageContaining("other electrodes");
+        // the same geometry at other biases is accepted
+        new BiasTuner(SolvedDemo.SOLUTION, stack.withBiases(new double[stack.electrodes().size()]));
+    }
 }
