@@ -10,6 +10,7 @@ import java.util.concurrent.Callable;
 
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
+import org.axistack.field.CapacitanceCheck;
 import org.axistack.field.FieldSolution;
 import org.axistack.io.StackInputException;
 import org.axistack.io.Units;
@@ -91,6 +92,12 @@ final class FieldCommand implements Callable<Integer> {
             }
             m.put("electrodes", es);
             m.put("capacitance_matrix_F", cap);
+            CapacitanceCheck check = solution.capacitanceCheck();
+            Map<String, Object> cm = new LinkedHashMap<>();
+            cm.put("largest_asymmetry", check.asymmetry());
+            cm.put("largest_off_diagonal_relative", check.offDiagonal());
+            cm.put("warning", check.warned() ? check.message(stack.electrodes()) : null);
+            m.put("capacitance_check", cm);
             List<Map<String, Object>> ax = new ArrayList<>();
             for (double[] row : table) {
                 Map<String, Object> am = new LinkedHashMap<>();
@@ -131,6 +138,13 @@ final class FieldCommand implements Callable<Integer> {
                 sb.append(String.format(Locale.ROOT, " %12.6g", c * 1e12));
             }
             out.println(sb);
+        }
+        CapacitanceCheck check = solution.capacitanceCheck();
+        if (check.warned()) {
+            out.println("  WARNING: " + check.message(stack.electrodes()) + ".");
+        } else if (cap.length > 1) {
+            out.printf(Locale.ROOT, "  checked: symmetric to %.0e (reciprocity), off-diagonal terms negative%n",
+                    Math.max(check.asymmetry(), 1e-16));
         }
         out.println();
         out.printf(Locale.ROOT, "  %10s %16s %18s%n", "z_mm", "potential_V", "field_z_V_per_mm");

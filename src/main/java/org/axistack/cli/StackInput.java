@@ -8,7 +8,6 @@ import org.axistack.io.BuiltInStacks;
 import org.axistack.io.StackInputException;
 import org.axistack.io.StackReader;
 import org.axistack.model.Stack;
-import picocli.CommandLine;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -19,7 +18,8 @@ import picocli.CommandLine.Parameters;
 public final class StackInput {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "STACK",
-            description = "Stack file (TOML, lengths in mm). Omitted: the built-in demo lens where the command allows it.")
+            description = "Stack file (TOML, lengths in mm); optional: when omitted, the built-in demo lens"
+                    + " (lens-library/" + BuiltInStacks.DEMO_FILE + ") is used.")
     Path stack;
 
     @Option(names = "--set", paramLabel = "NAME=VOLTS",
@@ -40,13 +40,5 @@ public final class StackInput {
     public Stack loadOrDemo() throws StackInputException {
         Stack s = stack == null ? BuiltInStacks.demo() : StackReader.read(stack);
         return BiasOverrides.apply(s, sets);
-    }
-
-    /** Loads STACK, which is required, and applies --set. */
-    public Stack load(CommandLine cl) throws StackInputException {
-        if (stack == null) {
-            throw new CommandLine.ParameterException(cl, "Missing required parameter: 'STACK'");
-        }
-        return BiasOverrides.apply(StackReader.read(stack), sets);
     }
 }

@@ -45,7 +45,12 @@ public final class BemSolver {
         return Math.min(byHeap, MeshSettings.MAX_ELEMENTS);
     }
 
-    /** Meshes and solves. */
+    /**
+     * Meshes and solves.
+     *
+     * @throws MeshException if the stack cannot be meshed, the system is singular, or the solved capacitance
+     *                       matrix breaks reciprocity or the sign law badly ({@link CapacitanceCheck#refused()})
+     */
     public static FieldSolution solve(List<Electrode> electrodes, MeshSettings settings, SolveProgress progress) {
         long t0 = System.nanoTime();
         BoundaryMesh mesh;
@@ -109,9 +114,14 @@ public final class BemSolver {
             }
         }
         double seconds = (System.nanoTime() - t0) * 1e-9;
+        FieldSolution solution = new FieldSolution(electrodes, mesh, quad, bounds, unit, residual, seconds,
+                assembleSeconds, mirrorHalves);
+        CapacitanceCheck check = solution.capacitanceCheck();
+        if (check.refused()) {
+            throw new MeshException(check.message(electrodes));
+        }
         progress.update("done", 1.0);
-        return new FieldSolution(electrodes, mesh, quad, bounds, unit, residual, seconds, assembleSeconds,
-                mirrorHalves);
+        return solution;
     }
 
     /** An azimuthally integrated ring kernel, (1/2pi) Int cos(m u)/|x - x'| du for one harmonic m, 1/m. */

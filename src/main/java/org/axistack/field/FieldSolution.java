@@ -161,6 +161,11 @@ public final class FieldSolution {
         return assembleSeconds;
     }
 
+    /** The capacitance matrix held against reciprocity and the sign law (worst pair). */
+    public CapacitanceCheck capacitanceCheck() {
+        return CapacitanceCheck.of(capacitance);
+    }
+
     /**
      * Capacitance matrix, F: entry [i][j] is the charge on electrode i per volt on electrode j, all others at
      * 0 V (potential 0 at infinity).

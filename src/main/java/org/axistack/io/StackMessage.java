@@ -25,6 +25,9 @@ public enum StackMessage {
             "a stack needs far fewer values; check that this is the right file, or describe outlines with fewer points"),
     NOT_UTF8("the file contains bytes that are not UTF-8 text (first bad byte at offset {offset})",
             "save the file as plain UTF-8 text"),
+    CR_LINE_ENDINGS("{which} with a carriage return alone (the old Mac OS line ending), which TOML does not accept",
+            "save the file with Unix (LF) or Windows (CR LF) line endings: most editors have a line-ending setting,"
+                    + " or convert it with  tr '\\r' '\\n' < old.toml > new.toml"),
     EMPTY_FILE("the file is empty",
             "copy a stack from lens-library/ and edit it; a stack needs a [beam] table and at least one [[electrode]]"),
     NOT_TOML("the file is not valid TOML: {detail}",

@@ -177,6 +177,11 @@ public final class StackReader {
         int line = 1, lineStart = 0, commas = 0;
         for (int i = 0; i <= text.length(); i++) {
             char c = i < text.length() ? text.charAt(i) : '\n';
+            if (c == '\r' && (i + 1 >= text.length() || text.charAt(i + 1) != '\n')) {
+                boolean all = text.indexOf('\n') < 0;
+                throw new StackInputException(StackMessage.CR_LINE_ENDINGS, source, line, null, null,
+                        Map.of("which", all ? "every line ends" : "this line ends"));
+            }
             if (c == ',') {
                 commas++;
             } else if (c == '\n') {

@@ -17,7 +17,8 @@ import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
  * d^beta, beta = pi/theta - 1 for an exterior angle theta: -1/2 at a thin edge, -1/3 at a right-angle
  * corner; J. D. Jackson, Classical Electrodynamics, 3rd ed., sec. 2.11). The panel touching a singular
  * point gets the power map of {@link Panel}; the uniform size is chosen so that the total number of
- * nodes meets the settings' target.
+ * nodes meets the settings' target. Panels facing another electrode across a narrow, uneven gap are then
+ * bisected ({@link GapRefinement}); those few extra panels come on top of the target.
  */
 public final class Mesher {
 
@@ -63,6 +64,7 @@ public final class Mesher {
         for (SegPlan p : plans) {
             cut(p, h, levels, totalLength, panels);
         }
+        panels = GapRefinement.refine(panels, Math.min(1, h / (ARC_REFERENCE_SHARE * totalLength)));
         GaussIntegrator gauss = new GaussIntegratorFactory().legendre(ORDER, 0, 1);
         double[] tau = new double[ORDER];
         double[] w = new double[ORDER];

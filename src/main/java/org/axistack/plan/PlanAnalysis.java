@@ -147,6 +147,9 @@ public final class PlanAnalysis {
         Shares share = new Shares(s.runChecks());
         List<String> warnings = new ArrayList<>();
         BiasedField field = solution.withBiases(stack.biases_V());
+        if (solution.capacitanceCheck().warned()) {
+            warnings.add(solution.capacitanceCheck().message(stack.electrodes()));
+        }
         surfaceFieldWarnings(stack, field, warnings);
         for (GapMargins.Row g : GapMargins.of(stack)) {
             String w = GapMargins.warning(g);

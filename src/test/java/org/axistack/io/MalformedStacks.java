@@ -75,6 +75,8 @@ final class MalformedStacks {
         add(c, "empty file", "", EMPTY_FILE, 0, null, "empty");
         add(c, "blank lines only", "\n\n   \n\t\n", EMPTY_FILE, 0, null, "empty");
         add(c, "comments only", "# nothing here\n# still nothing\n", EMPTY_FILE, 0, null, "empty");
+        add(c, "old Mac line endings (CR only)", BASE.replace("\n", "\r"), CR_LINE_ENDINGS, 1, null, "every line ends with a carriage return alone");
+        add(c, "one CR-only line in a LF file", edit("[beam]\n", "[beam]\r"), CR_LINE_ENDINGS, 2, null, "this line ends");
         add(c, "HTML, not TOML", "<html><body>lens</body></html>\n", NOT_TOML, 1, null, "not valid TOML");
         add(c, "JSON, not TOML", "{\"beam\": {\"particle\": \"electron\"}}\n", NOT_TOML, 1, null, "not valid TOML");
         add(c, "truncated inside a string", BASE.substring(0, BASE.indexOf("name = \"b\"") + 9), NOT_TOML, 15, null, "TOML");
