@@ -5,9 +5,11 @@ import java.util.Map;
 /**
  * Bad input: a stack file or a command-line value that cannot be used. The message is one paragraph
  * naming the file, the line, the electrode and the field where known, what is wrong and how to fix it.
- * The text comes from the {@link StackMessage} catalogue.
+ * The text comes from the {@link StackMessage} catalogue. Unchecked, so that code between the reader and the
+ * command line need not declare it; the command line's handler turns it into the message and exit code 2 (methods
+ * that throw it still say so in their signatures, as documentation).
  */
-public final class StackInputException extends Exception {
+public final class StackInputException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
     private final StackMessage id;
