@@ -251,8 +251,34 @@ public final class PlanAnalysis {
         return 0.25 * stack.openBore_m();
     }
 
-    /** The electrode with the largest |bias| (null if all are 0 V). */
+    /**
+     * The electrode a user tunes for focus by default: the one with the largest |bias| among those whose bias
+     * differs from the biases of the electrodes at both ends of the stack (the first and the last in z; they set the
+     * beam's energy going in and coming out, so varying them changes the final energy rather than only the focus);
+     * when there is none, the one with the largest |bias| (null if all are 0 V).
+     */
     public static String strongest(Stack stack) {
+        Electrode first = stack.electrodes().get(0), last = first;
+        for (Electrode e : stack.electrodes()) {
+            if (e.contour().minZ_m() < first.contour().minZ_m()) {
+                first = e;
+            }
+            if (e.contour().maxZ_m() > last.contour().maxZ_m()) {
+                last = e;
+            }
+        }
+        String best = null;
+        double max = 0;
+        for (Electrode e : stack.electrodes()) {
+            if (e.bias_V() != first.bias_V() && e.bias_V() != last.bias_V() && Math.abs(e.bias_V()) > max) {
+                max = Math.abs(e.bias_V());
+                best = e.name();
+            }
+        }
+        return best != null ? best : largestBias(stack);
+    }
+
+    private static String largestBias(Stack stack) {
         String best = null;
         double max = 0;
         for (Electrode e : stack.electrodes()) {

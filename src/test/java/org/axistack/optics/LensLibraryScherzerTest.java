@@ -7,11 +7,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.stream.Stream;
 
-import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
-import org.axistack.field.SolveProgress;
-import org.axistack.io.StackReader;
 import org.axistack.model.Stack;
+import org.axistack.testing.LibrarySolutions;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
@@ -32,8 +30,9 @@ class LensLibraryScherzerTest {
     @ParameterizedTest
     @MethodSource("library")
     void everyLibraryLensHasPositiveCsAndCc(Path file) throws Exception {
-        Stack stack = StackReader.read(file);
-        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveProgress.NONE).biased();
+        LibrarySolutions.Solved solved = LibrarySolutions.of(file);
+        Stack stack = solved.stack();
+        BiasedField field = solved.solution().biased();
         ParaxialOptics optics = ParaxialOptics.of(field, stack);
         // a strong lens may cross the axis inside its field and look diverging asymptotically (the retarding
         // analyser lens does): the theorem still holds for its coefficients; only an afocal lens has none
