@@ -21,6 +21,7 @@ final class CommandList {
                 new SweepCommand(),
                 new ProbeCommand(),
                 new MisalignCommand(),
+                new AimCommand(),
                 new SizeCommand(),
                 new BenchCommand(),
                 new CheckCommand(),

@@ -7,6 +7,7 @@ import java.util.function.DoubleUnaryOperator;
 
 import org.axistack.field.SectorField;
 import org.axistack.model.Sectors;
+import org.axistack.model.StartRay;
 
 /**
  * Deflection of the central ray by the split electrodes of a stack, to first order in the sector biases: the
@@ -18,10 +19,21 @@ import org.axistack.model.Sectors;
 public final class SplitDeflection {
 
     /**
-     * Offset at a plane per volt of an electrode's x and y differential bias (the patterns cos(theta_s) and
-     * sin(theta_s) of {@link Sectors#fromDifferentials}), m/V.
+     * Offset and slope at a plane per volt of an electrode's x and y differential bias (the patterns cos(theta_s)
+     * and sin(theta_s) of {@link Sectors#fromDifferentials}), m/V and rad/V.
      */
-    public record PerVolt(int electrode, double xPerVx_m, double yPerVx_m, double xPerVy_m, double yPerVy_m) {
+    public record PerVolt(int electrode, double xPerVx_m, double yPerVx_m, double xPerVy_m, double yPerVy_m,
+            double slopeXPerVx_rad, double slopeYPerVx_rad, double slopeXPerVy_rad, double slopeYPerVy_rad) {
+
+        /** {x, y, x', y'} per volt of the x differential bias. */
+        public double[] perVx() {
+            return new double[] {xPerVx_m, yPerVx_m, slopeXPerVx_rad, slopeYPerVx_rad};
+        }
+
+        /** {x, y, x', y'} per volt of the y differential bias. */
+        public double[] perVy() {
+            return new double[] {xPerVy_m, yPerVy_m, slopeXPerVy_rad, slopeYPerVy_rad};
+        }
     }
 
     private final List<Integer> electrodes;
@@ -103,6 +115,20 @@ public final class SplitDeflection {
             response.slope_rad(plane, b)};
     }
 
+    /**
+     * {x, y, x', y'} of the central ray at plane p for the given sector biases when it starts with the given offset
+     * and slopes at the start plane (carried by the round lens), m and rad.
+     */
+    public double[] ray(int plane, Map<Integer, List<Double>> sectorBiases_V, StartRay start) {
+        double[] r = ray(plane, sectorBiases_V);
+        TransferMatrix t = response.entry(plane);
+        r[0] += t.height(start.x_m(), start.slopeX_rad());
+        r[1] += t.height(start.y_m(), start.slopeY_rad());
+        r[2] += t.slope(start.x_m(), start.slopeX_rad());
+        r[3] += t.slope(start.y_m(), start.slopeY_rad());
+        return r;
+    }
+
     /** Offset per volt of each differential bias of split electrode e at plane p. */
     public PerVolt perVolt(int plane, int electrode) {
         int i = electrodes.indexOf(electrode);
@@ -113,7 +139,9 @@ public final class SplitDeflection {
         double[] hx = s.harmonic(1, boxed(s.xPattern()));
         double[] hy = s.harmonic(1, boxed(s.yPattern()));
         double xi = response.unitOffset_m(plane, i);
-        return new PerVolt(electrode, hx[0] * xi, hx[1] * xi, hy[0] * xi, hy[1] * xi);
+        double si = response.unitSlope_rad(plane, i);
+        return new PerVolt(electrode, hx[0] * xi, hx[1] * xi, hy[0] * xi, hy[1] * xi, hx[0] * si, hx[1] * si,
+                hy[0] * si, hy[1] * si);
     }
 
     private static List<Double> boxed(double[] v) {
