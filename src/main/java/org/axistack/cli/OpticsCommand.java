@@ -33,8 +33,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code optics STACK [--object-z Z] [--json]}: solves the field, then prints the paraxial cardinal elements,
- * imaging of a finite object, and the spherical and chromatic aberration coefficients (keys of interface.md).
+ * {@code optics STACK [--object-z Z] [--object-height-mm H] [--aperture-mrad A] [--json]}: solves the field, then
+ * prints the paraxial cardinal elements, imaging of a finite object, the spherical and chromatic aberration
+ * coefficients (keys of interface.md) and, for a finite object, the off-axis third-order aberrations.
  * Exit 1 when the beam is reflected or the lens does not focus.
  */
 @Command(name = "optics", mixinStandardHelpOptions = true,
@@ -57,6 +58,14 @@ final class OpticsCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
     boolean json;
 
+    @Option(names = "--object-height-mm", paramLabel = "H",
+            description = "Object height in mm for the off-axis aberrations' effects (needs a finite object).")
+    Double objectHeight_mm;
+
+    @Option(names = "--aperture-mrad", paramLabel = "MRAD",
+            description = "Object-side aperture angle in mrad for the off-axis aberrations' blur (with --object-height-mm).")
+    Double aperture_mrad;
+
     @Option(names = "--accuracy", paramLabel = "REL", defaultValue = "1e-5",
             description = "Relative accuracy asked of the cardinal elements (default ${DEFAULT-VALUE} of f); exit 1 when"
                     + " the estimated error is larger.")
@@ -67,6 +76,18 @@ final class OpticsCommand implements Callable<Integer> {
         if (!(accuracy > 0 && accuracy < 1)) {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--accuracy must lie between 0 and 1 (a relative error, e.g. 1e-5), got " + accuracy);
+        }
+        if (objectHeight_mm != null && !(Double.isFinite(objectHeight_mm) && objectHeight_mm > 0)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--object-height-mm must be a positive number of millimetres, got " + objectHeight_mm);
+        }
+        if (aperture_mrad != null && !(Double.isFinite(aperture_mrad) && aperture_mrad > 0)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--aperture-mrad must be a positive angle in mrad, got " + aperture_mrad);
+        }
+        if (aperture_mrad != null && objectHeight_mm == null) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--aperture-mrad needs --object-height-mm (the off-axis blur depends on both)");
         }
         Stack stack = input.loadOrDemo();
         PrintWriter err = spec.commandLine().getErr();
@@ -106,6 +127,10 @@ final class OpticsCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
                     "--object-z %s mm lies at or after the lens (z = %s mm is %s); give an object before it",
                     PlanCommand.num(Units.mToMm(objectZ.getAsDouble())), PlanCommand.num(Units.mToMm(exit)), exitIs));
+        }
+        if (objectHeight_mm != null && objectZ.isEmpty()) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--object-height-mm needs a finite object: give --object-z or object_z_mm in the stack's [beam]");
         }
         CardinalElements c = optics.cardinal();
         out.put("reflected", false);
@@ -153,6 +178,10 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("spherical_aberration_poly_mm", mmArray(poly.spherical_m()));
             out.put("chromatic_aberration_poly_mm", mmArray(poly.chromatic_m()));
             out.put("aberration_poly_convention", poly.convention());
+            if (ab.objectZ_m().isPresent()) {
+                out.put("off_axis_aberrations", OffAxisOutput.map(optics.offAxisAberrations(ab.objectZ_m().getAsDouble()),
+                        objectHeight_mm, aperture_mrad));
+            }
         } else {
             out.put("spherical_aberration_mm", null);
             out.put("chromatic_aberration_mm", null);
@@ -244,6 +273,11 @@ final class OpticsCommand implements Callable<Integer> {
                 && out.get("chromatic_aberration_poly_mm") instanceof double[] cc) {
             w.println("  for any object before the lens: Cs_o = " + polynomial(cs) + " mm; Cc_o = " + polynomial(cc) + " mm");
             w.println("  (" + out.get("aberration_poly_convention") + ")");
+        }
+        if (out.get("off_axis_aberrations") instanceof Map<?, ?> offAxis) {
+            @SuppressWarnings("unchecked") // built by OffAxisOutput.map as Map<String, Object>
+            Map<String, Object> typed = (Map<String, Object>) offAxis;
+            OffAxisOutput.print(w, typed);
         }
         DeflectionOutput.print(w, out);
         for (Object warning : (java.util.List<?>) out.get("warnings")) {

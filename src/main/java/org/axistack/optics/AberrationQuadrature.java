@@ -12,7 +12,7 @@ import java.util.List;
  * side (a tube plane, a given plane) the field is taken as zero and nothing is integrated. The panels of every
  * part are doubled from 64 until each integral changes by less than 1e-10 of the largest integral of its group
  * (at most 8192 panels; the change reached is reported). {@link AberrationIntegrals}, {@link AberrationPolynomials}
- * and the off-axis integrals all integrate through here, so the tails are handled in this one place.
+ * and {@link OffAxisAberrations} all integrate through here, so the tails are handled in this one place.
  */
 final class AberrationQuadrature {
 

@@ -593,4 +593,14 @@ public final class ParaxialOptics {
         return java.util.Optional.of(imaging.filter(im -> im.objectZ_m() < zEnd_m() && Double.isFinite(im.imageZ_m()))
                 .map(im -> aberrations(im.objectZ_m())).orElseGet(this::aberrations));
     }
+
+    /**
+     * Third-order off-axis aberrations (coma, astigmatism, field curvature, distortion, Petzval) for a finite object
+     * at objectZ, see {@link OffAxisAberrations}.
+     *
+     * @throws IllegalArgumentException if the object is imaged to infinity
+     */
+    public OffAxisAberrations offAxisAberrations(double objectZ_m) {
+        return OffAxisAberrations.of(this, objectZ_m);
+    }
 }

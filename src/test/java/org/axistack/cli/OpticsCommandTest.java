@@ -27,7 +27,7 @@ class OpticsCommandTest {
      */
     @Test
     void jsonCarriesTheContractKeysAndHelmholtzLagrangeHolds() throws Exception {
-        Run r = run("optics", stack(), "--json", "--object-z=-80");
+        Run r = run("optics", stack(), "--json", "--object-z=-80", "--object-height-mm=0.5", "--aperture-mrad=4");
         assertThat(r.code()).as(r.err()).isZero();
         JsonNode j = new ObjectMapper().readTree(r.out());
         for (String key : new String[] {"object_z_mm", "focal_length_object_mm", "focal_length_image_mm",
@@ -69,6 +69,32 @@ class OpticsCommandTest {
         assertThat(csPoly).isCloseTo(csDirect, within(1e-8 * csDirect));
         assertThat(ccPoly).isCloseTo(ccDirect, within(1e-8 * ccDirect));
         assertThat(j.get("aberration_poly_convention").asText()).contains("1/M");
+        // off-axis aberrations (issue 18): C is the object-side Cs of the same object, P = F - 2A, and the effects at
+        // the image follow the convention's formulas (checked against tracing in optics.OffAxisAberrationsTest)
+        JsonNode o = j.get("off_axis_aberrations");
+        double m = j.get("magnification").asDouble();
+        assertThat(o.get("spherical_C_mm").asDouble()).isCloseTo(csDirect, within(1e-9 * csDirect));
+        assertThat(o.get("petzval_P_per_mm").asDouble()).isCloseTo(o.get("field_curvature_F_per_mm").asDouble()
+                - 2 * o.get("astigmatism_A_per_mm").asDouble(), within(1e-12));
+        double alpha = 4e-3;
+        double h = 0.5;
+        assertThat(o.get("spherical_um").asDouble()).isCloseTo(m * csDirect * alpha * alpha * alpha * 1e3,
+                within(1e-9 * Math.abs(m * csDirect * alpha * alpha * alpha * 1e3)));
+        double dist = m * o.get("distortion_D_per_mm2").asDouble() * h * h * h * 1e3;
+        assertThat(o.get("distortion_um").asDouble()).isCloseTo(dist, within(1e-9 * Math.abs(dist)));
+        double coma = 3 * m * o.get("coma_K").asDouble() * h * alpha * alpha * 1e3;
+        assertThat(o.get("coma_tangential_um").asDouble()).isCloseTo(coma, within(1e-9 * Math.abs(coma)));
+        assertThat(o.get("convention").asText()).contains("Petzval");
+    }
+
+    @Test
+    void offAxisOptionsAreCheckedBeforeTheSolve() throws Exception {
+        Run negative = run("optics", stack(), "--object-z=-80", "--object-height-mm=-1");
+        assertThat(negative.code()).isEqualTo(2);
+        assertThat(negative.err()).contains("--object-height-mm must be a positive");
+        Run alone = run("optics", stack(), "--object-z=-80", "--aperture-mrad=3");
+        assertThat(alone.code()).isEqualTo(2);
+        assertThat(alone.err()).contains("--aperture-mrad needs --object-height-mm");
     }
 
     @Test
