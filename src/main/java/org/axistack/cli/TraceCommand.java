@@ -443,6 +443,6 @@ final class TraceCommand implements Callable<Integer> {
     }
 
     private static String sci(double x) {
-        return String.format(Locale.ROOT, "%.2g", x);
+        return org.axistack.model.Numbers.general(x, 2);
     }
 }

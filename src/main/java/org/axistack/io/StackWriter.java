@@ -1,8 +1,6 @@
 package org.axistack.io;
 
 import java.io.IOException;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.nio.file.Path;
 import org.axistack.model.Beam;
 import org.axistack.model.Codata2018;
@@ -188,10 +186,7 @@ public final class StackWriter {
     }
 
     static String num(double x) {
-        if (x == 0) {
-            return "0.0";
-        }
-        String s = new BigDecimal(x).round(new MathContext(15)).stripTrailingZeros().toPlainString();
+        String s = org.axistack.model.Numbers.plain(x, org.axistack.model.Numbers.TOML_DIGITS);
         return s.contains(".") ? s : s + ".0";
     }
 

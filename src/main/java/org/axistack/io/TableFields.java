@@ -289,14 +289,14 @@ final class TableFields {
         if (!Double.isFinite(x)) {
             return String.valueOf(x);
         }
-        if (x == Math.rint(x) && Math.abs(x) < 1e15) {
+        if (org.axistack.model.Numbers.whole(x, 1e15)) {
             return String.valueOf((long) x);
         }
-        java.math.BigDecimal d = java.math.BigDecimal.valueOf(x);
         if (Math.abs(x) >= 1e-9 && Math.abs(x) < 1e15) {
-            return d.round(new java.math.MathContext(12)).stripTrailingZeros().toPlainString();
+            return org.axistack.model.Numbers.plain(x, org.axistack.model.Numbers.INPUT_DIGITS);
         }
-        return d.round(new java.math.MathContext(6)).toString().replace("E+", " x 10^").replace("E-", " x 10^-");
+        return java.math.BigDecimal.valueOf(x).round(new java.math.MathContext(org.axistack.model.Numbers.MESSAGE_DIGITS))
+                .toString().replace("E+", " x 10^").replace("E-", " x 10^-");
     }
 
     static List<String> keys(Set<String> s) {

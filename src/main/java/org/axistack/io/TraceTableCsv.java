@@ -67,9 +67,6 @@ public final class TraceTableCsv {
         if (!Double.isFinite(x)) {
             return "";
         }
-        if (x == 0) {
-            return "0";
-        }
-        return new java.math.BigDecimal(x).round(new java.math.MathContext(10)).stripTrailingZeros().toPlainString();
+        return org.axistack.model.Numbers.plain(x, org.axistack.model.Numbers.TABLE_DIGITS);
     }
 }

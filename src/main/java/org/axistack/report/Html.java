@@ -1,7 +1,7 @@
 package org.axistack.report;
 
 import java.util.List;
-import java.util.Locale;
+import org.axistack.model.Numbers;
 
 /** Small helpers for the report's hand-written HTML: escaping, tables and number formats. */
 final class Html {
@@ -55,7 +55,7 @@ final class Html {
         if (!Double.isFinite(x)) {
             return "-";
         }
-        return String.format(Locale.ROOT, "%.6g", x);
+        return Numbers.general(x, Numbers.REPORT_DIGITS);
     }
 
     /** Six significant digits without trailing zeros ("0.1", "2500"), "-" for NaN or infinite. */
@@ -66,13 +66,13 @@ final class Html {
         if (x == 0) {
             return "0";
         }
-        return String.format(Locale.ROOT, "%.6g", x).replaceAll("(\\.\\d*?)0+(e|$)", "$1$2").replaceAll("\\.(e|$)", "$1");
+        return Numbers.trimZeros(Numbers.general(x, Numbers.REPORT_DIGITS));
     }
 
     static String sci(double x) {
         if (!Double.isFinite(x)) {
             return "-";
         }
-        return String.format(Locale.ROOT, "%.2e", x);
+        return Numbers.scientific(x, 2);
     }
 }

@@ -221,10 +221,10 @@ public final class HtmlReport {
     }
 
     static String num(double x) {
-        if (x == Math.rint(x) && Math.abs(x) < 1e12) {
+        if (org.axistack.model.Numbers.whole(x, 1e12)) {
             return String.valueOf((long) x);
         }
-        return String.format(Locale.ROOT, "%.6g", x);
+        return org.axistack.model.Numbers.general(x, org.axistack.model.Numbers.REPORT_DIGITS);
     }
 
     static String mm(double z_m) {

@@ -1,8 +1,6 @@
 package org.axistack.report;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
-import java.util.Locale;
+import org.axistack.model.Numbers;
 
 /**
  * Figures rounded to what their accuracy supports, for every front end (report, window, command line): a
@@ -27,9 +25,9 @@ public final class Rounding {
         }
         double a = Math.abs(x);
         if (a >= 1e7 || a < 1e-5) {
-            return String.format(Locale.ROOT, "%." + (digits - 1) + "e", x).replaceAll("\\.?0+e", "e");
+            return Numbers.trimZeros(Numbers.scientific(x, digits - 1));
         }
-        return new BigDecimal(x).round(new MathContext(digits)).stripTrailingZeros().toPlainString();
+        return Numbers.plain(x, digits);
     }
 
     /** A voltage tolerance to two significant digits in V, mV or uV ("12 V", "3.4 mV", "0.52 uV"). */

@@ -1,7 +1,6 @@
 package org.axistack.trace;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
+import org.axistack.model.Numbers;
 
 /** Number formatting for messages: six significant digits, no trailing zeros. */
 final class Fmt {
@@ -9,13 +8,7 @@ final class Fmt {
     }
 
     static String num(double v) {
-        if (!Double.isFinite(v)) {
-            return Double.toString(v);
-        }
-        if (v == 0) {
-            return "0";
-        }
-        return new BigDecimal(v).round(new MathContext(6)).stripTrailingZeros().toPlainString();
+        return Double.isFinite(v) ? Numbers.plain(v, Numbers.MESSAGE_DIGITS) : Double.toString(v);
     }
 
     /** A length given in metres, written in millimetres. */

@@ -1,6 +1,6 @@
 package org.axistack.ui;
 
-import java.util.Locale;
+import org.axistack.model.Numbers;
 
 /** Number formats of the window: plain decimals with a sensible number of significant digits. */
 public final class UiFormat {
@@ -17,12 +17,9 @@ public final class UiFormat {
         }
         double a = Math.abs(v);
         if (a != 0 && (a < 1e-3 || a >= 1e6)) {
-            return String.format(Locale.ROOT, "%.4g", v);
+            return Numbers.general(v, Numbers.WINDOW_DIGITS);
         }
-        if (v == 0) {
-            return "0";
-        }
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
+        return Numbers.plain(v, Numbers.WINDOW_DIGITS);
     }
 
     /**
@@ -30,11 +27,6 @@ public final class UiFormat {
      * resolution, and free of binary round-off such as -161.28000000000003), no exponent.
      */
     public static String volts(double v) {
-        if (v == 0) {
-            return "0";
-        }
-        String s = new java.math.BigDecimal(v).round(new java.math.MathContext(10)).stripTrailingZeros()
-                .toPlainString();
-        return s.equals("-0") ? "0" : s;
+        return Numbers.plain(v, Numbers.BIAS_DIGITS);
     }
 }
