@@ -158,7 +158,9 @@ final class PlanSummary {
         }
     }
 
+    /** Six significant digits, trailing zeros cut ("5000", "-1200", "44.9812"); "-" for a missing value. */
     private static String g(double x) {
-        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.6g", x) : "-";
+        return Double.isFinite(x) ? org.axistack.model.Numbers.trimZeros(org.axistack.model.Numbers.general(x,
+                org.axistack.model.Numbers.MESSAGE_DIGITS)) : "-";
     }
 }

@@ -27,7 +27,7 @@ public final class OpticsAccuracy {
     }
 
     private static String side(String which, FieldEnd end) {
-        String where = String.format(Locale.ROOT, "%.6g", end.z_m() * 1e3);
+        String where = org.axistack.model.Numbers.plain(end.z_m() * 1e3, org.axistack.model.Numbers.MESSAGE_DIGITS);
         return switch (end.rule()) {
             case FAR_FIELD -> which + ": " + end.rule().description() + " beyond z = " + where + " mm";
             default -> which + ": " + end.rule().description() + ", at z = " + where + " mm";
