@@ -144,6 +144,7 @@ public final class HtmlReport {
         PlanSections.spot(b, plan);
         PlanSections.tuning(b, plan);
         BudgetSection.html(b, plan);
+        SteeringSection.html(b, plan);
         if (!plan.sweep().isEmpty() && plan.sweepElectrode().isPresent()) {
             long ok = plan.sweep().stream().filter(p -> p.ok()).count();
             b.append("<h2>Focus-bias sweep</h2>\n<img src=\"sweep.png\" alt=\"optics against the bias\">\n")
