@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.CancellationException;
+import java.util.function.DoublePredicate;
 import java.util.function.ToDoubleFunction;
 
 import org.axistack.ode.SwitchingFunction;
@@ -68,6 +69,16 @@ public final class EnvelopeSolver {
      * @throws IllegalArgumentException when the beam cannot exist at the start plane
      */
     public EnvelopeCurve solve(EnvelopeChannel channel, EnvelopeProblem p) {
+        return solve(channel, p, f -> true);
+    }
+
+    /**
+     * Integrates the envelope, telling {@code progress} the share of the range done after every step (return false
+     * to cancel: the solver then throws {@link CancellationException}, as it does on thread interruption).
+     *
+     * @throws IllegalArgumentException when the beam cannot exist at the start plane
+     */
+    public EnvelopeCurve solve(EnvelopeChannel channel, EnvelopeProblem p, DoublePredicate progress) {
         double[] c0 = new double[3];
         channel.coefficients(p.zStart_m(), c0);
         double bg2Start = c0[EnvelopeChannel.BETA_GAMMA_SQUARED];
@@ -77,7 +88,7 @@ public final class EnvelopeSolver {
             double u = v0 * (Math.sqrt(Math.max(0, 1 + bg2Start)) - 1);
             throw new IllegalArgumentException(BeamMessages.notReachingStart(p.zStart_m(), u));
         }
-        Run run = new Run(channel, p, bg2Start * settings.reflectionFraction());
+        Run run = new Run(channel, p, bg2Start * settings.reflectionFraction(), progress);
         return run.integrate();
     }
 
@@ -94,8 +105,10 @@ public final class EnvelopeSolver {
         final List<Waist> waists = new ArrayList<>();
         Termination termination;
         double lastCrossover_m = Double.NaN;
+        final DoublePredicate progress;
 
-        Run(EnvelopeChannel channel, EnvelopeProblem p, double bg2Floor) {
+        Run(EnvelopeChannel channel, EnvelopeProblem p, double bg2Floor, DoublePredicate progress) {
+            this.progress = progress;
             this.channel = channel;
             this.p = p;
             this.bg2Floor = bg2Floor;
@@ -147,7 +160,8 @@ public final class EnvelopeSolver {
             integ.addStepHandler(new ODEStepHandler() {
                 @Override
                 public void handleStep(ODEStateInterpolator interpolator) {
-                    if (Thread.currentThread().isInterrupted()) {
+                    double done = (interpolator.getCurrentState().getTime() - p.zStart_m()) / length;
+                    if (Thread.currentThread().isInterrupted() || !progress.test(Math.max(0, Math.min(1, done)))) {
                         throw new CancellationException("envelope calculation cancelled");
                     }
                 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.function.DoublePredicate;
 
 import org.axistack.field.AxialField;
 import org.axistack.model.Electrode;
@@ -83,12 +84,28 @@ public final class EnvelopeStudy {
     }
 
     public EnvelopeStudyResult run(Stack stack, AxialField field, EnvelopeRequest req) {
+        return run(stack, field, req, f -> true);
+    }
+
+    /**
+     * The study, with the share done (0..1 over the three integrations) told to {@code progress} after every
+     * integrator step; return false to cancel ({@link java.util.concurrent.CancellationException}). The integrations
+     * run through a table of the axial field over the range ({@link EnvelopeTable}).
+     */
+    public EnvelopeStudyResult run(Stack stack, AxialField field, EnvelopeRequest req, DoublePredicate progress) {
         EnvelopeProblem p = problem(stack, field, req);
-        ElectrostaticChannel ch = channel(stack, field);
-        EnvelopeCurve full = solver.solve(ch, p);
-        EnvelopeCurve noCurrent = p.current_A() == 0 ? full : solver.solve(ch, p.withCurrent_A(0));
-        EnvelopeCurve noEmittance = p.normalisedEmittance_m_rad() == 0 ? full
-                : solver.solve(ch, p.withNormalisedEmittance_m_rad(0));
+        AxialField tabled = EnvelopeTable.of(field, p.zStart_m(), p.zEnd_m(), stack.openBore_m()).field();
+        ElectrostaticChannel ch = channel(stack, tabled);
+        boolean withCurrent = p.current_A() != 0, withEmittance = p.normalisedEmittance_m_rad() != 0;
+        int runs = 1 + (withCurrent ? 1 : 0) + (withEmittance ? 1 : 0);
+        int[] run = {0};
+        DoublePredicate share = f -> progress.test((run[0] + f) / runs);
+        EnvelopeCurve full = solver.solve(ch, p, share);
+        run[0]++;
+        EnvelopeCurve noCurrent = !withCurrent ? full : solver.solve(ch, p.withCurrent_A(0), share);
+        run[0] += withCurrent ? 1 : 0;
+        EnvelopeCurve noEmittance = !withEmittance ? full
+                : solver.solve(ch, p.withNormalisedEmittance_m_rad(0), share);
         double bg = BeamKinematics.betaGamma(ch.accelerationPotential_V(p.zStart_m()), ch.restPotential_V());
         double k0 = BeamKinematics.perveance(p.current_A(), ch.restPotential_V(), bg);
         double eps0 = p.normalisedEmittance_m_rad() / bg;

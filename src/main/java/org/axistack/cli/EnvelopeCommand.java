@@ -47,6 +47,9 @@ final class EnvelopeCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    @Mixin
+    QuietOption quiet;
+
     @Option(names = "--current", paramLabel = "A", required = true, description = "Beam current magnitude, A (>= 0).")
     double current_A;
 
@@ -116,9 +119,9 @@ final class EnvelopeCommand implements Callable<Integer> {
         EnvelopeSolver solver = new EnvelopeSolver(nearFill == null ? org.axistack.beam.EnvelopeSettings.defaults()
                 : checked(cl, () -> org.axistack.beam.EnvelopeSettings.defaults().withNearFill(nearFill)));
         PrintWriter err = cl.getErr();
-        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, json)).withBiases(stack.biases_V());
+        BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, quiet.on())).withBiases(stack.biases_V());
         EnvelopeStudy study = new EnvelopeStudy(solver);
-        EnvelopeStudyResult res = checked(cl, () -> study.run(stack, field, req));
+        EnvelopeStudyResult res = checked(cl, () -> study.run(stack, field, req, StageReporter.to(err, quiet.on(), "envelope")));
         ScanResult scan = null;
         if (scanMax_A != null || scanCsv != null || scanPng != null) {
             scan = scan(cl, stack, field, req, solver, err);

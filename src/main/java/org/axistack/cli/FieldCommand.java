@@ -44,6 +44,9 @@ final class FieldCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    @Mixin
+    QuietOption quiet;
+
     @Option(names = "--axis", paramLabel = "FROM:TO:STEP",
             description = "Axial table range and step in mm, e.g. --axis=-15:15:0.5 (default: the stack's extent, 41 points).")
     String axis;
@@ -57,7 +60,7 @@ final class FieldCommand implements Callable<Integer> {
         double[] range = axisRange(stack);
         PrintWriter out = spec.commandLine().getOut();
         FieldSolution solution = BemSolver.solve(stack.electrodes(), stack.mesh(),
-                SolveReporter.to(spec.commandLine().getErr(), json));
+                SolveReporter.to(spec.commandLine().getErr(), quiet.on()));
         BiasedField field = solution.biased();
         double[] charges = field.charges_C();
         double[] maxField = field.maxSurfaceFieldPerElectrode_V_per_m();

@@ -21,6 +21,8 @@ public final class Main implements Runnable {
     public static final int EXIT_PHYSICS = 1;
     /** Exit code: bad input or bad usage. */
     public static final int EXIT_INPUT = 2;
+    /** The command was cancelled (its thread interrupted); 128 + SIGINT, the shell convention for an interrupt. */
+    public static final int EXIT_CANCELLED = 130;
     /** Exit code: an internal error (a bug). */
     public static final int EXIT_INTERNAL = 3;
 
@@ -96,6 +98,11 @@ public final class Main implements Runnable {
             err.println("error: a file could not be written or read: " + org.axistack.io.TextSafety.printable(ex.getMessage())
                     + ". Files already in place were left as they were; free space or choose another place.");
             return EXIT_INPUT;
+        }
+        if (ex instanceof java.util.concurrent.CancellationException c) {
+            // only an interrupt of the command's thread gets here (Ctrl-C ends the process before)
+            err.println("cancelled: " + c.getMessage() + "; files are written whole or not at all.");
+            return EXIT_CANCELLED;
         }
         if (ex instanceof OutcomeException o) {
             err.println(o.getMessage());

@@ -74,8 +74,8 @@ final class MisalignCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
     boolean json;
 
-    @Option(names = "--quiet", description = "No progress on standard error.")
-    boolean quiet;
+    @Mixin
+    QuietOption quiet;
 
     @Override
     public Integer call() throws StackInputException, IOException {
@@ -95,7 +95,7 @@ final class MisalignCommand implements Callable<Integer> {
         }
         OutputCheck.file(cl, "--csv", csv);
         PrintWriter err = cl.getErr();
-        boolean silent = quiet || json;
+        boolean silent = quiet.on();
         FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, silent));
         MisalignmentStudy study;
         double screen;

@@ -51,6 +51,9 @@ final class OpticsCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    @Mixin
+    QuietOption quiet;
+
     @Option(names = "--object-z", paramLabel = "Z",
             description = "Axial object position in mm (default: the stack's [beam] object, else at infinity).")
     Double objectZ_mm;
@@ -91,7 +94,7 @@ final class OpticsCommand implements Callable<Integer> {
         }
         Stack stack = input.loadOrDemo();
         PrintWriter err = spec.commandLine().getErr();
-        org.axistack.field.SolveProgress progress = SolveReporter.to(err, json);
+        org.axistack.field.SolveProgress progress = SolveReporter.to(err, quiet.on());
         BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), progress).biased();
         OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         Map<String, Object> out = new LinkedHashMap<>();

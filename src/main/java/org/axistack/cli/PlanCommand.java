@@ -97,13 +97,7 @@ final class PlanCommand implements Callable<Integer> {
         PrintWriter err = cl.getErr();
         LensPlan plan = PlanAnalysis.solveAndRun(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV,
                 current_A, emittance_mm_mrad * 1e-6, tune, !noCheck, Units.mmToM(depth_mm)),
-                SolveReporter.to(err, quiet), (what, fraction) -> {
-                    if (!quiet) {
-                        err.println("plan: " + what + " ...");
-                        err.flush();
-                    }
-                    return true;
-                });
+                SolveReporter.to(err, quiet), progressLines(err, quiet));
         summary(w, stack, input.shownAs());
         PlanSummary.print(w, plan);
         Path html;
@@ -185,5 +179,36 @@ final class PlanCommand implements Callable<Integer> {
 
     static String num(double x) {
         return PlanFormat.num(x);
+    }
+
+    /**
+     * Plan progress on the error stream: a line per stage, and inside a long stage the share of the plan done at most
+     * once a second; cancels (the plan throws CancellationException) when this thread is interrupted.
+     */
+    static PlanAnalysis.Progress progressLines(PrintWriter err, boolean quiet) {
+        Thread owner = Thread.currentThread();
+        long[] last = {System.nanoTime()};
+        return new PlanAnalysis.Progress() {
+            @Override
+            public boolean stage(String what, double fraction) {
+                if (!quiet) {
+                    err.println("plan: " + what + " ...");
+                    err.flush();
+                }
+                last[0] = System.nanoTime();
+                return !owner.isInterrupted();
+            }
+
+            @Override
+            public boolean within(double fraction) {
+                long now = System.nanoTime();
+                if (!quiet && now - last[0] > 1_000_000_000L) {
+                    last[0] = now;
+                    err.printf(java.util.Locale.ROOT, "plan: %d %% done%n", (int) Math.floor(100 * fraction));
+                    err.flush();
+                }
+                return !owner.isInterrupted();
+            }
+        };
     }
 }

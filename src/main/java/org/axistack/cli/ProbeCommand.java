@@ -57,6 +57,9 @@ final class ProbeCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    @Mixin
+    QuietOption quiet;
+
     @Option(names = "--brightness", paramLabel = "B", required = true,
             description = "Reduced source brightness, A/(m^2 sr V) (e.g. a thermionic cathode is of order 1e5, a cold field emitter 1e8 or more).")
     double brightness;
@@ -135,7 +138,7 @@ final class ProbeCommand implements Callable<Integer> {
         if (out != null) {
             OutputCheck.folder(cl, "--out", out, "probe.csv");
         }
-        FieldSolution solution = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), json));
+        FieldSolution solution = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), quiet.on()));
         ProbeStudy study = ProbeStudy.run(solution, stack, settings, stack.screenZ_m().isPresent() ? name : null);
         if (out != null) {
             String title = "Probe current against size: " + stack.title();

@@ -78,8 +78,8 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
     boolean json;
 
-    @Option(names = "--quiet", description = "No progress on standard error.")
-    boolean quiet;
+    @Mixin
+    QuietOption quiet;
 
     @Override
     public Integer call() throws StackInputException, IOException {
@@ -99,7 +99,7 @@ final class SweepCommand implements Callable<Integer> {
         OutputCheck.file(cl, "--png", png);
         OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         PrintWriter err = cl.getErr();
-        boolean silent = quiet || json;
+        boolean silent = quiet.on();
         FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, silent));
         long t0 = System.nanoTime();
         ProgressBar bar = new ProgressBar(err, silent);

@@ -66,6 +66,9 @@ final class TraceCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    @Mixin
+    QuietOption quiet;
+
     @Option(names = "--rays", paramLabel = "KIND", description = "Ray set: disk (parallel, uniform), gaussian (parallel),"
             + " fan (from a point), ring. Default: fan from the beam's object point if the stack has one, else disk.")
     Kind kind;
@@ -208,7 +211,7 @@ final class TraceCommand implements Callable<Integer> {
             }
         }
         err.println("solving the field (" + stack.mesh().targetElements() + " elements) ...");
-        BiasedField biased = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, false))
+        BiasedField biased = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, quiet.on()))
                 .withBiases(stack.biases_V());
         Field field = biased;
         String method;

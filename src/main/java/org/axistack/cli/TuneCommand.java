@@ -50,6 +50,9 @@ final class TuneCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
+    @Mixin
+    QuietOption quiet;
+
     @Option(names = "--vary", paramLabel = "NAME", required = true, description = "Electrode whose bias is tuned.")
     String vary;
 
@@ -122,7 +125,7 @@ final class TuneCommand implements Callable<Integer> {
         if (alsoVary != null || magnification != null || focalLength_mm != null) {
             return pair(stack, target, range, report, cl);
         }
-        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), json));
+        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), quiet.on()));
         long t0 = System.nanoTime();
         TuneResult result = new BiasTuner(sol, stack).focus(vary, target, range);
         List<FocusSensitivity> budgets = new ArrayList<>();
@@ -165,7 +168,7 @@ final class TuneCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, e.getMessage());
         }
         BiasRange second = range(stack, alsoFrom_V, alsoTo_V, "--also-from/--also-to", cl);
-        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), json));
+        FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(cl.getErr(), quiet.on()));
         long t0 = System.nanoTime();
         PairTuner.PairResult result = new PairTuner(sol, stack).solve(vary, alsoVary, target, condition, range, second);
         List<FocusSensitivity> budgets = new ArrayList<>();

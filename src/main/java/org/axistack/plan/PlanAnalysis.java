@@ -195,7 +195,8 @@ public final class PlanAnalysis {
         if (o.reflection.isEmpty()) {
             try {
                 EnvelopeStudyResult env = new EnvelopeStudy().run(stack, field, new EnvelopeRequest(s.current_A(),
-                        new EnvelopeStart.RadiusSlope(r0, 0, Emittance.edge(s.emittance_m_rad()))));
+                        new EnvelopeStart.RadiusSlope(r0, 0, Emittance.edge(s.emittance_m_rad()))),
+                        f -> progress.within(share.envelope + (share.tune - share.envelope) * f));
                 envelope = Optional.of(env);
                 for (EnvelopeWarning w : env.warnings()) {
                     warnings.add("envelope: " + w.message());
