@@ -90,12 +90,11 @@ public final class EnvelopeStudy {
     /**
      * The study, with the share done (0..1 over the three integrations) told to {@code progress} after every
      * integrator step; return false to cancel ({@link java.util.concurrent.CancellationException}). The integrations
-     * run through a table of the axial field over the range ({@link EnvelopeTable}).
+     * run through a table of a solved field over the range ({@link EnvelopeTable#through}).
      */
     public EnvelopeStudyResult run(Stack stack, AxialField field, EnvelopeRequest req, DoublePredicate progress) {
         EnvelopeProblem p = problem(stack, field, req);
-        AxialField tabled = EnvelopeTable.of(field, p.zStart_m(), p.zEnd_m(), stack.openBore_m()).field();
-        ElectrostaticChannel ch = channel(stack, tabled);
+        ElectrostaticChannel ch = channel(stack, EnvelopeTable.through(field, p.zStart_m(), p.zEnd_m(), stack.openBore_m()));
         boolean withCurrent = p.current_A() != 0, withEmittance = p.normalisedEmittance_m_rad() != 0;
         int runs = 1 + (withCurrent ? 1 : 0) + (withEmittance ? 1 : 0);
         int[] run = {0};

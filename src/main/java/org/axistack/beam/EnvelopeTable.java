@@ -1,6 +1,7 @@
 package org.axistack.beam;
 
 import org.axistack.field.AxialField;
+import org.axistack.field.BiasedField;
 import org.axistack.trace.AxialTable;
 
 /**
@@ -47,6 +48,19 @@ final class EnvelopeTable {
             scale = Math.max(scale, Math.abs(v[1]));
         }
         return new EnvelopeTable(t, scale > 0 ? t.maxFieldError_V_per_m() / scale : 0);
+    }
+
+    /**
+     * The field the envelope integrates through: a table of a solved field ({@link BiasedField}, whose values come
+     * from the expansion or the exact element sums); any other field (a closed form, already cheap) as it is, and
+     * the field itself too if the table came out non-finite (a field without the four derivatives the table needs).
+     */
+    static AxialField through(AxialField field, double z0, double z1, double bore_m) {
+        if (!(field instanceof BiasedField)) {
+            return field;
+        }
+        EnvelopeTable t = of(field, z0, z1, bore_m);
+        return Double.isFinite(t.relativeFieldError()) ? t.field() : field;
     }
 
     /** The tabulated field (outside the range: the field itself). */
