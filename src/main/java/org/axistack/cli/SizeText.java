@@ -47,10 +47,8 @@ final class SizeText {
                 d.imageZ_m() * 1e3, d.focalLength_m() * 1e3,
                 Double.isNaN(d.magnification()) ? "" : String.format(Locale.ROOT, ", magnification %.4g", d.magnification()),
                 d.opticsError());
-        if (d.opticsError() > org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED) {
-            w.printf(Locale.ROOT, "  WARNING: the optics of this design carry an estimated error of %.1e of f, more than %.0e;"
-                    + " run optics on the written stack for the reason%n", d.opticsError(),
-                    org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED);
+        for (String warning : d.planWarnings()) {
+            w.printf(Locale.ROOT, "  WARNING (plan on the written stack says the same): %s%n", warning);
         }
         w.printf(Locale.ROOT, "  Cs %.4g mm, Cc %.4g mm, largest surface field %.0f V/mm (margin %.2f), length %.4g mm%n",
                 d.spherical_m() * 1e3, d.chromatic_m() * 1e3, d.maxSurfaceField_V_per_m() / 1e3, d.fieldMargin(),

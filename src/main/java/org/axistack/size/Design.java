@@ -29,17 +29,21 @@ import org.axistack.model.Electrode;
  * @param checks          every limit with the design's value (broken or not)
  * @param unknowns        boundary-element unknowns of the solve behind it
  * @param opticsError     estimated relative error of the cardinal elements (of f)
+ * @param planWarnings    what {@code plan} on the written design warns of about its optics' accuracy and its gaps
+ *                        (the same words: error estimate above the default accuracy, an open lens whose far field
+ *                        matters, a gap above the default gap rule); empty when plan has nothing to say there
  */
 public record Design(Family family, List<Double> parameters_m, Map<String, Double> dimensions_m,
         List<Electrode> electrodes, double bias_V, double imageZ_m, double focalLength_m, double magnification,
         double spherical_m, double chromatic_m, double maxSurfaceField_V_per_m, double length_m,
-        List<Violation> checks, int unknowns, double opticsError) {
+        List<Violation> checks, int unknowns, double opticsError, List<String> planWarnings) {
 
     public Design {
         parameters_m = List.copyOf(parameters_m);
         dimensions_m = Collections.unmodifiableMap(new LinkedHashMap<>(dimensions_m));
         electrodes = List.copyOf(electrodes);
         checks = List.copyOf(checks);
+        planWarnings = List.copyOf(planWarnings);
     }
 
     public double maxAbsBias_V() {

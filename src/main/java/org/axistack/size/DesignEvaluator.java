@@ -20,7 +20,9 @@ import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.ParaxialOptics;
+import org.axistack.optics.OpticsAccuracy;
 import org.axistack.optics.ReflectionException;
+import org.axistack.tune.GapMargins;
 
 /**
  * Evaluates one candidate geometry: one boundary-element solve, the focusing biases from a {@link FocusFinder}
@@ -130,10 +132,29 @@ public final class DesignEvaluator {
             }
             double maxField = Arrays.stream(field.maxSurfaceFieldPerElectrode_V_per_m()).max().orElse(0);
             return new Design(req.family(), p, dims, s.electrodes(), bias, imageZ, card.focalLengthImage_m(), mag, cs,
-                    cc, maxField, s.maxZ_m() - s.minZ_m(), checks(s, bias, maxField), sol.unknowns(), card.errorEstimate());
+                    cc, maxField, s.maxZ_m() - s.minZ_m(), checks(s, bias, maxField), sol.unknowns(), card.errorEstimate(),
+                    planWarnings(s, card));
         } catch (ReflectionException | IllegalArgumentException | ArithmeticException e) {
             return null;
         }
+    }
+
+    /**
+     * What plan will warn of on this design, in plan's own words (one place for each: OpticsAccuracy and
+     * GapMargins): the optics' error estimate above the default accuracy, an open lens whose far field matters, and
+     * gaps above the stack's gap rule.
+     */
+    static List<String> planWarnings(Stack s, CardinalElements card) {
+        List<String> w = new ArrayList<>();
+        OpticsAccuracy.shortfall(card, OpticsAccuracy.DEFAULT_REQUESTED).ifPresent(w::add);
+        OpticsAccuracy.closeTheLens(card).ifPresent(w::add);
+        for (GapMargins.Row r : GapMargins.of(s)) {
+            String g = GapMargins.warning(r);
+            if (g != null) {
+                w.add(g);
+            }
+        }
+        return w;
     }
 
     /** Relative accuracy a focusing bias must reach (of the object-image distance, or of the focal length). */
