@@ -19,6 +19,7 @@ import org.axistack.io.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.MisalignmentBudget;
 import org.axistack.optics.MisalignmentStudy;
+import org.axistack.optics.MonitorAlignment;
 import org.axistack.optics.ReflectionException;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.plan.PlanAnalysis;
@@ -122,20 +123,21 @@ final class MisalignCommand implements Callable<Integer> {
             throw new OutcomeException(e.getMessage() + "; lower the retarding bias or raise the beam energy");
         }
         MisalignmentBudget b = study.budget();
+        MonitorAlignment bench = MonitorAlignment.of(stack, sol, study);
         if (csv != null) {
             AtomicFiles.writeString(csv, AlignmentTableCsv.text(b));
         }
         PrintWriter out = cl.getOut();
         if (json) {
-            json(out, study, screenFrom);
+            json(out, study, screenFrom, bench);
         } else {
-            text(out, stack, study, screenFrom);
+            text(out, stack, study, screenFrom, bench);
         }
         out.flush();
         return 0;
     }
 
-    private void json(PrintWriter out, MisalignmentStudy study, String screenFrom) {
+    private void json(PrintWriter out, MisalignmentStudy study, String screenFrom, MonitorAlignment bench) {
         MisalignmentBudget b = study.budget();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("stack", input.shownAs());
@@ -155,6 +157,39 @@ final class MisalignCommand implements Callable<Integer> {
             rows.add(row);
         }
         m.put("rows", rows);
+        List<Map<String, Object>> mon = new ArrayList<>();
+        for (int i = 0; i < bench.monitorNames().size(); i++) {
+            Map<String, Object> x = new LinkedHashMap<>();
+            x.put("monitor", bench.monitorNames().get(i));
+            x.put("z_mm", Units.mToMm(bench.monitorZ_m()[i]));
+            List<Map<String, Object>> per = new ArrayList<>();
+            for (int k = 0; k < b.rows().size(); k++) {
+                Map<String, Object> r = new LinkedHashMap<>();
+                r.put("electrode", b.rows().get(k).name());
+                r.put("shift_um_per_0_01_mm_decentre", bench.shift()[k][0][i] * 1e-5 * 1e6);
+                r.put("shift_um_per_mrad_tilt", bench.shift()[k][1][i] * 1e-3 * 1e6);
+                per.add(r);
+            }
+            x.put("rows", per);
+            mon.add(x);
+        }
+        m.put("monitors", mon);
+        List<Map<String, Object>> cancel = new ArrayList<>();
+        for (int s = 0; s < bench.steerers().size(); s++) {
+            Map<String, Object> x = new LinkedHashMap<>();
+            x.put("steerer", bench.steerers().get(s));
+            List<Map<String, Object>> per = new ArrayList<>();
+            for (int k = 0; k < b.rows().size(); k++) {
+                Map<String, Object> r = new LinkedHashMap<>();
+                r.put("electrode", b.rows().get(k).name());
+                r.put("x_bias_V_per_0_01_mm_decentre", finite(bench.cancelBias_V()[s][k][0] * 1e-5));
+                r.put("x_bias_V_per_mrad_tilt", finite(bench.cancelBias_V()[s][k][1] * 1e-3));
+                per.add(r);
+            }
+            x.put("rows", per);
+            cancel.add(x);
+        }
+        m.put("cancelling_steerer_biases", cancel);
         m.put("factor_seconds", study.factorSeconds());
         m.put("response_seconds", study.responseSeconds());
         m.put("study_seconds", study.totalSeconds());
@@ -165,7 +200,11 @@ final class MisalignCommand implements Callable<Integer> {
         }
     }
 
-    private void text(PrintWriter w, Stack stack, MisalignmentStudy study, String screenFrom) {
+    private static Double finite(double x) {
+        return Double.isFinite(x) ? x : null;
+    }
+
+    private void text(PrintWriter w, Stack stack, MisalignmentStudy study, String screenFrom, MonitorAlignment bench) {
         MisalignmentBudget b = study.budget();
         w.println("Misalignment of " + stack.title() + " (" + input.shownAs() + ")");
         w.println("Screen: z = " + num(Units.mToMm(b.screenZ_m())) + " mm (" + screenFrom + "); allowed spot shift "
@@ -200,6 +239,33 @@ final class MisalignCommand implements Callable<Integer> {
         w.println("beam is refocused. Method and accuracy: misalignment.md (first order; neglected terms of relative");
         w.println("size misalignment / electrode scale). Harmonic-1 factorisation " + num(study.factorSeconds())
                 + " s, responses " + num(study.responseSeconds()) + " s.");
+        if (!bench.monitorNames().isEmpty()) {
+            w.println();
+            w.println("At the monitors: central-ray shift in um per 0.01 mm decentre / per mrad tilt of each electrode");
+            for (int i = 0; i < bench.monitorNames().size(); i++) {
+                StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "  %-12s z = %s mm:",
+                        bench.monitorNames().get(i), num(Units.mToMm(bench.monitorZ_m()[i]))));
+                for (int k = 0; k < b.rows().size(); k++) {
+                    sb.append("  ").append(b.rows().get(k).name()).append(' ')
+                            .append(num(bench.shift()[k][0][i] * 10)).append(" / ").append(num(bench.shift()[k][1][i] * 1e3));
+                }
+                w.println(sb);
+            }
+        }
+        for (int s = 0; s < bench.steerers().size(); s++) {
+            if (s == 0) {
+                w.println();
+                w.println("Steering that cancels each misalignment at the screen (x bias in V per 0.01 mm decentre / per"
+                        + " mrad tilt; the y bias alike for y; first order):");
+            }
+            StringBuilder sb = new StringBuilder("  " + bench.steerers().get(s) + ":");
+            for (int k = 0; k < b.rows().size(); k++) {
+                sb.append("  ").append(b.rows().get(k).name()).append(' ')
+                        .append(num(bench.cancelBias_V()[s][k][0] * 1e-5)).append(" / ")
+                        .append(num(bench.cancelBias_V()[s][k][1] * 1e-3));
+            }
+            w.println(sb);
+        }
         if (csv != null) {
             w.println("CSV: " + csv);
         }

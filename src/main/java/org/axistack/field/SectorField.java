@@ -65,31 +65,55 @@ public final class SectorField {
             HarmonicOperator op = HarmonicOperator.factor(round, m,
                     (stage, f) -> progress.update(stage, from + span * f));
             ops.put(m, op);
-            Map<Integer, double[]> perElectrode = new LinkedHashMap<>();
-            List<Integer> es = sp.entrySet().stream().filter(x -> x.getValue().carries(m)).map(Map.Entry::getKey).toList();
-            boolean slits = es.stream().anyMatch(e -> sp.get(e).slitWidth_m() > 0);
-            if (!slits) {
-                for (int e : es) {
-                    perElectrode.put(e, op.unitDensity(e));
-                }
-            } else {
-                double[][] rhs = new double[es.size()][n];
-                for (int c = 0; c < es.size(); c++) {
-                    Sectors s = sp.get(es.get(c));
-                    for (int i = 0; i < n; i++) {
-                        if (mesh.electrodeOf(i) == es.get(c)) {
-                            rhs[c][i] = s.slitFactor(m, mesh.nodeR(i));
-                        }
-                    }
-                }
-                double[][] x = op.solve(rhs);
-                for (int c = 0; c < es.size(); c++) {
-                    perElectrode.put(es.get(c), x[c]);
-                }
-            }
-            dens.put(m, perElectrode);
+            dens.put(m, densities(mesh, sp, m, op));
         }
         return new SectorField(round, sp, maxOrder, ops, dens, (System.nanoTime() - t0) * 1e-9);
+    }
+
+    /**
+     * The dipole harmonic alone (m = 1) of the split electrodes on an operator already factored (for example the
+     * misalignment study's), no second factorisation.
+     */
+    public static SectorField dipole(FieldSolution round, Map<Integer, Sectors> split, HarmonicOperator dipole) {
+        if (dipole.order() != 1 || dipole.round() != round) {
+            throw new IllegalArgumentException("need the harmonic-1 operator of the same solved stack");
+        }
+        long t0 = System.nanoTime();
+        Map<Integer, Sectors> sp = new TreeMap<>(split);
+        Map<Integer, HarmonicOperator> ops = new LinkedHashMap<>();
+        ops.put(1, dipole);
+        Map<Integer, Map<Integer, double[]>> dens = new LinkedHashMap<>();
+        dens.put(1, densities(round.mesh(), sp, 1, dipole));
+        return new SectorField(round, sp, 1, ops, dens, (System.nanoTime() - t0) * 1e-9);
+    }
+
+    /** Unit densities of harmonic m for every split electrode that carries it (slit factors in the right-hand side). */
+    private static Map<Integer, double[]> densities(BoundaryMesh mesh, Map<Integer, Sectors> sp, int m,
+            HarmonicOperator op) {
+        int n = mesh.size();
+        Map<Integer, double[]> perElectrode = new LinkedHashMap<>();
+        List<Integer> es = sp.entrySet().stream().filter(x -> x.getValue().carries(m)).map(Map.Entry::getKey).toList();
+        boolean slits = es.stream().anyMatch(e -> sp.get(e).slitWidth_m() > 0);
+        if (!slits) {
+            for (int e : es) {
+                perElectrode.put(e, op.unitDensity(e));
+            }
+        } else {
+            double[][] rhs = new double[es.size()][n];
+            for (int c = 0; c < es.size(); c++) {
+                Sectors s = sp.get(es.get(c));
+                for (int i = 0; i < n; i++) {
+                    if (mesh.electrodeOf(i) == es.get(c)) {
+                        rhs[c][i] = s.slitFactor(m, mesh.nodeR(i));
+                    }
+                }
+            }
+            double[][] x = op.solve(rhs);
+            for (int c = 0; c < es.size(); c++) {
+                perElectrode.put(es.get(c), x[c]);
+            }
+        }
+        return perElectrode;
     }
 
     public FieldSolution round() {

@@ -18,9 +18,11 @@ import org.axistack.model.Stack;
  * @param responseSeconds wall-clock seconds of all responses (right-hand sides, solves) and central-ray shifts
  *                        for the stack as biased, after the factorisation
  * @param totalSeconds    wall-clock seconds of the whole study after the round solve (walks included)
+ * @param shift           the central-ray shifts of the stack as biased (any plane)
+ * @param dipole          the harmonic-1 operator (shared with other dipole work on the same solution)
  */
 public record MisalignmentStudy(MisalignmentBudget budget, ParaxialOptics optics, double factorSeconds,
-        double responseSeconds, double totalSeconds) {
+        double responseSeconds, double totalSeconds, CentralRayShift shift, HarmonicOperator dipole) {
 
     /** Focus-bias step of the central difference for the spot walk, V (the walk is quoted per volt). */
     public static final double FOCUS_STEP_V = 1.0;
@@ -54,7 +56,8 @@ public record MisalignmentStudy(MisalignmentBudget budget, ParaxialOptics optics
         MisalignmentBudget budget = MisalignmentBudget.of(stack.names(), shift, focus, up, down, FOCUS_STEP_V,
                 screenZ_m, allowed_m);
         long t3 = System.nanoTime();
-        return new MisalignmentStudy(budget, shift.optics(), (t1 - t0) * 1e-9, (t2 - t1) * 1e-9, (t3 - t0) * 1e-9);
+        return new MisalignmentStudy(budget, shift.optics(), (t1 - t0) * 1e-9, (t2 - t1) * 1e-9, (t3 - t0) * 1e-9,
+                shift, dipole);
     }
 
     private static CentralRayShift shifts(Stack stack, FieldSolution solution, HarmonicOperator dipole,
