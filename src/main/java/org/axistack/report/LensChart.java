@@ -119,17 +119,26 @@ public final class LensChart {
      * @param envelope       the beam envelope (edge radius), mirrored; may be empty
      * @param axisPotential  the axial potential: z (mm) against potential (V), one piece
      * @param marks          cardinal points and the image
+     * @param centralX       the central ray's x against z, mm (stacks with split electrodes; else empty)
+     * @param centralY       the central ray's y against z, mm
      */
     public record Layers(Stack stack, Lines equipotentials, String levelsNote, Lines rays, Lines lostRays,
-            String raysNote, Lines envelope, Lines axisPotential, List<Mark> marks) {
+            String raysNote, Lines envelope, Lines axisPotential, List<Mark> marks, Lines centralX, Lines centralY) {
         public Layers {
             marks = List.copyOf(marks);
+        }
+
+        /** Layers of a round lens (no central-ray deflection). */
+        public Layers(Stack stack, Lines equipotentials, String levelsNote, Lines rays, Lines lostRays,
+                String raysNote, Lines envelope, Lines axisPotential, List<Mark> marks) {
+            this(stack, equipotentials, levelsNote, rays, lostRays, raysNote, envelope, axisPotential, marks,
+                    Lines.none(), Lines.none());
         }
 
         /** The same layers with another envelope. */
         public Layers withEnvelope(Lines newEnvelope) {
             return new Layers(stack, equipotentials, levelsNote, rays, lostRays, raysNote, newEnvelope, axisPotential,
-                    marks);
+                    marks, centralX, centralY);
         }
     }
 
@@ -138,6 +147,9 @@ public final class LensChart {
     private final XYPlot potential;
     private final DefaultXYDataset lines = new DefaultXYDataset();
     private final DefaultXYDataset axis = new DefaultXYDataset();
+    private final DefaultXYDataset central = new DefaultXYDataset();
+    /** The central ray's x and y against z (only for stacks with split electrodes; else null). */
+    private final XYPlot steering;
     private final TextTitle note;
 
     private LensChart(Stack stack) {
@@ -195,6 +207,25 @@ public final class LensChart {
         combined.setGap(8);
         combined.add(section, 3);
         combined.add(potential, 1);
+        if (stack.hasSectors()) {
+            NumberAxis dAxis = new NumberAxis("central ray (mm)");
+            dAxis.setAutoRangeIncludesZero(true);
+            XYLineAndShapeRenderer dr = new PolylineRenderer();
+            dr.setSeriesPaint(0, RAY);
+            dr.setSeriesStroke(0, new BasicStroke(1.6f));
+            dr.setSeriesPaint(1, ENVELOPE);
+            dr.setSeriesStroke(1, new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                    new float[] {6f, 3f}, 0f));
+            steering = new XYPlot(central, null, dAxis, dr);
+            steering.setBackgroundPaint(BACKGROUND);
+            steering.setDomainGridlinePaint(GRID);
+            steering.setRangeGridlinePaint(GRID);
+            steering.setDomainGridlineStroke(GRID_STROKE);
+            steering.setRangeGridlineStroke(GRID_STROKE);
+            combined.add(steering, 1);
+        } else {
+            steering = null;
+        }
         chart = new JFreeChart(null, JFreeChart.DEFAULT_TITLE_FONT, combined, true);
         chart.setBackgroundPaint(Color.WHITE);
         String title = stack.title().isBlank() ? "Electrode stack" : stack.title();
@@ -239,6 +270,10 @@ public final class LensChart {
             put(lines, "rays", l.rays());
             put(lines, "lost rays", l.lostRays());
             put(axis, "axial potential", l.axisPotential());
+            if (steering != null) {
+                put(central, "central ray x (side view)", l.centralX());
+                put(central, "central ray y (top view)", l.centralY());
+            }
             section.clearDomainMarkers();
             potential.clearDomainMarkers();
             for (Mark m : l.marks()) {

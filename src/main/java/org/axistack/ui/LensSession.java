@@ -12,6 +12,7 @@ import java.util.concurrent.Future;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
+import org.axistack.field.SectorField;
 import org.axistack.field.SolveProgress;
 import org.axistack.io.Units;
 import org.axistack.model.Stack;
@@ -47,10 +48,14 @@ public final class LensSession {
     private final PotentialGrid grid;
     private final double zMin_m;
     private final double zMax_m;
+    /** The dipole harmonic of the split electrodes (null when every electrode is round). */
+    private final SectorField sectors;
 
-    private LensSession(Stack stack, FieldSolution solution, PotentialGrid grid, double zMin_m, double zMax_m) {
+    private LensSession(Stack stack, FieldSolution solution, PotentialGrid grid, double zMin_m, double zMax_m,
+            SectorField sectors) {
         this.stack = stack;
         this.solution = solution;
+        this.sectors = sectors;
         this.grid = grid;
         this.zMin_m = zMin_m;
         this.zMax_m = zMax_m;
@@ -76,7 +81,14 @@ public final class LensSession {
                 f -> progress.update("equipotential map", 0.7 + 0.3 * f));
         BiasedField first = sol.biased();
         first.axial(0.5 * (z0 + z1), 0, new double[1]); // builds the axial expansion once, here, not on the first move
-        return new LensSession(stack, sol, grid, z0 - pad, z1 + pad);
+        SectorField sectors = null;
+        if (stack.hasSectors()) {
+            java.util.Map<Integer, org.axistack.model.Sectors> byIndex = new java.util.LinkedHashMap<>();
+            stack.sectors().forEach((n, s) -> byIndex.put(stack.indexOf(n), s));
+            // the dipole harmonic only: the central ray's deflection is first order in it
+            sectors = SectorField.solve(sol, byIndex, 1, (stage, f) -> progress.update("split electrodes: " + stage, 1));
+        }
+        return new LensSession(stack, sol, grid, z0 - pad, z1 + pad, sectors);
     }
 
     private static double maxRadius_mm(Stack stack) {
@@ -99,16 +111,35 @@ public final class LensSession {
      * included (see {@link EnvelopeLayer}).
      */
     public LensView view(double[] biases_V) {
+        return view(biases_V, java.util.Map.of());
+    }
+
+    /**
+     * The view at these biases and, for split electrodes, these x and y differential biases (volts, by electrode
+     * name; electrodes not named keep their stored sector biases). With split electrodes the view carries the
+     * central ray's x(z) and y(z) ({@link CentralRayView}).
+     */
+    public LensView view(double[] biases_V, java.util.Map<String, double[]> differentials_V) {
         long t0 = System.nanoTime();
         long c0 = THREADS.getCurrentThreadCpuTime();
-        Stack biased = stack.withBiases(biases_V);
+        Stack biased = CentralRayView.withDifferentials(stack.withBiases(biases_V), differentials_V);
         BiasedField field = solution.withBiases(biases_V);
         // rays and optics on the helper thread while this one sums the grid and traces the equipotentials
         Future<Side> side = HELPER.submit(() -> {
             long h0 = THREADS.getCurrentThreadCpuTime();
             LiveRays.Result rays = LiveRays.trace(biased, field);
             PropertySheet props = PropertySheet.of(biased, field);
-            return new Side(rays, props, (THREADS.getCurrentThreadCpuTime() - h0) / 1e6);
+            java.util.Optional<CentralRayView> central = java.util.Optional.empty();
+            if (sectors != null) {
+                try {
+                    central = java.util.Optional.of(CentralRayView.of(biased, field, sectors));
+                    props = props.withCentralRay(central.get());
+                } catch (RuntimeException e) {
+                    props = props.withRow(new PropertySheet.Row("central ray", "not available: " + e.getMessage(),
+                            PropertySheet.Level.CAUTION));
+                }
+            }
+            return new Side(rays, props, central, (THREADS.getCurrentThreadCpuTime() - h0) / 1e6);
         });
         double[][] v = grid.combine(biases_V);
         double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
@@ -132,14 +163,17 @@ public final class LensSession {
         }
         Side s = join(side);
         LensChart.Layers layers = new LensChart.Layers(biased, iso, levelsNote, s.rays().kept(), s.rays().lost(),
-                s.rays().note(), LensChart.Lines.none(), axis.build(), s.props().marks());
+                s.rays().note(), LensChart.Lines.none(), axis.build(), s.props().marks(),
+                s.central().map(CentralRayView::x).orElse(LensChart.Lines.none()),
+                s.central().map(CentralRayView::y).orElse(LensChart.Lines.none()));
         double ms = (System.nanoTime() - t0) / 1e6;
         double cpuMs = (THREADS.getCurrentThreadCpuTime() - c0) / 1e6 + s.cpu_ms();
         return new LensView(biased, field, layers, s.props(), s.rays(), ms, cpuMs);
     }
 
     /** The rays and properties of a view, with the processor time they took. */
-    private record Side(LiveRays.Result rays, PropertySheet props, double cpu_ms) {
+    private record Side(LiveRays.Result rays, PropertySheet props, java.util.Optional<CentralRayView> central,
+            double cpu_ms) {
     }
 
     private static Side join(Future<Side> f) {

@@ -69,6 +69,11 @@ public final class LensWindow extends JFrame {
     private final ExecutorService live = Executors.newSingleThreadExecutor(daemon("axistack-live"));
     private final ExecutorService slow = Executors.newSingleThreadExecutor(daemon("axistack-envelope"));
     private final AtomicReference<double[]> pending = new AtomicReference<>();
+    /** The steering controls of split electrodes (null for a round stack). */
+    SteeringPanel steeringPanel;
+    /** The newest steering values, set with {@link #pending} (the live worker reads both). */
+    private final AtomicReference<java.util.Map<String, double[]>> pendingSteering =
+            new AtomicReference<>(java.util.Map.of());
     /** The view whose envelope starts once it has been painted (event thread only). */
     private LensView envelopeDue;
     /** The envelope being computed (event thread only). */
@@ -314,6 +319,11 @@ public final class LensWindow extends JFrame {
         biasPanel = new BiasPanel(s.stack(), this::biasesChanged, this::status);
         biasHolder.removeAll();
         biasHolder.add(biasPanel, BorderLayout.CENTER);
+        steeringPanel = s.stack().hasSectors()
+                ? new SteeringPanel(s.stack(), () -> biasesChanged(biasPanel.biases()), this::status) : null;
+        if (steeringPanel != null) {
+            biasHolder.add(steeringPanel, BorderLayout.SOUTH);
+        }
         biasHolder.revalidate();
         status(String.format(java.util.Locale.ROOT, "field solved: %d unknowns in %.2f s (once per geometry)",
                 s.solution().unknowns(), s.solution().solveSeconds()));
@@ -327,6 +337,7 @@ public final class LensWindow extends JFrame {
         }
         chartPanel.markChange(System.nanoTime());
         cancelEnvelope();
+        pendingSteering.set(steeringPanel == null ? java.util.Map.of() : steeringPanel.differentials());
         pending.set(biases);
         if (editor.isShowing()) {
             syncText(biases);
@@ -337,9 +348,10 @@ public final class LensWindow extends JFrame {
             if (b == null) {
                 return;
             }
+            java.util.Map<String, double[]> steering = pendingSteering.get();
             try {
                 long t0 = System.nanoTime();
-                LensView v = s.view(b);
+                LensView v = s.view(b, steering);
                 long t1 = System.nanoTime();
                 SwingUtilities.invokeLater(() -> apply(s, v, t0, t1));
             } catch (RuntimeException ex) {

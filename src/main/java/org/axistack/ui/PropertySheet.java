@@ -61,6 +61,32 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
     }
 
     /** The value of the row with this label, if present. */
+    /** The central ray at the screen, x and y (rows of a stack with split electrodes). */
+    public static final String CENTRAL_X = "central ray at the screen, x (mm)";
+    public static final String CENTRAL_Y = "central ray at the screen, y (mm)";
+
+    /** The same sheet with one more row. */
+    PropertySheet withRow(Row row) {
+        List<Row> r = new java.util.ArrayList<>(rows);
+        r.add(row);
+        return new PropertySheet(r, marks, cardinal, imaging, problem);
+    }
+
+    /**
+     * The same sheet with the central ray's landing point and slopes (below a picometre or a nanoradian, round-off
+     * of the sector pattern's harmonic sums, shown as 0).
+     */
+    PropertySheet withCentralRay(CentralRayView c) {
+        double[] s = c.screen();
+        for (int i = 0; i < s.length; i++) {
+            s[i] = Math.abs(s[i]) < 1e-9 ? 0 : s[i];
+        }
+        return withRow(new Row(CENTRAL_X, UiFormat.num(s[0]), Level.PLAIN))
+                .withRow(new Row(CENTRAL_Y, UiFormat.num(s[1]), Level.PLAIN))
+                .withRow(new Row("central ray at the screen, slopes x, y (mrad)", UiFormat.num(s[2]) + ", "
+                        + UiFormat.num(s[3]), Level.PLAIN));
+    }
+
     public Optional<String> value(String label) {
         return rows.stream().filter(r -> r.label().equals(label)).map(Row::value).findFirst();
     }

@@ -74,6 +74,65 @@ class LensSessionTest {
     }
 
     @Test
+    void aSteererMovesTheCentralRayLinearlyAndTheViewAgreesWithTheDeflectionResponse() throws Exception {
+        Stack split = org.axistack.io.StackReader.parse("""
+                title = "Steerer between grounded tubes (demo data)"
+                [beam]
+                particle = "proton"
+                energy_eV = 1000.0
+                [[electrode]]
+                name = "in"
+                shape = "tube"
+                bias_V = 0.0
+                radius_mm = 5.0
+                z_start_mm = -45.0
+                z_end_mm = -5.5
+                [[electrode]]
+                name = "steer"
+                shape = "tube"
+                bias_V = 250.0
+                sectors = 4
+                deflection_x_V = 20.0
+                radius_mm = 5.0
+                z_start_mm = -5.0
+                z_end_mm = 5.0
+                [[electrode]]
+                name = "out"
+                shape = "tube"
+                bias_V = 0.0
+                radius_mm = 5.0
+                z_start_mm = 5.5
+                z_end_mm = 45.0
+                [screen]
+                z_mm = 40.0
+                """, "steerer.toml");
+        LensSession s = LensSession.open(split, SolveProgress.NONE);
+        double[] b = split.biases_V();
+        LensView stored = s.view(b);
+        double x20 = Double.parseDouble(stored.properties().value(PropertySheet.CENTRAL_X).orElseThrow());
+        // reference: the optics package's deflection response at the screen (its own API, as optics --json uses it)
+        java.util.Map<Integer, org.axistack.model.Sectors> byIndex = java.util.Map.of(1, split.sectors().get("steer"));
+        var sf = org.axistack.field.SectorField.solve(s.solution(), byIndex, 1, SolveProgress.NONE);
+        ParaxialOptics optics = ParaxialOptics.of(s.solution().withBiases(b), split);
+        var d = org.axistack.optics.SplitDeflection.of(sf, optics, optics.zStart_m(), new double[] {0.040});
+        double expected = Units.mToMm(d.ray(0, java.util.Map.of(1, split.sectors().get("steer").biases_V()))[0]);
+        assertThat(x20).isCloseTo(expected, within(1e-3 * Math.abs(expected))); // the window shows 4 digits
+        assertThat(Math.abs(x20)).isGreaterThan(1e-3);
+        // first order: twice the x differential, twice the offset; none of it in y; zero differential, no offset
+        LensView doubled = s.view(b, java.util.Map.of("steer", new double[] {40, 0}));
+        double x40 = Double.parseDouble(doubled.properties().value(PropertySheet.CENTRAL_X).orElseThrow());
+        assertThat(x40).isCloseTo(2 * x20, within(2e-3 * Math.abs(x20)));
+        assertThat(Double.parseDouble(doubled.properties().value(PropertySheet.CENTRAL_Y).orElseThrow()))
+                .isCloseTo(0, within(1e-6 * Math.abs(x20)));
+        LensView off = s.view(b, java.util.Map.of("steer", new double[] {0, 0}));
+        assertThat(Double.parseDouble(off.properties().value(PropertySheet.CENTRAL_X).orElseThrow()))
+                .isCloseTo(0, within(1e-9));
+        assertThat(doubled.layers().centralX().size()).isEqualTo(CentralRayView.PLANES);
+        // a round stack has no central-ray rows
+        assertThat(session.view(stack.biases_V()).properties().value(PropertySheet.CENTRAL_X)).isEmpty();
+    }
+
+    @Test
     void trajectoryTableHasEveryRayAtEveryPlaneAndCancelWritesNothing(@org.junit.jupiter.api.io.TempDir Path dir)
             throws Exception {
         var field = session.solution().biased();

@@ -329,6 +329,67 @@ class LensWindowEndToEndTest {
         screenshot(w, "gui-argon-sputter-einzel.png");
     }
 
+    /**
+     * A stack with a four-sector steerer: the window adds steering controls and the central-ray plot, and moving
+     * the x control moves the landing point on the screen in x only, in proportion (first order).
+     */
+    @Test
+    void theSteeringControlsMoveTheCentralRay(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path file = dir.resolve("steerer.toml");
+        Files.writeString(file, """
+                title = "Steerer between grounded tubes (demo data)"
+                [beam]
+                particle = "proton"
+                energy_eV = 1000.0
+                [[electrode]]
+                name = "in"
+                shape = "tube"
+                bias_V = 0.0
+                radius_mm = 5.0
+                z_start_mm = -45.0
+                z_end_mm = -5.5
+                [[electrode]]
+                name = "steer"
+                shape = "tube"
+                bias_V = 250.0
+                sectors = 4
+                radius_mm = 5.0
+                z_start_mm = -5.0
+                z_end_mm = 5.0
+                [[electrode]]
+                name = "out"
+                shape = "tube"
+                bias_V = 0.0
+                radius_mm = 5.0
+                z_start_mm = 5.5
+                z_end_mm = 45.0
+                [screen]
+                z_mm = 40.0
+                """);
+        LensWindow w = open(file.toString(), freshPreferences());
+        assertThat(onEdt(() -> tableValue(w, PropertySheet.CENTRAL_X))).isEqualTo("0");
+        javax.swing.JTextField x = onEdt(() -> find(w.getContentPane(), javax.swing.JTextField.class,
+                t -> "steer-field-steer-x".equals(t.getName())).orElseThrow());
+        onEdt(() -> {
+            x.setText("30");
+            x.postActionEvent();
+            return null;
+        });
+        waitFor(() -> !"0".equals(tableValue(w, PropertySheet.CENTRAL_X)), "the central ray to move");
+        double x30 = Double.parseDouble(onEdt(() -> tableValue(w, PropertySheet.CENTRAL_X)));
+        assertThat(Math.abs(x30)).isGreaterThan(1e-3);
+        assertThat(Double.parseDouble(onEdt(() -> tableValue(w, PropertySheet.CENTRAL_Y)))).isCloseTo(0,
+                org.assertj.core.api.Assertions.within(1e-6));
+        onEdt(() -> {
+            x.setText("60");
+            x.postActionEvent();
+            return null;
+        });
+        waitFor(() -> Math.abs(Double.parseDouble(tableValue(w, PropertySheet.CENTRAL_X)) - 2 * x30)
+                < 2e-3 * Math.abs(x30), "the central ray to move twice as far");
+        screenshot(w, "gui-steerer.png");
+    }
+
     /** The texts of every label in a dialog (an option pane shows a message as labels). */
     private static List<String> labels(Container root) {
         List<String> out = new ArrayList<>();
