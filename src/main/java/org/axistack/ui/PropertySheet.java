@@ -158,12 +158,24 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
         return new PropertySheet(rows, marks, card, img, problem);
     }
 
+    /**
+     * One row per electrode: its peak surface field against the limits, or, at a sharp corner (where the field
+     * has no finite limit and the sampled value only grows with the mesh), the plain statement that it is a sharp
+     * corner, as plan and the report say it.
+     */
     private static void surfaceRows(Stack stack, BiasedField field, List<Row> rows) {
         SurfaceFieldLimits lim = stack.limits();
-        double[] max = field.maxSurfaceFieldPerElectrode_V_per_m();
+        List<org.axistack.tune.SurfaceFields.Row> peaks = org.axistack.tune.SurfaceFields.of(stack, field);
         List<Electrode> es = stack.electrodes();
         for (int i = 0; i < es.size(); i++) {
-            double e = max[i];
+            org.axistack.field.SurfacePeak p = peaks.get(i).peak();
+            if (p.sharp()) {
+                rows.add(new Row("surface field " + es.get(i).name() + " (V/mm)", String.format(java.util.Locale.ROOT,
+                        "sharp corner at z = %s, r = %s mm: grows without bound with the mesh; give the edge a radius",
+                        UiFormat.num(Units.mToMm(p.z_m())), UiFormat.num(Units.mToMm(p.r_m()))), Level.CAUTION));
+                continue;
+            }
+            double e = p.field_V_per_m();
             Level level = level(e, lim);
             String margin = level == Level.PLAIN
                     ? UiFormat.num(100 * e / lim.comfort_V_per_m()) + " % of comfort limit"
