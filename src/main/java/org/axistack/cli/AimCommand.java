@@ -93,8 +93,8 @@ final class AimCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
     boolean json;
 
-    @Option(names = "--quiet", description = "No progress on standard error.")
-    boolean quiet;
+    @picocli.CommandLine.Mixin
+    QuietOption quiet;
 
     @Override
     public Integer call() throws StackInputException {
@@ -117,7 +117,7 @@ final class AimCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--at is given " + at.size() + " times; give it once or twice");
         }
         PrintWriter err = cl.getErr();
-        boolean silent = quiet || json;
+        boolean silent = quiet.on();
         FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, silent));
         BiasedField round = sol.withBiases(stack.biases_V());
         ParaxialOptics optics;

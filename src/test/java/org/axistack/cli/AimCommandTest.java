@@ -83,6 +83,8 @@ class AimCommandTest {
     void bringsTheBeamOntoTheAxisAtTheScreenAndChecksItExactly() throws Exception {
         CliRun.Run r = CliRun.run("aim", stack.toString(), "--json");
         assertThat(r.code()).as(r.err()).isEqualTo(0);
+        // progress goes to the error stream under --json too (the shared -q convention); standard output is JSON
+        assertThat(r.err()).contains("solv");
         JsonNode j = new ObjectMapper().readTree(r.out());
         JsonNode target = j.get("planes").get(0);
         assertThat(target.get("z_mm").asDouble()).isEqualTo(40.0);
