@@ -210,7 +210,8 @@ final class TraceCommand implements Callable<Integer> {
                                 step) * bore / FieldMap.MAX_NODES) * 1.05))));
             }
         }
-        err.println("solving the field (" + stack.mesh().targetElements() + " elements) ...");
+        PrintWriter progress = quiet.on() ? new PrintWriter(java.io.Writer.nullWriter()) : err;
+        progress.println("solving the field (" + stack.mesh().targetElements() + " elements) ...");
         BiasedField biased = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, quiet.on()))
                 .withBiases(stack.biases_V());
         Field field = biased;
@@ -219,7 +220,7 @@ final class TraceCommand implements Callable<Integer> {
             method = "boundary-element field evaluated directly at every step";
         } else {
             double step = mapStepMm != null ? Units.mmToM(mapStepMm) : FieldMap.defaultStep_m(bore);
-            err.println("mapping the field ...");
+            progress.println("mapping the field ...");
             FieldMap map = FieldMap.forRays(biased, geometry, startZ, screenZ, bore, step, TraceProgress.none());
             field = map;
             method = String.format(Locale.ROOT, "near-axis series of the axial potential's Chebyshev expansion (relative"
@@ -232,13 +233,13 @@ final class TraceCommand implements Callable<Integer> {
         int nThreads = threads != null ? threads : Runtime.getRuntime().availableProcessors();
         BundleResult res;
         try {
-            res = new BundleTracer(tracer, Math.max(1, nThreads)).trace(rays, targets, progressRays(err));
+            res = new BundleTracer(tracer, Math.max(1, nThreads)).trace(rays, targets, progressRays(progress));
         } catch (IllegalArgumentException e) {
             throw usage(e.getMessage());
         }
         TracedAberrationSection ab = null;
         if (aberrations) {
-            err.println("fitting aberrations to exact traces ...");
+            progress.println("fitting aberrations to exact traces ...");
             try {
                 ab = new TracedAberrationSection(stack, biased, tracer, bore, emittanceMmMrad * 1e-6, energyWidthEv);
             } catch (IllegalArgumentException e) {

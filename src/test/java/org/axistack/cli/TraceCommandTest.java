@@ -92,8 +92,9 @@ class TraceCommandTest {
     @Test
     void jsonCarriesPlanesStatusesAndRayEnds() throws Exception {
         CliRun.Run r = CliRun.run("trace", stack.toString(), "--json", "--rays", "fan", "--count", "5",
-                "--half-angle", "10", "--planes=0,20");
+                "--half-angle", "10", "--planes=0,20", "-q");
         assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.err()).as("-q silences every stage line").isEmpty();
         JsonNode root = new ObjectMapper().readTree(r.out());
         assertThat(root.get("rays").asInt()).isEqualTo(5);
         assertThat(root.get("planes")).hasSize(2);
