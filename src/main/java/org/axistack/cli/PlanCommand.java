@@ -70,6 +70,12 @@ final class PlanCommand implements Callable<Integer> {
                     + " +/- D mm (default ${DEFAULT-VALUE}).")
     double depth_mm;
 
+    @Option(names = "--brightness", paramLabel = "B",
+            description = "Reduced brightness of the source, A/(m^2 sr V): adds the probe size against current (FW50 at the"
+                    + " optimum aperture angle, dominant term) at the given and the focusing biases to the plan; the"
+                    + " energy spread is taken as the source's FWHM.")
+    Double brightness;
+
     @Option(names = "--no-check", description = "Skip the built-in verification cases (faster; the report says so).")
     boolean noCheck;
 
@@ -88,6 +94,10 @@ final class PlanCommand implements Callable<Integer> {
         if (!(depth_mm > 0) || !Double.isFinite(depth_mm)) {
             throw new CommandLine.ParameterException(cl, "--depth-mm must be a positive number of mm");
         }
+        if (brightness != null && !(brightness > 0 && Double.isFinite(brightness))) {
+            throw new CommandLine.ParameterException(cl, "--brightness must be a positive number of A/(m^2 sr V), got "
+                    + brightness);
+        }
         if (tune != null && stack.indexOf(tune) < 0) {
             throw new CommandLine.ParameterException(cl, "--tune " + tune + ": no electrode of that name; the stack has "
                     + String.join(", ", stack.names()));
@@ -96,7 +106,8 @@ final class PlanCommand implements Callable<Integer> {
         PrintWriter w = cl.getOut();
         PrintWriter err = cl.getErr();
         LensPlan plan = PlanAnalysis.solveAndRun(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV,
-                current_A, emittance_mm_mrad * 1e-6, tune, !noCheck, Units.mmToM(depth_mm)),
+                current_A, emittance_mm_mrad * 1e-6, tune, !noCheck, Units.mmToM(depth_mm),
+                brightness == null ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(brightness)),
                 SolveReporter.to(err, quiet), progressLines(err, quiet));
         summary(w, stack, input.shownAs());
         PlanSummary.print(w, plan);

@@ -41,6 +41,7 @@ final class PlanSummary {
                     + g(p.sweep().get(0).bias_V()) + " to " + g(p.sweep().get(p.sweep().size() - 1).bias_V())
                     + " V, " + p.sweep().stream().filter(x -> x.ok()).count() + " usable (sweep.png, sweep.csv)");
         }
+        p.probe().ifPresent(study -> probe(w, study));
         surfaceFields(w, p);
         gaps(w, p);
         if (!p.checks().isEmpty()) {
@@ -162,5 +163,25 @@ final class PlanSummary {
     private static String g(double x) {
         return Double.isFinite(x) ? org.axistack.model.Numbers.trimZeros(org.axistack.model.Numbers.general(x,
                 org.axistack.model.Numbers.MESSAGE_DIGITS)) : "-";
+    }
+
+    /** One line per probe curve: the probe at the smallest and the largest current, and what dominates. */
+    private static void probe(PrintWriter w, org.axistack.probe.ProbeStudy study) {
+        for (org.axistack.probe.ProbeStudy.Curve c : study.curves()) {
+            if (c.points().isEmpty()) {
+                w.println("Probe (" + c.workingPoint().label() + "): no current in the range passes the aperture angles");
+                continue;
+            }
+            org.axistack.probe.ProbePoint a = c.points().get(0);
+            org.axistack.probe.ProbePoint z = c.points().get(c.points().size() - 1);
+            boolean pinned = !c.model().fixedMagnification() && c.points().stream().anyMatch(q -> !q.interior());
+            w.println(String.format(Locale.ROOT, "Probe (%s): FW50 %s nm at %s A, %s nm at %s A; %s%s (probe.png, probe.csv)",
+                    c.workingPoint().label(), g(a.fw50_m() * 1e9), g(a.current_A()), g(z.fw50_m() * 1e9), g(z.current_A()),
+                    c.dominanceInWords(), pinned ? "; the best aperture angle lies at the end of the range for some currents"
+                            : ""));
+        }
+        for (String n : study.notes()) {
+            w.println("Probe note: " + n);
+        }
     }
 }

@@ -73,20 +73,20 @@ final class ProbeCommand implements Callable<Integer> {
                     + " and the current sets the angle; without it the magnification is taken as free.")
     Double sourceSize_nm;
 
-    @Option(names = "--current-from", paramLabel = "A", defaultValue = "1e-12", description = "Smallest current, A (default ${DEFAULT-VALUE}).")
+    @Option(names = "--current-from", paramLabel = "A", defaultValue = ProbeStudy.DEFAULT_CURRENT_FROM_A, description = "Smallest current, A (default ${DEFAULT-VALUE}).")
     double currentFrom;
 
-    @Option(names = "--current-to", paramLabel = "A", defaultValue = "1e-6", description = "Largest current, A (default ${DEFAULT-VALUE}).")
+    @Option(names = "--current-to", paramLabel = "A", defaultValue = ProbeStudy.DEFAULT_CURRENT_TO_A, description = "Largest current, A (default ${DEFAULT-VALUE}).")
     double currentTo;
 
-    @Option(names = "--points", paramLabel = "N", defaultValue = "50", description = "Currents on the curve (default ${DEFAULT-VALUE}).")
+    @Option(names = "--points", paramLabel = "N", defaultValue = ProbeStudy.DEFAULT_POINTS, description = "Currents on the curve (default ${DEFAULT-VALUE}).")
     int points;
 
-    @Option(names = "--alpha-from-mrad", paramLabel = "MRAD", defaultValue = "0.1",
+    @Option(names = "--alpha-from-mrad", paramLabel = "MRAD", defaultValue = ProbeStudy.DEFAULT_ALPHA_FROM_MRAD,
             description = "Smallest image-side aperture half-angle, mrad (default ${DEFAULT-VALUE}).")
     double alphaFrom_mrad;
 
-    @Option(names = "--alpha-to-mrad", paramLabel = "MRAD", defaultValue = "50",
+    @Option(names = "--alpha-to-mrad", paramLabel = "MRAD", defaultValue = ProbeStudy.DEFAULT_ALPHA_TO_MRAD,
             description = "Largest image-side aperture half-angle, mrad (default ${DEFAULT-VALUE}; third-order aberrations hold to tens of mrad).")
     double alphaTo_mrad;
 
@@ -236,7 +236,7 @@ final class ProbeCommand implements Callable<Integer> {
                         p.diffraction_m() * 1e9, p.spherical_m() * 1e9, p.chromatic_m() * 1e9, p.dominant().words(),
                         p.interior() || c.model().fixedMagnification() ? "" : " (angle at the range end)");
             }
-            w.println("    " + dominance(c.points()));
+            w.println("    " + c.dominanceInWords());
             double diffr = c.points().stream().mapToDouble(p -> p.share(ProbeTerm.DIFFRACTION)).max().orElse(0);
             w.println(diffr < 0.01 ? String.format(Locale.ROOT,
                     "    diffraction negligible: below %.2g %% of the squared size everywhere on the curve", Math.max(100 * diffr, 1e-6))
@@ -250,22 +250,5 @@ final class ProbeCommand implements Callable<Integer> {
         }
         w.println();
         w.println(SafetyNotice.text());
-    }
-
-    /** Which term dominates over which current range, in words. */
-    static String dominance(List<ProbePoint> points) {
-        StringBuilder b = new StringBuilder("dominant: ");
-        int start = 0;
-        for (int i = 1; i <= points.size(); i++) {
-            if (i == points.size() || points.get(i).dominant() != points.get(start).dominant()) {
-                if (start > 0) {
-                    b.append("; ");
-                }
-                b.append(points.get(start).dominant().words()).append(String.format(Locale.ROOT, " from %.3g to %.3g A",
-                        points.get(start).current_A(), points.get(i - 1).current_A()));
-                start = i;
-            }
-        }
-        return b.toString();
     }
 }

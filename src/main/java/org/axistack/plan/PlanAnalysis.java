@@ -28,6 +28,8 @@ import org.axistack.optics.ReflectionException;
 import org.axistack.optics.SpotSizeBudget;
 import org.axistack.optics.OpticsAccuracy;
 import org.axistack.optics.StartPlaneException;
+import org.axistack.probe.ProbeSource;
+import org.axistack.probe.ProbeStudy;
 import org.axistack.report.LensPlan;
 import org.axistack.trace.Trajectory;
 import org.axistack.tune.BiasRange;
@@ -44,7 +46,7 @@ import org.axistack.verify.VerificationSuite;
 /**
  * Runs every step of a lens plan on one field solution: paraxial optics and aberrations, the spot-size budget, a
  * ray fan, the envelope, the biases that focus on the screen with their supply-stability budget, a focus-bias
- * sweep and the verification cases. The {@code plan} command solves the field first ({@link #solveAndRun}); the
+ * sweep, the probe size against current (when a source brightness is given) and the verification cases. The {@code plan} command solves the field first ({@link #solveAndRun}); the
  * desktop window hands over the solution it already has ({@link #run}), so its report costs no second solve. Each
  * stage is announced to a {@link Progress}, which may cancel.
  */
@@ -69,10 +71,18 @@ public final class PlanAnalysis {
      * @param tuneElectrode    electrode to tune for focus on the screen (null: the one with the largest |bias|)
      * @param runChecks        whether to run the verification cases
      * @param depth_m          the supply-stability budget keeps the focus within +/- this, m
+     * @param probeBrightness_A_per_m2_sr_V reduced brightness of the source for the probe section (empty: no probe
+     *                         plan); the energy spread above is taken as its FWHM
      */
     public record Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
-            boolean runChecks, double depth_m) {
+            boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V) {
         public Settings {
+            probeBrightness_A_per_m2_sr_V = probeBrightness_A_per_m2_sr_V == null ? OptionalDouble.empty()
+                    : probeBrightness_A_per_m2_sr_V;
+            if (probeBrightness_A_per_m2_sr_V.isPresent() && !(probeBrightness_A_per_m2_sr_V.getAsDouble() > 0
+                    && Double.isFinite(probeBrightness_A_per_m2_sr_V.getAsDouble()))) {
+                throw new IllegalArgumentException("the source brightness must be a positive number of A/(m^2 sr V)");
+            }
             if (!(energySpread_eV >= 0) || !(current_A >= 0) || !(emittance_m_rad >= 0)
                     || !Double.isFinite(energySpread_eV + current_A + emittance_m_rad)) {
                 throw new IllegalArgumentException("the energy spread, current and emittance must be finite and >= 0");
@@ -90,14 +100,28 @@ public final class PlanAnalysis {
             return new Settings(1, 1e-5, 1e-6, null, true, FocusSensitivity.DEFAULT_DEPTH_M);
         }
 
+        /** Settings without a probe plan. */
+        public Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
+                boolean runChecks, double depth_m) {
+            this(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m, OptionalDouble.empty());
+        }
+
         /** The same settings with another envelope beam. */
         public Settings withEnvelope(double newCurrent_A, double newEmittance_m_rad) {
-            return new Settings(energySpread_eV, newCurrent_A, newEmittance_m_rad, tuneElectrode, runChecks, depth_m);
+            return new Settings(energySpread_eV, newCurrent_A, newEmittance_m_rad, tuneElectrode, runChecks, depth_m,
+                    probeBrightness_A_per_m2_sr_V);
         }
 
         /** The same settings with or without the verification cases. */
         public Settings withChecks(boolean run) {
-            return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, run, depth_m);
+            return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, run, depth_m,
+                    probeBrightness_A_per_m2_sr_V);
+        }
+
+        /** The same settings with a probe plan for a source of this reduced brightness, A/(m^2 sr V). */
+        public Settings withProbeBrightness(double brightness_A_per_m2_sr_V) {
+            return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
+                    OptionalDouble.of(brightness_A_per_m2_sr_V));
         }
     }
 
@@ -219,6 +243,14 @@ public final class PlanAnalysis {
                             + (share.checks - share.sweep) * done / total));
         }
 
+        Optional<ProbeStudy> probe = Optional.empty();
+        if (s.probeBrightness_A_per_m2_sr_V().isPresent() && o.reflection.isEmpty()) {
+            announce(progress, "probe size against current", share.checks);
+            probe = Optional.of(ProbeStudy.of(solution, stack, ProbeStudy.Settings.standard(new ProbeSource(
+                    s.probeBrightness_A_per_m2_sr_V().getAsDouble(), s.energySpread_eV(), OptionalDouble.empty())),
+                    tuning.tune()));
+        }
+
         List<CheckResult> checks = List.of();
         if (s.runChecks()) {
             boolean[] stopped = {false};
@@ -244,7 +276,7 @@ public final class PlanAnalysis {
         return new LensPlan(stack, source, solution, field, o.reflection, o.cardinal, o.note, o.imaging,
                 o.aberrations, spotInputs, spotRows, rays, rayNote, envelope, envNote, tuning.tune(), tuning.note(),
                 tuning.budgets(), tuning.budgetNote(), Optional.ofNullable(name), sweep, checks, warnings,
-                (System.nanoTime() - t0) * 1e-9);
+                (System.nanoTime() - t0) * 1e-9, probe);
     }
 
     /** The default envelope beam's edge radius: a quarter of the narrowest open bore, m (plan and envelope commands). */

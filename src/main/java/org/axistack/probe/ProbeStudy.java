@@ -24,6 +24,17 @@ import org.axistack.tune.TuneResult;
  */
 public record ProbeStudy(Settings settings, List<Curve> curves, List<String> notes) {
 
+    /** Default smallest current on the curve, A (the probe command's and the plan's; picocli needs the text). */
+    public static final String DEFAULT_CURRENT_FROM_A = "1e-12";
+    /** Default largest current, A. */
+    public static final String DEFAULT_CURRENT_TO_A = "1e-6";
+    /** Default number of currents on the curve. */
+    public static final String DEFAULT_POINTS = "50";
+    /** Default smallest image-side aperture half-angle, mrad. */
+    public static final String DEFAULT_ALPHA_FROM_MRAD = "0.1";
+    /** Default largest image-side aperture half-angle, mrad. */
+    public static final String DEFAULT_ALPHA_TO_MRAD = "50";
+
     public ProbeStudy {
         curves = List.copyOf(curves);
         notes = List.copyOf(notes);
@@ -50,6 +61,13 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
                 throw new IllegalArgumentException("the curve needs 2..10000 points: " + points);
             }
         }
+
+        /** The default angle range, currents and points (the DEFAULT_ constants) for a source. */
+        public static Settings standard(ProbeSource source) {
+            return new Settings(source, Double.parseDouble(DEFAULT_ALPHA_FROM_MRAD) * 1e-3,
+                    Double.parseDouble(DEFAULT_ALPHA_TO_MRAD) * 1e-3, Double.parseDouble(DEFAULT_CURRENT_FROM_A),
+                    Double.parseDouble(DEFAULT_CURRENT_TO_A), Integer.parseInt(DEFAULT_POINTS));
+        }
     }
 
     /** A working point and its probe curve. */
@@ -62,6 +80,23 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
         public Optional<ProbePoint> largestCurrentWithin(double fw50_m) {
             return points.stream().filter(p -> p.fw50_m() <= fw50_m).reduce((a, b) -> b);
         }
+
+        /** Which term dominates over which current range, in words ("dominant: spherical aberration from ... A"). */
+        public String dominanceInWords() {
+            StringBuilder b = new StringBuilder("dominant: ");
+            int start = 0;
+            for (int i = 1; i <= points.size(); i++) {
+                if (i == points.size() || points.get(i).dominant() != points.get(start).dominant()) {
+                    if (start > 0) {
+                        b.append("; ");
+                    }
+                    b.append(points.get(start).dominant().words()).append(String.format(Locale.ROOT, " from %.3g to %.3g A",
+                            points.get(start).current_A(), points.get(i - 1).current_A()));
+                    start = i;
+                }
+            }
+            return b.toString();
+        }
     }
 
     /**
@@ -70,18 +105,30 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
      * @param tuneElectrode the electrode to tune for focus on the screen (null: no tuning)
      */
     public static ProbeStudy run(FieldSolution solution, Stack stack, Settings settings, String tuneElectrode) {
+        Optional<TuneResult> tuned = Optional.empty();
+        if (tuneElectrode != null && stack.screenZ_m().isPresent()) {
+            tuned = Optional.of(new BiasTuner(solution, stack).focus(tuneElectrode, stack.screenZ_m().getAsDouble()));
+        }
+        return of(solution, stack, settings, tuned);
+    }
+
+    /**
+     * The study for the biases as given and for the focusing biases of a tune already run (the plan hands over its
+     * own, so nothing is tuned twice).
+     */
+    public static ProbeStudy of(FieldSolution solution, Stack stack, Settings settings, Optional<TuneResult> tuned) {
         List<Curve> curves = new ArrayList<>();
         List<String> notes = new ArrayList<>();
         add(curves, notes, solution, stack, stack.biases_V(), "biases as given", settings);
-        if (tuneElectrode != null && stack.screenZ_m().isPresent()) {
-            TuneResult t = new BiasTuner(solution, stack).focus(tuneElectrode, stack.screenZ_m().getAsDouble());
+        if (tuned.isPresent()) {
+            TuneResult t = tuned.get();
             if (!t.found()) {
-                notes.add(String.format(Locale.ROOT, "no bias of %s in %.6g .. %.6g V focuses on the screen", tuneElectrode,
+                notes.add(String.format(Locale.ROOT, "no bias of %s in %.6g .. %.6g V focuses on the screen", t.electrode(),
                         t.range().from_V(), t.range().to_V()));
             }
             for (FocusSolution f : t.solutions()) {
                 add(curves, notes, solution, stack, f.biases_V(), String.format(Locale.ROOT,
-                        "focus on the screen, %s = %.6g V", tuneElectrode, f.bias_V()), settings);
+                        "focus on the screen, %s = %.6g V", t.electrode(), f.bias_V()), settings);
             }
         }
         return new ProbeStudy(settings, curves, notes);

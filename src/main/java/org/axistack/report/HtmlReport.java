@@ -78,6 +78,14 @@ public final class HtmlReport {
             figure(SweepChart.of(stack, swept, plan.sweep(), "Optics against the bias of " + swept, focus), 1200, 760,
                     dir, "sweep", files);
         }
+        if (plan.probe().isPresent()) {
+            org.axistack.probe.ProbeStudy probe = plan.probe().get();
+            if (probe.curves().stream().anyMatch(c -> !c.points().isEmpty())) {
+                figure(ProbeChart.of(probe, "Probe current against size: " + stack.title()), 1000, 700, dir, "probe", files);
+            }
+            AtomicFiles.writeString(AtomicFiles.inside(dir, "probe.csv"), org.axistack.io.ProbeTableCsv.text(probe));
+            files.add("probe.csv");
+        }
         // tables
         for (var t : extraTables.entrySet()) {
             AtomicFiles.writeString(AtomicFiles.inside(dir, t.getKey()), t.getValue());
@@ -142,6 +150,7 @@ public final class HtmlReport {
                 .append(Html.esc(plan.rayNote())).append("</p>\n");
         PlanSections.optics(b, plan);
         PlanSections.spot(b, plan);
+        ProbeSection.html(b, plan);
         PlanSections.tuning(b, plan);
         BudgetSection.html(b, plan);
         SteeringSection.html(b, plan);

@@ -46,6 +46,8 @@ import org.axistack.verify.CheckResult;
  * @param checks       the built-in verification cases
  * @param warnings     things the user must look at
  * @param seconds      wall time of the whole plan, s
+ * @param probe        probe size against current at the given and the focusing biases (empty: no source brightness
+ *                     given, or the beam is reflected)
  */
 public record LensPlan(Stack stack, String source, FieldSolution solution, BiasedField field,
         Optional<String> reflection, Optional<CardinalElements> cardinal, String optics, Optional<Imaging> imaging,
@@ -53,7 +55,7 @@ public record LensPlan(Stack stack, String source, FieldSolution solution, Biase
         List<Trajectory> rays, String rayNote, Optional<EnvelopeStudyResult> envelope, String envelopeNote,
         Optional<TuneResult> tune, String tuneNote, List<FocusSensitivity> budgets, String budgetNote,
         Optional<String> sweepElectrode, List<SweepPoint> sweep,
-        List<CheckResult> checks, List<String> warnings, double seconds) {
+        List<CheckResult> checks, List<String> warnings, double seconds, Optional<org.axistack.probe.ProbeStudy> probe) {
 
     public LensPlan {
         spotRows = List.copyOf(spotRows);

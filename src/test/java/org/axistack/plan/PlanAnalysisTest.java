@@ -119,4 +119,45 @@ class PlanAnalysisTest {
             assertThat(left.map(p -> p.getFileName().toString())).containsExactly("report");
         }
     }
+
+    /**
+     * The probe section (issue 18): with a source brightness the plan carries the probe command's study (the same
+     * org.axistack.probe.ProbeStudy, so the same numbers: common practice, one computation) at the given biases and
+     * at every focusing bias of its own tune, and the report shows the section, the curve and the table; without it
+     * the report says how to get one.
+     */
+    @Test
+    void probeSectionIsTheProbeStudyAtTheGivenAndFocusingBiases(@TempDir Path dir) throws IOException {
+        assertThat(plan.probe()).isEmpty();
+        assertThat(Files.readString(HtmlReport.write(plan, dir.resolve("plain"), java.util.Map.of())))
+                .contains("Probe size against current").contains("plan --brightness");
+        double brightness = 1e8;
+        LensPlan withProbe = PlanAnalysis.run(stack, "test", PlanAnalysis.Settings.defaults().withChecks(false)
+                .withProbeBrightness(brightness), solution, PlanAnalysis.Progress.NONE);
+        assertThat(withProbe.probe()).isPresent();
+        org.axistack.probe.ProbeStudy study = withProbe.probe().get();
+        org.axistack.probe.ProbeStudy reference = org.axistack.probe.ProbeStudy.run(solution, stack,
+                org.axistack.probe.ProbeStudy.Settings.standard(new org.axistack.probe.ProbeSource(brightness, 1,
+                        java.util.OptionalDouble.empty())), "focus");
+        // the given biases and each focusing bias, less those named in the notes (a working point that images the
+        // source to infinity or reflects the beam has no probe)
+        assertThat(study.curves().size() + study.notes().size()).isGreaterThanOrEqualTo(1 + withProbe.tune().get().solutions().size());
+        assertThat(study.curves().size()).isGreaterThanOrEqualTo(2);
+        assertThat(study.curves()).hasSameSizeAs(reference.curves());
+        for (org.axistack.probe.ProbeStudy.Curve curve : study.curves()) {
+            // the plan lists the focusing biases in its ranking order: match by working point
+            var a = curve.points();
+            var b = reference.curves().stream().filter(r -> r.workingPoint().label().equals(curve.workingPoint().label()))
+                    .findFirst().orElseThrow().points();
+            assertThat(a).hasSameSizeAs(b).isNotEmpty();
+            for (int k = 0; k < a.size(); k++) {
+                assertThat(a.get(k).fw50_m()).isEqualTo(b.get(k).fw50_m());
+            }
+        }
+        Path html = HtmlReport.write(withProbe, dir.resolve("probe"), java.util.Map.of());
+        assertThat(Files.readString(html)).contains("Probe size against current").contains("probe.png")
+                .contains(study.curves().get(0).dominanceInWords());
+        assertThat(dir.resolve("probe").resolve("probe.csv")).exists();
+        assertThat(dir.resolve("probe").resolve("probe.svg")).exists();
+    }
 }
