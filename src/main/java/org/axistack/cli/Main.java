@@ -81,7 +81,7 @@ public final class Main implements Runnable {
         if (ex instanceof CommandLine.ParameterException p) {
             return onParameterException(p, new String[0]);
         }
-        if (ex instanceof org.axistack.field.MeshException m) {
+        if (ex instanceof org.axistack.field.SolveException m) {
             err.println("error: the field cannot be solved as given: " + m.getMessage() + ".");
             return EXIT_INPUT;
         }

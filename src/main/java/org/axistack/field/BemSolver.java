@@ -48,7 +48,7 @@ public final class BemSolver {
     /**
      * Meshes and solves.
      *
-     * @throws MeshException if the stack cannot be meshed, the system is singular, or the solved capacitance
+     * @throws SolveException if the stack cannot be meshed, the system is singular, or the solved capacitance
      *                       matrix breaks reciprocity or the sign law badly ({@link CapacitanceCheck#refused()})
      */
     public static FieldSolution solve(List<Electrode> electrodes, MeshSettings settings, SolveProgress progress) {
@@ -57,12 +57,12 @@ public final class BemSolver {
         try {
             mesh = Mesher.mesh(electrodes, settings);
         } catch (IllegalArgumentException e) {
-            throw new MeshException(e.getMessage());
+            throw new SolveException(SolveException.Reason.MESH, e.getMessage());
         }
         int n = mesh.size();
         int limit = maxUnknownsForHeap();
         if (n > limit) {
-            throw new MeshException("the mesh has " + n + " unknowns but this heap supports at most "
+            throw new SolveException(SolveException.Reason.TOO_LARGE, "the mesh has " + n + " unknowns but this heap supports at most "
                     + limit + "; lower [mesh] target_elements or start Java with a larger -Xmx");
         }
         int ne = electrodes.size();
@@ -99,12 +99,12 @@ public final class BemSolver {
                     f -> progress.update("factoring", 0.7 + 0.25 * f));
         }
         if (solved == null) {
-            throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
+            throw new SolveException(SolveException.Reason.SINGULAR, "the collocation matrix is singular: two electrodes coincide or overlap; separate them");
         }
         DMatrixRMaj x = solved.x();
         double residual = solved.residual();
         if (!(residual < 1e-6)) {
-            throw new MeshException("the collocation matrix is singular (residual " + residual
+            throw new SolveException(SolveException.Reason.RESIDUAL, "the collocation matrix is singular (residual " + residual
                     + "): two electrodes coincide or overlap; separate them");
         }
         double[][] unit = new double[ne][n];
@@ -118,7 +118,7 @@ public final class BemSolver {
                 assembleSeconds, mirrorHalves);
         CapacitanceCheck check = solution.capacitanceCheck();
         if (check.refused()) {
-            throw new MeshException(check.message(electrodes));
+            throw new SolveException(SolveException.Reason.CAPACITANCE, check.message(electrodes));
         }
         progress.update("done", 1.0);
         return solution;

@@ -33,7 +33,7 @@ final class FactoredSystem {
         this.whole = whole;
     }
 
-    /** Factors A (kept, not modified); throws {@link MeshException} when A is singular. */
+    /** Factors A (kept, not modified); throws {@link SolveException} when A is singular. */
     static FactoredSystem factor(BoundaryMesh mesh, DMatrixRMaj a) {
         int n = a.numRows;
         int[] s = MirrorFold.mirror(mesh);
@@ -68,7 +68,7 @@ final class FactoredSystem {
         }
         LinearSolverDense<DMatrixRMaj> w = lu(a);
         if (w == null) {
-            throw new MeshException("the collocation matrix is singular: two electrodes coincide or overlap; separate them");
+            throw new SolveException(SolveException.Reason.SINGULAR, "the collocation matrix is singular: two electrodes coincide or overlap; separate them");
         }
         return new FactoredSystem(a, null, null, null, null, w);
     }

@@ -79,7 +79,7 @@ public final class HarmonicOperator {
         }
         SchurLuSolver.Solution sol = system.solve(rhs);
         if (!(sol.residual() < RESIDUAL_LIMIT)) {
-            throw new MeshException("the harmonic-" + m + " collocation matrix is singular (residual " + sol.residual()
+            throw new SolveException(SolveException.Reason.SINGULAR, m, "the harmonic-" + m + " collocation matrix is singular (residual " + sol.residual()
                     + "): two electrodes coincide or overlap; separate them");
         }
         double[][] unit = new double[ne][n];
@@ -135,7 +135,7 @@ public final class HarmonicOperator {
      * coefficient of cos(m phi), or of sin(m phi)) at every mesh node; returns the density amplitudes
      * sigma/eps0 (V/m) at every node, one row per right-hand side.
      *
-     * @throws MeshException if a solve misses the residual limit (a singular system)
+     * @throws SolveException if a solve misses the residual limit (a singular system)
      */
     public double[][] solve(double[][] boundary_V) {
         int n = unknowns();
@@ -157,7 +157,7 @@ public final class HarmonicOperator {
             }
         }
         if (!(sol.residual() < RESIDUAL_LIMIT * scale)) {
-            throw new MeshException("harmonic-" + m + " solve missed its residual (" + sol.residual() + ")");
+            throw new SolveException(SolveException.Reason.RESIDUAL, m, "harmonic-" + m + " solve missed its residual (" + sol.residual() + ")");
         }
         double[][] out = new double[boundary_V.length][n];
         for (int c = 0; c < out.length; c++) {

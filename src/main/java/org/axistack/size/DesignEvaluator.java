@@ -9,7 +9,7 @@ import java.util.OptionalDouble;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
-import org.axistack.field.MeshException;
+import org.axistack.field.SolveException;
 import org.axistack.field.SolveProgress;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
@@ -77,7 +77,7 @@ public final class DesignEvaluator {
         FieldSolution sol;
         try {
             sol = BemSolver.solve(electrodes, stack.mesh(), progress);
-        } catch (MeshException e) {
+        } catch (SolveException e) {
             return new Candidate(p, List.of(), "mesh: " + e.getMessage());
         }
         int biased = stack.indexOf(family.biasedElectrodes().get(0));

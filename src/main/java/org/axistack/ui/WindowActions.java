@@ -21,7 +21,7 @@ import javax.swing.KeyStroke;
 import javax.swing.SwingWorker;
 import javax.swing.filechooser.FileNameExtensionFilter;
 
-import org.axistack.field.MeshException;
+import org.axistack.field.SolveException;
 import org.axistack.io.StackInputException;
 import org.axistack.io.TraceTableCsv;
 import org.axistack.model.Stack;
@@ -215,7 +215,7 @@ final class WindowActions {
                     Throwable c = e.getCause();
                     if (c instanceof CancellationException) {
                         w.status("solve cancelled; the previous lens stays shown");
-                    } else if (c instanceof MeshException m) {
+                    } else if (c instanceof SolveException m) {
                         error(w.doc.shownAs(), "the field cannot be solved as given: " + m.getMessage());
                     } else {
                         error(w.doc.shownAs(), "internal error while solving: " + c + ". This is a bug; please report"

@@ -13,7 +13,7 @@ import net.jqwik.api.Provide;
 import org.axistack.field.BemSolver;
 import org.axistack.field.CapacitanceCheck;
 import org.axistack.field.FieldSolution;
-import org.axistack.field.MeshException;
+import org.axistack.field.SolveException;
 import org.axistack.field.SolveProgress;
 import org.axistack.model.GeometryCheck;
 import org.axistack.model.MeshSettings;
@@ -56,7 +56,7 @@ class NearTouchingProperties {
         FieldSolution sol;
         try {
             sol = BemSolver.solve(s.electrodes(), s.mesh(), SolveProgress.NONE);
-        } catch (MeshException e) {
+        } catch (SolveException e) {
             throw new AssertionError("refused a near-touching stack the refinement should handle: " + e.getMessage(), e);
         }
         CapacitanceCheck c = sol.capacitanceCheck();
