@@ -13,7 +13,7 @@ import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
 import org.axistack.field.SectorField;
 import org.axistack.io.StackInputException;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 import org.axistack.model.StartRay;

@@ -6,7 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 import org.axistack.model.StartRay;

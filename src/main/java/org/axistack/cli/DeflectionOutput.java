@@ -10,7 +10,7 @@ import java.util.Map;
 import org.axistack.field.BiasedField;
 import org.axistack.field.SectorField;
 import org.axistack.field.SolveProgress;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 import org.axistack.optics.ParaxialOptics;

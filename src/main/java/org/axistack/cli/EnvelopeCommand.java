@@ -17,7 +17,7 @@ import org.axistack.beam.ScanResult;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.io.StackInputException;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.plan.PlanAnalysis;
 import org.axistack.report.ChartFiles;

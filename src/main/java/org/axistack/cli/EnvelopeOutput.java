@@ -23,7 +23,7 @@ import org.axistack.beam.ScanResult;
 import org.axistack.beam.Waist;
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.CsvTable;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.report.SafetyNotice;
 

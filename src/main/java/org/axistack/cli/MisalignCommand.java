@@ -15,7 +15,7 @@ import org.axistack.field.FieldSolution;
 import org.axistack.io.AlignmentTableCsv;
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackInputException;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.MisalignmentBudget;
 import org.axistack.optics.MisalignmentStudy;

@@ -10,7 +10,7 @@ import java.util.concurrent.Callable;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.io.StackInputException;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.AberrationPolynomials;
 import org.axistack.optics.Aberrations;

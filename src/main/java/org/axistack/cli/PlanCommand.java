@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.axistack.io.StackInputException;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;

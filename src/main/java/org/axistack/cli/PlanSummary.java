@@ -4,7 +4,7 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
 
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.plan.PlanFormat;

@@ -16,7 +16,7 @@ import org.axistack.field.FieldSolution;
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackInputException;
 import org.axistack.io.SweepTableCsv;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.report.ChartFiles;
 import org.axistack.report.SafetyNotice;

@@ -15,7 +15,7 @@ import org.axistack.field.BiasedField;
 import org.axistack.field.Field;
 import org.axistack.io.StackInputException;
 import org.axistack.io.TraceTableCsv;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
 import org.axistack.report.SafetyNotice;

@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.OptionalDouble;
 
 import org.axistack.field.AxialField;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;

@@ -1,5 +1,6 @@
 package org.axistack.io;
 
+import org.axistack.model.Units;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;

@@ -1,5 +1,6 @@
 package org.axistack.io;
 
+import org.axistack.model.Units;
 import static org.axistack.io.TableFields.fmt;
 
 import java.io.IOException;

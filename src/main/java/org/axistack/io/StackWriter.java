@@ -1,5 +1,6 @@
 package org.axistack.io;
 
+import org.axistack.model.Units;
 import java.io.IOException;
 import java.nio.file.Path;
 import org.axistack.model.Beam;

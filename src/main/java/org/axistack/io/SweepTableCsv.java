@@ -1,5 +1,6 @@
 package org.axistack.io;
 
+import org.axistack.model.Units;
 import java.util.List;
 
 import org.axistack.tune.SweepPoint;

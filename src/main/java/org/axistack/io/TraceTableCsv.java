@@ -1,5 +1,6 @@
 package org.axistack.io;
 
+import org.axistack.model.Units;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;

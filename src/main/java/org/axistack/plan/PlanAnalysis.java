@@ -17,7 +17,7 @@ import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
 import org.axistack.field.SolveProgress;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Electrode;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;

@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.TreeMap;
 
 import org.axistack.field.BiasedField;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
 import org.axistack.trace.BundleResult;

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.axistack.field.FieldSolution;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.tune.BiasTuner;
 import org.axistack.report.Rounding;

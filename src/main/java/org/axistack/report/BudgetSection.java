@@ -3,7 +3,7 @@ package org.axistack.report;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.TuneResult;

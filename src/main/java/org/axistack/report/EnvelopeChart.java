@@ -8,7 +8,7 @@ import org.axistack.beam.EnvelopePoint;
 import org.axistack.beam.EnvelopeStudyResult;
 import org.axistack.beam.ScanPoint;
 import org.axistack.beam.ScanResult;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Electrode;
 import org.axistack.model.Segment;
 import org.axistack.model.Stack;

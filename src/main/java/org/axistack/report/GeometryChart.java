@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Contour;
 import org.axistack.model.Electrode;
 import org.axistack.model.Segment;

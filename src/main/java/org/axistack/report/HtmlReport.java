@@ -12,7 +12,7 @@ import java.util.Map;
 
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackWriter;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.trace.RayPoint;
 import org.axistack.trace.Trajectory;

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.axistack.field.FieldSolution;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;

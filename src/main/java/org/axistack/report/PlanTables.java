@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.axistack.io.CsvTable;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.SpotSizeBudget;

@@ -6,7 +6,7 @@ import java.awt.Paint;
 import java.awt.geom.Ellipse2D;
 import java.util.List;
 
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.size.Design;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;

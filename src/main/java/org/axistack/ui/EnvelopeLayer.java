@@ -11,7 +11,7 @@ import org.axistack.beam.EnvelopeStart;
 import org.axistack.beam.EnvelopeStudy;
 import org.axistack.beam.EnvelopeSolver;
 import org.axistack.field.AxialField;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.report.LensChart;
 

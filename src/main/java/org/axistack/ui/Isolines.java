@@ -3,7 +3,7 @@ package org.axistack.ui;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.report.LensChart;
 
 /**

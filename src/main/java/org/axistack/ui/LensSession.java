@@ -14,7 +14,7 @@ import org.axistack.field.BiasedField;
 import org.axistack.field.FieldSolution;
 import org.axistack.field.SectorField;
 import org.axistack.field.SolveProgress;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.report.GeometryChart;
 import org.axistack.report.LensChart;

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.axistack.field.AxialField;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
 import org.axistack.report.LensChart;

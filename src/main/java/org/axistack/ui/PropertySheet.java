@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.axistack.field.BiasedField;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Electrode;
 import org.axistack.model.Stack;
 import org.axistack.model.SurfaceFieldLimits;

@@ -6,7 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 import java.nio.file.Path;
 import org.axistack.field.SolveProgress;
 import org.axistack.io.StackReader;
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.ParaxialOptics;

@@ -33,7 +33,7 @@ import javax.swing.JTextField;
 import javax.swing.MenuElement;
 import javax.swing.SwingUtilities;
 
-import org.axistack.io.Units;
+import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.ParaxialOptics;

@@ -1,8 +1,9 @@
-package org.axistack.io;
+package org.axistack.model;
 
 /**
  * The one place where user units meet SI: stack files, command-line values and printed output use
- * millimetres, volts per millimetre and milliradians; everything inside is metres, V/m and radians.
+ * millimetres, volts per millimetre and milliradians; everything inside is metres, V/m and radians. In the model
+ * package so that physics code that words a number for a message converts here too.
  */
 public final class Units {
     private Units() {
