@@ -94,9 +94,14 @@ final class OpticsCommand implements Callable<Integer> {
         }
         Stack stack = input.loadOrDemo();
         PrintWriter err = spec.commandLine().getErr();
+        OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
+        // checked before the solve: a usage error never waits for the work
+        if (objectHeight_mm != null && objectZ.isEmpty()) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--object-height-mm needs a finite object: give --object-z or object_z_mm in the stack's [beam]");
+        }
         org.axistack.field.SolveProgress progress = SolveReporter.to(err, quiet.on());
         BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), progress).biased();
-        OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("stack", input.shownAs());
         out.put("particle", stack.beam().particle().label());
@@ -130,10 +135,6 @@ final class OpticsCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), String.format(Locale.ROOT,
                     "--object-z %s mm lies at or after the lens (z = %s mm is %s); give an object before it",
                     PlanCommand.num(Units.mToMm(objectZ.getAsDouble())), PlanCommand.num(Units.mToMm(exit)), exitIs));
-        }
-        if (objectHeight_mm != null && objectZ.isEmpty()) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--object-height-mm needs a finite object: give --object-z or object_z_mm in the stack's [beam]");
         }
         CardinalElements c = optics.cardinal();
         out.put("reflected", false);

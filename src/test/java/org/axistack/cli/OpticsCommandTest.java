@@ -95,6 +95,10 @@ class OpticsCommandTest {
         Run alone = run("optics", stack(), "--object-z=-80", "--aperture-mrad=3");
         assertThat(alone.code()).isEqualTo(2);
         assertThat(alone.err()).contains("--aperture-mrad needs --object-height-mm");
+        // an object height without a finite object: refused before any solve (no progress lines)
+        Run noObject = run("optics", stack(), "--object-height-mm=0.5");
+        assertThat(noObject.code()).isEqualTo(2);
+        assertThat(noObject.err()).contains("needs a finite object").doesNotContain("field solve");
     }
 
     @Test
