@@ -4,7 +4,6 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
@@ -19,7 +18,6 @@ import org.axistack.model.Stack;
 import org.axistack.model.StartRay;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
-import org.axistack.optics.SplitDeflection;
 import org.axistack.optics.SteeringSolve;
 import org.axistack.optics.SteeringSolve.Target;
 import org.axistack.report.SafetyNotice;
@@ -298,6 +296,6 @@ final class AimCommand implements Callable<Integer> {
     }
 
     static String fmt(double x) {
-        return String.format(Locale.ROOT, "%.4g", x);
+        return org.axistack.model.Numbers.general(x, org.axistack.model.Numbers.WINDOW_DIGITS);
     }
 }

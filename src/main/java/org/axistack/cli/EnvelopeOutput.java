@@ -43,7 +43,7 @@ final class EnvelopeOutput {
     }
 
     private static String f(double x) {
-        return String.format(Locale.ROOT, "%.6g", x);
+        return org.axistack.model.Numbers.general(x, org.axistack.model.Numbers.MESSAGE_DIGITS);
     }
 
     static void text(PrintWriter w, String source, Stack stack, EnvelopeStudyResult r, ScanResult scan) {

@@ -277,6 +277,6 @@ final class MisalignCommand implements Callable<Integer> {
         if (!Double.isFinite(x)) {
             return Double.isNaN(x) ? "-" : "unlimited";
         }
-        return String.format(Locale.ROOT, "%.4g", x);
+        return org.axistack.model.Numbers.general(x, org.axistack.model.Numbers.WINDOW_DIGITS);
     }
 }

@@ -88,6 +88,6 @@ final class OffAxisOutput {
         if (x == null) {
             return "-";
         }
-        return String.format(Locale.ROOT, "%.6g", ((Number) x).doubleValue());
+        return org.axistack.model.Numbers.general(((Number) x).doubleValue(), org.axistack.model.Numbers.MESSAGE_DIGITS);
     }
 }

@@ -308,6 +308,6 @@ final class OpticsCommand implements Callable<Integer> {
         if (x == null) {
             return "-";
         }
-        return String.format(Locale.ROOT, "%.6g", ((Number) x).doubleValue());
+        return org.axistack.model.Numbers.general(((Number) x).doubleValue(), org.axistack.model.Numbers.MESSAGE_DIGITS);
     }
 }

@@ -48,10 +48,11 @@ public final class SurfaceFields {
 
     /** Five significant digits, trailing zeros cut ("5.5", "195.43"). */
     static String num(double x) {
-        if (x == Math.rint(x) && Math.abs(x) < 1e12) {
+        if (org.axistack.model.Numbers.whole(x, 1e12)) {
             return String.valueOf((long) x);
         }
-        return String.format(Locale.ROOT, "%.5g", x).replaceAll("(\\.\\d*?)0+$", "$1").replaceAll("\\.$", "");
+        return org.axistack.model.Numbers.trimZeros(org.axistack.model.Numbers.general(x,
+                org.axistack.model.Numbers.TEXT_DIGITS));
     }
 
     /** The plain statement for a sharp corner. */
