@@ -4,7 +4,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.axistack.field.BiasedField;
 import org.axistack.field.SectorField;
 import org.axistack.model.Units;
 import org.axistack.model.Sectors;
@@ -26,7 +25,7 @@ import org.axistack.report.LensChart;
 public record CentralRayView(LensChart.Lines x, LensChart.Lines y, double screenZ_mm, double[] screen) {
 
     /** Planes at which the ray is sampled for the drawing. */
-    static final int PLANES = 121;
+    static final int PLANES = 81;
 
     public CentralRayView {
         screen = screen.clone();
@@ -42,11 +41,10 @@ public record CentralRayView(LensChart.Lines x, LensChart.Lines y, double screen
      * The central ray for the stack's biases and sector biases.
      *
      * @param stack   the stack at the biases shown (its sectors carry the sector biases)
-     * @param field   the round field at those biases
+     * @param optics  the round lens's paraxial optics at those biases
      * @param sectors the solved dipole harmonic of the split electrodes
      */
-    static CentralRayView of(Stack stack, BiasedField field, SectorField sectors) {
-        ParaxialOptics optics = ParaxialOptics.of(field, stack);
+    static CentralRayView of(Stack stack, ParaxialOptics optics, SectorField sectors) {
         double zEnd = stack.screenZ_m().orElse(optics.zEnd_m());
         double zStart = stack.beam().startZ_m().orElse(optics.zStart_m());
         double[] planes = new double[PLANES];

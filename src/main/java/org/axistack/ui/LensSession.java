@@ -128,11 +128,13 @@ public final class LensSession {
         Future<Side> side = HELPER.submit(() -> {
             long h0 = THREADS.getCurrentThreadCpuTime();
             LiveRays.Result rays = LiveRays.trace(biased, field);
-            PropertySheet props = PropertySheet.of(biased, field);
+            org.axistack.optics.ParaxialOptics[] optics = new org.axistack.optics.ParaxialOptics[1];
+            PropertySheet props = PropertySheet.of(biased, field, o -> optics[0] = o);
             java.util.Optional<CentralRayView> central = java.util.Optional.empty();
-            if (sectors != null) {
+            if (sectors != null && optics[0] != null) {
                 try {
-                    central = java.util.Optional.of(CentralRayView.of(biased, field, sectors));
+                    // the round optics of the property table, not computed a second time
+                    central = java.util.Optional.of(CentralRayView.of(biased, optics[0], sectors));
                     props = props.withCentralRay(central.get());
                 } catch (RuntimeException e) {
                     props = props.withRow(new PropertySheet.Row("central ray", "not available: " + e.getMessage(),

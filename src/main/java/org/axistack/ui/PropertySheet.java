@@ -102,6 +102,11 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
 
     /** Computes the sheet for the stack (with the biases of the field) and its field. */
     public static PropertySheet of(Stack stack, BiasedField field) {
+        return of(stack, field, o -> { });
+    }
+
+    /** The same, handing the paraxial optics it computed (if it could) to {@code optics}, so a caller reuses them. */
+    static PropertySheet of(Stack stack, BiasedField field, java.util.function.Consumer<ParaxialOptics> opticsOut) {
         List<Row> rows = new ArrayList<>();
         List<LensChart.Mark> marks = new ArrayList<>();
         Optional<CardinalElements> card = Optional.empty();
@@ -109,6 +114,7 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
         String problem = "";
         try {
             ParaxialOptics optics = ParaxialOptics.of(field, stack);
+            opticsOut.accept(optics);
             CardinalElements c = optics.cardinal();
             card = Optional.of(c);
             rows.add(new Row("lens kind", c.kind().name().toLowerCase(java.util.Locale.ROOT), Level.PLAIN));

@@ -128,6 +128,12 @@ class LensSessionTest {
         assertThat(Double.parseDouble(off.properties().value(PropertySheet.CENTRAL_X).orElseThrow()))
                 .isCloseTo(0, within(1e-9));
         assertThat(doubled.layers().centralX().size()).isEqualTo(CentralRayView.PLANES);
+        double[] ms = new double[9];
+        for (int i = 0; i < ms.length; i++) {
+            ms[i] = s.view(b, java.util.Map.of("steer", new double[] {10 + i, -i})).compute_ms();
+        }
+        java.util.Arrays.sort(ms);
+        System.out.printf("steerer view compute: median %.1f ms of %d (load affects it)%n", ms[ms.length / 2], ms.length);
         // a round stack has no central-ray rows
         assertThat(session.view(stack.biases_V()).properties().value(PropertySheet.CENTRAL_X)).isEmpty();
     }
