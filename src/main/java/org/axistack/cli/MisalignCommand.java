@@ -125,7 +125,7 @@ final class MisalignCommand implements Callable<Integer> {
         MisalignmentBudget b = study.budget();
         MonitorAlignment bench = MonitorAlignment.of(stack, sol, study);
         if (csv != null) {
-            AtomicFiles.writeString(csv, AlignmentTableCsv.text(b));
+            AtomicFiles.writeString(csv, AlignmentTableCsv.text(b, bench));
         }
         PrintWriter out = cl.getOut();
         if (json) {

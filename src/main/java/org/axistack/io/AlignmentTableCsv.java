@@ -52,6 +52,38 @@ public final class AlignmentTableCsv {
         return CsvTable.text(HEADER, rows);
     }
 
+    /**
+     * The table with the bench columns of the monitors and steerers: per monitor plane, the central ray's x shift
+     * there per unit misalignment ({@code monitor_<name>_shift_um_per_unit}); per split electrode, the x bias that
+     * cancels the screen displacement per unit misalignment ({@code steerer_<name>_x_bias_V_per_unit}). Rows are
+     * in the order of {@link #rows}: per electrode, decentre then tilt.
+     */
+    public static String text(MisalignmentBudget b, org.axistack.optics.MonitorAlignment bench) {
+        List<String> header = new ArrayList<>(HEADER);
+        for (String m : bench.monitorNames()) {
+            header.add("monitor_" + m + "_shift_um_per_unit");
+        }
+        for (String s : bench.steerers()) {
+            header.add("steerer_" + s + "_x_bias_V_per_unit");
+        }
+        List<List<Object>> rows = new ArrayList<>();
+        List<Object[]> base = rows(b);
+        for (int i = 0; i < base.size(); i++) {
+            int k = i / 2;
+            int motion = i % 2;
+            double unit = motion == 0 ? DECENTRE_UNIT_M : TILT_UNIT_RAD;
+            List<Object> row = new ArrayList<>(Arrays.asList(base.get(i)));
+            for (int m = 0; m < bench.monitorNames().size(); m++) {
+                row.add(finite(bench.shift()[k][motion][m] * unit * 1e6));
+            }
+            for (int s = 0; s < bench.steerers().size(); s++) {
+                row.add(finite(bench.cancelBias_V()[s][k][motion] * unit));
+            }
+            rows.add(row);
+        }
+        return CsvTable.text(header, rows);
+    }
+
     private static Double finite(double v) {
         return Double.isFinite(v) ? v : null;
     }

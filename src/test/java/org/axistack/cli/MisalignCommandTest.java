@@ -27,6 +27,24 @@ class MisalignCommandTest {
     }
 
     @Test
+    void theBenchCsvCarriesEveryMonitorAndSteererAsTheJsonDoes(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("align.csv");
+        String stack = "lens-library/proton-beamline-steerer.toml";
+        CliRun.Run r = CliRun.run("misalign", stack, "--quiet", "--json", "--csv", csv.toString());
+        assertThat(r.code()).as(r.err()).isEqualTo(0);
+        List<String> lines = Files.readAllLines(csv);
+        assertThat(lines.get(0)).endsWith(",monitor_viewer_shift_um_per_unit,monitor_last viewer_shift_um_per_unit,"
+                + "steerer_steer_x_bias_V_per_unit");
+        assertThat(lines).hasSize(1 + 2 * 3);
+        // the CSV's monitor column equals the JSON's shift at that monitor (decentre of the first electrode)
+        com.fasterxml.jackson.databind.JsonNode j = new com.fasterxml.jackson.databind.ObjectMapper().readTree(r.out());
+        double json = j.get("monitors").get(0).get("rows").get(0).get("shift_um_per_0_01_mm_decentre").asDouble();
+        String[] cells = lines.get(1).split(",");
+        assertThat(Double.parseDouble(cells[cells.length - 3])).isCloseTo(json,
+                org.assertj.core.api.Assertions.within(1e-9 * Math.max(1, Math.abs(json))));
+    }
+
+    @Test
     void badAllowanceAndUnknownFocusAreNamed() {
         CliRun.Run r = CliRun.run("misalign", "--quiet", "--allowed-shift", "-1");
         assertThat(r.code()).isEqualTo(2);
