@@ -75,37 +75,11 @@ class LensSessionTest {
 
     @Test
     void aSteererMovesTheCentralRayLinearlyAndTheViewAgreesWithTheDeflectionResponse() throws Exception {
-        Stack split = org.axistack.io.StackReader.parse("""
-                title = "Steerer between grounded tubes (demo data)"
-                [beam]
-                particle = "proton"
-                energy_eV = 1000.0
-                [[electrode]]
-                name = "in"
-                shape = "tube"
-                bias_V = 0.0
-                radius_mm = 5.0
-                z_start_mm = -45.0
-                z_end_mm = -5.5
-                [[electrode]]
-                name = "steer"
-                shape = "tube"
-                bias_V = 250.0
-                sectors = 4
-                deflection_x_V = 20.0
-                radius_mm = 5.0
-                z_start_mm = -5.0
-                z_end_mm = 5.0
-                [[electrode]]
-                name = "out"
-                shape = "tube"
-                bias_V = 0.0
-                radius_mm = 5.0
-                z_start_mm = 5.5
-                z_end_mm = 45.0
-                [screen]
-                z_mm = 40.0
-                """, "steerer.toml");
+        // the library's steerer, with the beam started on the axis (only the steering moves the central ray) and
+        // an x differential of 20 V
+        Stack lib = StackReader.read(Path.of("lens-library/proton-beamline-steerer.toml"));
+        lib = lib.withBeam(lib.beam().withStartRay(org.axistack.model.StartRay.ON_AXIS));
+        Stack split = CentralRayView.withDifferentials(lib, java.util.Map.of("steer", new double[] {20, 0}));
         LensSession s = LensSession.open(split, SolveProgress.NONE);
         double[] b = split.biases_V();
         LensView stored = s.view(b);
@@ -114,7 +88,8 @@ class LensSessionTest {
         java.util.Map<Integer, org.axistack.model.Sectors> byIndex = java.util.Map.of(1, split.sectors().get("steer"));
         var sf = org.axistack.field.SectorField.solve(s.solution(), byIndex, 1, SolveProgress.NONE);
         ParaxialOptics optics = ParaxialOptics.of(s.solution().withBiases(b), split);
-        var d = org.axistack.optics.SplitDeflection.of(sf, optics, optics.zStart_m(), new double[] {0.040});
+        var d = org.axistack.optics.SplitDeflection.of(sf, optics, split.beam().startZ_m().getAsDouble(),
+                new double[] {split.screenZ_m().getAsDouble()});
         double expected = Units.mToMm(d.ray(0, java.util.Map.of(1, split.sectors().get("steer").biases_V()))[0]);
         assertThat(x20).isCloseTo(expected, within(1e-3 * Math.abs(expected))); // the window shows 4 digits
         assertThat(Math.abs(x20)).isGreaterThan(1e-3);
