@@ -63,31 +63,41 @@ final class BiasPanel extends JPanel {
                     set(k, scale.bias_V(s.getValue()), true);
                 }
             });
-            f.addActionListener(ev -> typed(k));
-            f.addFocusListener(new java.awt.event.FocusAdapter() {
-                @Override
-                public void focusLost(java.awt.event.FocusEvent ev) {
-                    typed(k);
-                }
-            });
+            onCommit(f, () -> typed(k));
             sliders.add(s);
             fields.add(f);
-            c.gridy = row;
-            c.gridx = 0;
-            c.weightx = 0;
-            c.fill = GridBagConstraints.NONE;
-            add(label, c);
-            c.gridx = 1;
-            c.weightx = 1;
-            c.fill = GridBagConstraints.HORIZONTAL;
-            add(s, c);
-            c.gridx = 2;
-            c.weightx = 0;
-            add(f, c);
-            c.gridx = 3;
-            add(new JLabel("V"), c);
+            addRow(this, c, row, label, s, f);
             row++;
         }
+    }
+
+    /** Runs {@code commit} when a number field's value is confirmed: Enter, or leaving the field. */
+    static void onCommit(JTextField f, Runnable commit) {
+        f.addActionListener(ev -> commit.run());
+        f.addFocusListener(new java.awt.event.FocusAdapter() {
+            @Override
+            public void focusLost(java.awt.event.FocusEvent ev) {
+                commit.run();
+            }
+        });
+    }
+
+    /** Lays out one control row of a bias panel: name, slider (stretching), number field, "V". */
+    static void addRow(JPanel p, GridBagConstraints c, int row, JLabel label, JSlider s, JTextField f) {
+        c.gridy = row;
+        c.gridx = 0;
+        c.weightx = 0;
+        c.fill = GridBagConstraints.NONE;
+        p.add(label, c);
+        c.gridx = 1;
+        c.weightx = 1;
+        c.fill = GridBagConstraints.HORIZONTAL;
+        p.add(s, c);
+        c.gridx = 2;
+        c.weightx = 0;
+        p.add(f, c);
+        c.gridx = 3;
+        p.add(new JLabel("V"), c);
     }
 
     private void typed(int k) {

@@ -84,27 +84,8 @@ final class SteeringPanel extends JPanel {
                 f.setText(UiFormat.volts(v[axis]));
             }
         };
-        f.addActionListener(ev -> typed.run());
-        f.addFocusListener(new java.awt.event.FocusAdapter() {
-            @Override
-            public void focusLost(java.awt.event.FocusEvent ev) {
-                typed.run();
-            }
-        });
-        c.gridy = row;
-        c.gridx = 0;
-        c.weightx = 0;
-        c.fill = GridBagConstraints.NONE;
-        add(new JLabel(label), c);
-        c.gridx = 1;
-        c.weightx = 1;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        add(s, c);
-        c.gridx = 2;
-        c.weightx = 0;
-        add(f, c);
-        c.gridx = 3;
-        add(new JLabel("V"), c);
+        BiasPanel.onCommit(f, typed);
+        BiasPanel.addRow(this, c, row, new JLabel(label), s, f);
     }
 
     private static double snap(double v, double common) {
