@@ -58,6 +58,17 @@ public final class Numbers {
         return s.replaceAll("(\\.\\d*?)0+(e|$)", "$1$2").replaceAll("\\.(e|$)", "$1");
     }
 
+    /**
+     * A number in running text (plan text, surface-field words): a whole number as it is ("-1200"), others to
+     * {@link #TEXT_DIGITS} significant digits with trailing zeros cut ("48.881", "0.00012346").
+     */
+    public static String text(double x) {
+        if (whole(x, 1e12)) {
+            return String.valueOf((long) x);
+        }
+        return trimZeros(general(x, TEXT_DIGITS));
+    }
+
     /** Whether x is a whole number small enough to print as one ("-1200", not "-1200.0"). */
     public static boolean whole(double x, double below) {
         return x == Math.rint(x) && Math.abs(x) < below;

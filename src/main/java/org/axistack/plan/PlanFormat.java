@@ -9,9 +9,6 @@ public final class PlanFormat {
 
     /** A number for text ("-1200", "48.881", "0.00012346"). */
     public static String num(double x) {
-        if (Numbers.whole(x, 1e12)) {
-            return String.valueOf((long) x);
-        }
-        return Numbers.trimZeros(Numbers.general(x, Numbers.TEXT_DIGITS));
+        return Numbers.text(x);
     }
 }

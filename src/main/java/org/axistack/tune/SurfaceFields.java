@@ -48,11 +48,7 @@ public final class SurfaceFields {
 
     /** Five significant digits, trailing zeros cut ("5.5", "195.43"). */
     static String num(double x) {
-        if (org.axistack.model.Numbers.whole(x, 1e12)) {
-            return String.valueOf((long) x);
-        }
-        return org.axistack.model.Numbers.trimZeros(org.axistack.model.Numbers.general(x,
-                org.axistack.model.Numbers.TEXT_DIGITS));
+        return org.axistack.model.Numbers.text(x);
     }
 
     /** The plain statement for a sharp corner. */
