@@ -176,9 +176,8 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
         for (int i = 0; i < es.size(); i++) {
             org.axistack.field.SurfacePeak p = peaks.get(i).peak();
             if (p.sharp()) {
-                rows.add(new Row("surface field " + es.get(i).name() + " (V/mm)", String.format(java.util.Locale.ROOT,
-                        "sharp corner at z = %s, r = %s mm: grows without bound with the mesh; give the edge a radius",
-                        UiFormat.num(Units.mToMm(p.z_m())), UiFormat.num(Units.mToMm(p.r_m()))), Level.CAUTION));
+                rows.add(new Row("surface field " + es.get(i).name() + " (V/mm)",
+                        org.axistack.tune.SurfaceFields.sharpStatement(p), Level.CAUTION));
                 continue;
             }
             double e = p.field_V_per_m();
