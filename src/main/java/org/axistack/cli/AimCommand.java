@@ -2,7 +2,6 @@ package org.axistack.cli;
 
 import java.io.PrintWriter;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
@@ -127,8 +126,7 @@ final class AimCommand implements Callable<Integer> {
         double screen = stack.screenZ_m().orElse(optics.zEnd_m());
         double zStart = stack.beam().startZ_m().orElse(optics.zStart_m());
         List<Target> targets = targets(cl, stack, screen, zStart, steerers.size());
-        Map<Integer, Sectors> byIndex = new LinkedHashMap<>();
-        stack.sectors().forEach((n, s) -> byIndex.put(stack.indexOf(n), s));
+        Map<Integer, Sectors> byIndex = stack.sectorsByIndex();
         SectorField field = SectorField.solve(sol, byIndex, noTrace ? 1 : EXACT_ORDER, SolveReporter.to(err, silent));
         double[] monitors = stack.monitors().stream().mapToDouble(m -> m.z_m()).toArray();
         StartRay start = stack.beam().startRay();

@@ -30,8 +30,7 @@ final class SteeringBench {
     }
 
     static void rows(Stack stack, FieldSolution sol, double roundSolve_s, int repeat, PrintWriter out, Row row) {
-        Map<Integer, Sectors> split = new LinkedHashMap<>();
-        stack.sectors().forEach((n, s) -> split.put(stack.indexOf(n), s));
+        Map<Integer, Sectors> split = stack.sectorsByIndex();
         if (split.isEmpty()) {
             int e = 0;
             double[] b = stack.biases_V();

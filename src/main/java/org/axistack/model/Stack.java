@@ -253,6 +253,13 @@ public record Stack(String title, Beam beam, List<Electrode> electrodes, Optiona
         return m;
     }
 
+    /** The split electrodes' sectors by electrode index (stack order), as the harmonic solvers take them. */
+    public Map<Integer, Sectors> sectorsByIndex() {
+        Map<Integer, Sectors> m = new java.util.LinkedHashMap<>();
+        sectors.forEach((n, s) -> m.put(indexOf(n), s));
+        return m;
+    }
+
     /** Whether any electrode is split into sectors. */
     public boolean hasSectors() {
         return !sectors.isEmpty();

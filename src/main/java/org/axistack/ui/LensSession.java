@@ -83,10 +83,8 @@ public final class LensSession {
         first.axial(0.5 * (z0 + z1), 0, new double[1]); // builds the axial expansion once, here, not on the first move
         SectorField sectors = null;
         if (stack.hasSectors()) {
-            java.util.Map<Integer, org.axistack.model.Sectors> byIndex = new java.util.LinkedHashMap<>();
-            stack.sectors().forEach((n, s) -> byIndex.put(stack.indexOf(n), s));
             // the dipole harmonic only: the central ray's deflection is first order in it
-            sectors = SectorField.solve(sol, byIndex, 1, (stage, f) -> progress.update("split electrodes: " + stage, 1));
+            sectors = SectorField.solve(sol, stack.sectorsByIndex(), 1, (stage, f) -> progress.update("split electrodes: " + stage, 1));
         }
         return new LensSession(stack, sol, grid, z0 - pad, z1 + pad, sectors);
     }
