@@ -247,8 +247,8 @@ final class OpticsCommand implements Callable<Integer> {
         for (Object line : (java.util.List<?>) out.get("field_ends")) {
             w.println("    " + line);
         }
-        w.println(String.format(Locale.ROOT, "  estimated error %.1e of f (asked: %.0e)%s", (Double) out.get("error_estimate"),
-                (Double) out.get("accuracy_requested"), (Double) out.get("far_field_share") > 0
+        w.println(String.format(Locale.ROOT, "  estimated error %.1e of f (asked: %.0e; %s)%s", (Double) out.get("error_estimate"),
+                (Double) out.get("accuracy_requested"), org.axistack.optics.OpticsAccuracy.SCOPE, (Double) out.get("far_field_share") > 0
                         ? String.format(Locale.ROOT, "; the far field beyond the traced range contributes %.1e",
                                 (Double) out.get("far_field_share"))
                         : String.format(Locale.ROOT, "; moving the ended planes inward changes the results by %.1e",
