@@ -113,6 +113,7 @@ final class AimCommand implements Callable<Integer> {
         if (at.size() > 2) {
             throw new CommandLine.ParameterException(cl, "--at is given " + at.size() + " times; give it once or twice");
         }
+        List<double[]> planned = planes(cl, stack, steerers);
         PrintWriter err = cl.getErr();
         boolean silent = quiet.on();
         FieldSolution sol = BemSolver.solve(stack.electrodes(), stack.mesh(), SolveReporter.to(err, silent));
@@ -125,7 +126,7 @@ final class AimCommand implements Callable<Integer> {
         }
         double screen = stack.screenZ_m().orElse(optics.zEnd_m());
         double zStart = stack.beam().startZ_m().orElse(optics.zStart_m());
-        List<Target> targets = targets(cl, stack, screen, zStart, steerers.size());
+        List<Target> targets = targets(cl, planned, screen, zStart);
         Map<Integer, Sectors> byIndex = stack.sectorsByIndex();
         SectorField field = SectorField.solve(sol, byIndex, noTrace ? 1 : EXACT_ORDER, SolveReporter.to(err, silent));
         double[] monitors = stack.monitors().stream().mapToDouble(m -> m.z_m()).toArray();
@@ -204,33 +205,33 @@ final class AimCommand implements Callable<Integer> {
         return list;
     }
 
-    private List<Target> targets(CommandLine cl, Stack stack, double screen, double zStart, int steerers) {
+    /**
+     * The --at planes read and checked before any solve: {z (NaN for a screen the stack does not place), x, y,
+     * slope x, slope y, with slopes (1 or 0)} in SI, each after the steerers that must act on it.
+     */
+    private List<double[]> planes(CommandLine cl, Stack stack, List<Integer> steerers) {
         List<String> specs = at.isEmpty() ? List.of("screen:0:0") : at;
         double[] sl = null;
         if (slopes != null) {
             sl = numbers(cl, "--slopes", slopes, 2, "SX:SY (mrad), for example 0:0");
         }
-        boolean withSlopes = steerers == 2 && specs.size() == 1;
+        boolean withSlopes = steerers.size() == 2 && specs.size() == 1;
         if (sl != null && !withSlopes) {
             throw new CommandLine.ParameterException(cl, "--slopes needs two steerers and one --at plane");
         }
-        if (steerers == 1 && specs.size() != 1) {
+        if (steerers.size() == 1 && specs.size() != 1) {
             throw new CommandLine.ParameterException(cl, "one steerer sets the position at one plane: give --at once,"
                     + " or name a second steerer with --steerer");
         }
-        List<Target> list = new ArrayList<>();
+        List<double[]> list = new ArrayList<>();
+        List<String> shown = new ArrayList<>();
         for (String s : specs) {
             String[] parts = s.split(":", -1);
             if (parts.length != 3) {
                 throw new CommandLine.ParameterException(cl, "--at " + s + " is not PLANE:X:Y; write for example"
                         + " --at screen:0.5:0 or --at 120:0:0 (z, x and y in mm)");
             }
-            double z = plane(cl, stack, parts[0].strip(), screen, s);
-            if (!(z > zStart)) {
-                throw new CommandLine.ParameterException(cl, "--at " + s + ": the plane z = "
-                        + PlanCommand.num(Units.mToMm(z)) + " mm is not after the central ray's start at z = "
-                        + PlanCommand.num(Units.mToMm(zStart)) + " mm");
-            }
+            double z = plane(cl, stack, parts[0].strip(), s);
             double[] xy = numbers(cl, "--at", parts[1] + ":" + parts[2], 2, "PLANE:X:Y with X and Y in mm");
             double limit = stack.openBore_m();
             if (Math.hypot(Units.mmToM(xy[0]), Units.mmToM(xy[1])) >= limit && limit > 0) {
@@ -240,7 +241,65 @@ final class AimCommand implements Callable<Integer> {
             }
             double sx = withSlopes ? Units.mradToRad(sl == null ? 0 : sl[0]) : 0;
             double sy = withSlopes ? Units.mradToRad(sl == null ? 0 : sl[1]) : 0;
-            list.add(new Target(z, Units.mmToM(xy[0]), Units.mmToM(xy[1]), withSlopes, sx, sy));
+            list.add(new double[] {z, Units.mmToM(xy[0]), Units.mmToM(xy[1]), sx, sy, withSlopes ? 1 : 0});
+            shown.add(s);
+        }
+        if (list.size() == 2 && list.get(0)[0] == list.get(1)[0]) {
+            throw new CommandLine.ParameterException(cl, "the two --at planes are the same; give two different planes");
+        }
+        // a steerer moves the beam only downstream of where it begins: every plane after the first steerer's start,
+        // and the last plane after every steerer's start (one plane with two steerers: after both)
+        int first = steerers.get(0);
+        int last = steerers.get(0);
+        for (int e : steerers) {
+            if (start(stack, e) < start(stack, first)) {
+                first = e;
+            }
+            if (start(stack, e) > start(stack, last)) {
+                last = e;
+            }
+        }
+        double latest = Double.NEGATIVE_INFINITY;
+        int latestAt = 0;
+        for (int i = 0; i < list.size(); i++) {
+            double z = list.get(i)[0];
+            double zz = Double.isNaN(z) ? Double.POSITIVE_INFINITY : z;
+            upstream(cl, stack, shown.get(i), z, first);
+            if (zz > latest) {
+                latest = zz;
+                latestAt = i;
+            }
+        }
+        upstream(cl, stack, shown.get(latestAt), list.get(latestAt)[0], last);
+        return list;
+    }
+
+    private static double start(Stack stack, int electrode) {
+        return stack.electrodes().get(electrode).contour().minZ_m();
+    }
+
+    private static void upstream(CommandLine cl, Stack stack, String spec, double z, int steerer) {
+        double from = start(stack, steerer);
+        if (!Double.isNaN(z) && !(z > from)) {
+            String name = stack.names().get(steerer);
+            throw new CommandLine.ParameterException(cl, "--at " + spec + ": the plane z = "
+                    + PlanCommand.num(Units.mToMm(z)) + " mm lies before the steerer " + name + ", which begins at z = "
+                    + PlanCommand.num(Units.mToMm(from)) + " mm; a steerer moves the beam only downstream of itself:"
+                    + " give a plane after z = " + PlanCommand.num(Units.mToMm(from)) + " mm (or 'screen')");
+        }
+    }
+
+    /** The checked planes as targets once the screen's default and the ray's start are known. */
+    private static List<Target> targets(CommandLine cl, List<double[]> planned, double screen, double zStart) {
+        List<Target> list = new ArrayList<>();
+        for (double[] p : planned) {
+            double z = Double.isNaN(p[0]) ? screen : p[0];
+            if (!(z > zStart)) {
+                throw new CommandLine.ParameterException(cl, "--at: the plane z = "
+                        + PlanCommand.num(Units.mToMm(z)) + " mm is not after the central ray's start at z = "
+                        + PlanCommand.num(Units.mToMm(zStart)) + " mm");
+            }
+            list.add(new Target(z, p[1], p[2], p[5] == 1, p[3], p[4]));
         }
         if (list.size() == 2 && list.get(0).z_m() == list.get(1).z_m()) {
             throw new CommandLine.ParameterException(cl, "the two --at planes are the same; give two different planes");
@@ -248,9 +307,10 @@ final class AimCommand implements Callable<Integer> {
         return list;
     }
 
-    private double plane(CommandLine cl, Stack stack, String p, double screen, String spec) {
+    /** z of a named plane, m; NaN for 'screen' when the stack places no screen (the optics' image side then). */
+    private double plane(CommandLine cl, Stack stack, String p, String spec) {
         if (p.equals("screen")) {
-            return screen;
+            return stack.screenZ_m().orElse(Double.NaN);
         }
         for (int i = 0; i < stack.monitors().size(); i++) {
             if (stack.monitorLabel(i).equals(p)) {

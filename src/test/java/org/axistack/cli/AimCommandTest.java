@@ -136,6 +136,12 @@ class AimCommandTest {
             assertThat(r.code()).as(String.join(" ", c) + ": " + r.err()).isEqualTo(2);
             assertThat(r.err()).as(String.join(" ", c)).contains(c[0]).doesNotContain("Exception");
         }
+        // a plane upstream of the steerer (after the beam's start at -35 mm, before the steerer's start at -5 mm):
+        // refused as a usage error before any solve (no solve progress printed)
+        CliRun.Run before = CliRun.run("aim", stack.toString(), "--at", "-10:0.01:0");
+        assertThat(before.code()).as(before.err()).isEqualTo(2);
+        assertThat(before.err()).contains("--at -10:0.01:0", "lies before the steerer steer", "begins at z = -5 mm")
+                .doesNotContain("solv").doesNotContain("Exception");
         CliRun.Run round = CliRun.run("aim", "--no-trace");
         assertThat(round.code()).isEqualTo(2);
         assertThat(round.err()).contains("no split electrode");
