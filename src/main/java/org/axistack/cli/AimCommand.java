@@ -23,9 +23,6 @@ import org.axistack.report.SafetyNotice;
 import org.axistack.trace.SteeringBundle;
 import org.axistack.tune.BiasRange;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -87,8 +84,8 @@ final class AimCommand implements Callable<Integer> {
     @Option(names = "--no-trace", description = "Skip the exact three-dimensional traces (first-order answer only).")
     boolean noTrace;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @picocli.CommandLine.Mixin
     QuietOption quiet;
@@ -151,12 +148,8 @@ final class AimCommand implements Callable<Integer> {
         }
         Map<String, Object> out = AimOutput.map(input.shownAs(), stack, solve, targets, range, zStart, bundle);
         PrintWriter w = cl.getOut();
-        if (json) {
-            try {
-                w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(out));
-            } catch (JsonProcessingException e) {
-                throw new IllegalStateException(e);
-            }
+        if (json.on()) {
+            w.println(JsonOption.text(out));
         } else {
             AimOutput.text(w, stack, out);
             w.println();

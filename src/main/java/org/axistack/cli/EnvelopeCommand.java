@@ -104,8 +104,8 @@ final class EnvelopeCommand implements Callable<Integer> {
     @Option(names = "--png", paramLabel = "FILE", description = "Draw the envelope with the electrodes as PNG.")
     Path png;
 
-    @Option(names = "--json", description = "Print JSON instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Override
     public Integer call() throws StackInputException {
@@ -128,7 +128,7 @@ final class EnvelopeCommand implements Callable<Integer> {
         }
         writeFiles(cl, stack, res, scan);
         PrintWriter out = cl.getOut();
-        if (json) {
+        if (json.on()) {
             out.println(EnvelopeOutput.json(stack, res, scan));
         } else {
             EnvelopeOutput.text(out, input.shownAs(), stack, res, scan);
@@ -157,7 +157,7 @@ final class EnvelopeCommand implements Callable<Integer> {
             top = scanMax_A;
         }
         return checked(cl, () -> cs.scan(ch, base, top, scanSteps, f -> {
-            if (!json) {
+            if (!json.on()) {
                 err.printf(java.util.Locale.ROOT, "\rcurrent scan %3.0f %%", 100 * f);
                 if (f >= 1) {
                     err.println();

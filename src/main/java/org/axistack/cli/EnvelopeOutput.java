@@ -1,7 +1,5 @@
 package org.axistack.cli;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
@@ -213,11 +211,7 @@ final class EnvelopeOutput {
         }
         m.put("method", METHOD_NOTE);
         m.put("safety", SafetyNotice.lines());
-        try {
-            return new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(m);
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
-        }
+        return JsonOption.text(m);
     }
 
     static void writeEnvelopeCsv(Path file, EnvelopeStudyResult r) throws IOException {

@@ -18,8 +18,6 @@ import org.axistack.model.Electrode;
 import org.axistack.model.Stack;
 import org.axistack.report.SafetyNotice;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -51,8 +49,8 @@ final class FieldCommand implements Callable<Integer> {
             description = "Axial table range and step in mm, e.g. --axis=-15:15:0.5 (default: the stack's extent, 41 points).")
     String axis;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Override
     public Integer call() throws StackInputException {
@@ -73,7 +71,7 @@ final class FieldCommand implements Callable<Integer> {
             field.axial(Units.mmToM(z_mm), 1, d);
             table.add(new double[] {z_mm, d[0], -d[1] / 1000.0});
         }
-        if (json) {
+        if (json.on()) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("stack", input.shownAs());
             // one word per thing: an element is a panel of the contour; the unknowns are its charge values
@@ -110,11 +108,7 @@ final class FieldCommand implements Callable<Integer> {
                 ax.add(am);
             }
             m.put("axis", ax);
-            try {
-                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(m));
-            } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-                throw new IllegalStateException(e);
-            }
+            out.println(JsonOption.text(m));
             out.flush();
             return 0;
         }

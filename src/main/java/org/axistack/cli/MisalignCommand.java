@@ -25,9 +25,6 @@ import org.axistack.optics.StartPlaneException;
 import org.axistack.plan.PlanAnalysis;
 import org.axistack.report.SafetyNotice;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -72,8 +69,8 @@ final class MisalignCommand implements Callable<Integer> {
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the bench alignment table to this CSV file.")
     Path csv;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Mixin
     QuietOption quiet;
@@ -128,7 +125,7 @@ final class MisalignCommand implements Callable<Integer> {
             AtomicFiles.writeString(csv, AlignmentTableCsv.text(b, bench));
         }
         PrintWriter out = cl.getOut();
-        if (json) {
+        if (json.on()) {
             json(out, study, screenFrom, bench);
         } else {
             text(out, stack, study, screenFrom, bench);
@@ -193,11 +190,7 @@ final class MisalignCommand implements Callable<Integer> {
         m.put("factor_seconds", study.factorSeconds());
         m.put("response_seconds", study.responseSeconds());
         m.put("study_seconds", study.totalSeconds());
-        try {
-            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(m));
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        out.println(JsonOption.text(m));
     }
 
     private static Double finite(double x) {

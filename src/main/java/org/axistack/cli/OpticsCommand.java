@@ -21,9 +21,6 @@ import org.axistack.optics.ReflectionException;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.report.SafetyNotice;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -58,8 +55,8 @@ final class OpticsCommand implements Callable<Integer> {
             description = "Axial object position in mm (default: the stack's [beam] object, else at infinity).")
     Double objectZ_mm;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Option(names = "--object-height-mm", paramLabel = "H",
             description = "Object height in mm for the off-axis aberrations' effects (needs a finite object).")
@@ -224,12 +221,8 @@ final class OpticsCommand implements Callable<Integer> {
 
     private void print(Map<String, Object> out) {
         PrintWriter w = spec.commandLine().getOut();
-        if (json) {
-            try {
-                w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(out));
-            } catch (JsonProcessingException e) {
-                throw new IllegalStateException(e);
-            }
+        if (json.on()) {
+            w.println(JsonOption.text(out));
             return;
         }
         w.println("Paraxial optics of " + out.get("stack"));

@@ -27,9 +27,6 @@ import org.axistack.report.ChartFiles;
 import org.axistack.report.ProbeChart;
 import org.axistack.report.SafetyNotice;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -97,8 +94,8 @@ final class ProbeCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Write probe.csv, probe.png and probe.svg into this folder.")
     Path out;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Override
     public Integer call() throws StackInputException, IOException {
@@ -149,7 +146,7 @@ final class ProbeCommand implements Callable<Integer> {
             });
         }
         PrintWriter w = cl.getOut();
-        if (json) {
+        if (json.on()) {
             json(w, study);
         } else {
             text(w, stack, study);
@@ -194,11 +191,7 @@ final class ProbeCommand implements Callable<Integer> {
         }
         m.put("curves", curves);
         m.put("notes", study.notes());
-        try {
-            w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(m));
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        w.println(JsonOption.text(m));
     }
 
     private void text(PrintWriter w, Stack stack, ProbeStudy study) {

@@ -24,9 +24,6 @@ import org.axistack.report.SweepChart;
 import org.axistack.tune.BiasSweep;
 import org.axistack.tune.SweepPoint;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -75,8 +72,8 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--png", paramLabel = "FILE", description = "Write a chart of the sweep to this PNG file.")
     Path png;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Mixin
     QuietOption quiet;
@@ -113,7 +110,7 @@ final class SweepCommand implements Callable<Integer> {
             ChartFiles.writePng(SweepChart.of(stack, vary, points, "Sweep of " + vary + ": " + stack.title()), 1000, 720, png);
         }
         PrintWriter out = cl.getOut();
-        if (json) {
+        if (json.on()) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("stack", input.shownAs());
             m.put("electrode", vary);
@@ -129,11 +126,7 @@ final class SweepCommand implements Callable<Integer> {
                 rows.add(row);
             }
             m.put("points", rows);
-            try {
-                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(m));
-            } catch (JsonProcessingException e) {
-                throw new IllegalStateException(e);
-            }
+            out.println(JsonOption.text(m));
         } else {
             text(out, stack, points, seconds, objectZ);
         }

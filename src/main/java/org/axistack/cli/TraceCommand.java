@@ -34,8 +34,6 @@ import org.axistack.trace.TraceTargets;
 import org.axistack.trace.Tracer;
 import org.axistack.trace.Trajectory;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -119,8 +117,8 @@ final class TraceCommand implements Callable<Integer> {
     @Option(names = "--table", paramLabel = "FILE.csv", description = "Write every ray at every plane as CSV.")
     Path table;
 
-    @Option(names = "--json", description = "Print the results as JSON instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads. Default: the number of cores.")
     Integer threads;
@@ -249,7 +247,7 @@ final class TraceCommand implements Callable<Integer> {
         if (table != null) {
             writeTable(res);
         }
-        if (json) {
+        if (json.on()) {
             printJson(out, stack, res, method, ab);
         } else {
             printText(out, stack, res, method);
@@ -431,11 +429,7 @@ final class TraceCommand implements Callable<Integer> {
             root.put("aberrations", ab.json());
         }
         root.put("safety_notice", SafetyNotice.text());
-        try {
-            w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(root));
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
-        }
+        w.println(JsonOption.text(root));
     }
 
     private static Double finiteOrNull(double v) {

@@ -3,7 +3,6 @@ package org.axistack.cli;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
@@ -98,8 +97,8 @@ final class TuneCommand implements Callable<Integer> {
     @Option(names = "--focal-length-mm", paramLabel = "F", description = "Second condition: image-side focal length, mm.")
     Double focalLength_mm;
 
-    @Option(names = "--json", description = "Print JSON (snake_case keys with units) instead of text.")
-    boolean json;
+    @Mixin
+    JsonOption json;
 
     @Override
     public Integer call() throws StackInputException {
@@ -136,7 +135,7 @@ final class TuneCommand implements Callable<Integer> {
         FocusRanking.Ranked ranked = FocusRanking.rank(result, budgets); // most useful first
         result = ranked.result();
         PrintWriter out = cl.getOut();
-        report.single(out, result, ranked.budgets(), seconds, json);
+        report.single(out, result, ranked.budgets(), seconds, json.on());
         out.flush();
         if (!result.found()) {
             throw new OutcomeException("no bias of '" + vary + "' in " + PlanCommand.num(range.from_V()) + " .. "
@@ -177,7 +176,7 @@ final class TuneCommand implements Callable<Integer> {
         }
         double seconds = (System.nanoTime() - t0) * 1e-9;
         PrintWriter out = cl.getOut();
-        report.pair(out, result, budgets, seconds, json);
+        report.pair(out, result, budgets, seconds, json.on());
         out.flush();
         if (!result.found()) {
             throw new OutcomeException("no pair of biases in the ranges meets both conditions (nearest approach above);"

@@ -21,9 +21,6 @@ import org.axistack.tune.SecondCondition;
 import org.axistack.tune.SurfaceFieldCheck;
 import org.axistack.tune.TuneResult;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 /** Text and JSON output of the {@code tune} command (keys of interface.md, plus more). */
 final class TuneReport {
@@ -305,11 +302,7 @@ final class TuneReport {
     }
 
     private static void printJson(PrintWriter w, Map<String, Object> out) {
-        try {
-            w.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(out));
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        w.println(JsonOption.text(out));
     }
 
     private static Double mm(double m) {
