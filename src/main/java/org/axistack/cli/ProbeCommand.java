@@ -22,7 +22,6 @@ import org.axistack.probe.ProbeLens;
 import org.axistack.probe.ProbePoint;
 import org.axistack.probe.ProbeSource;
 import org.axistack.probe.ProbeStudy;
-import org.axistack.probe.ProbeTerm;
 import org.axistack.report.ChartFiles;
 import org.axistack.report.ProbeChart;
 import org.axistack.report.SafetyNotice;
@@ -230,8 +229,8 @@ final class ProbeCommand implements Callable<Integer> {
                         p.interior() || c.model().fixedMagnification() ? "" : " (angle at the range end)");
             }
             w.println("    " + c.dominanceInWords());
-            double diffr = c.points().stream().mapToDouble(p -> p.share(ProbeTerm.DIFFRACTION)).max().orElse(0);
-            w.println(diffr < 0.01 ? String.format(Locale.ROOT,
+            double diffr = c.diffractionShare();
+            w.println(c.diffractionNegligible() ? String.format(Locale.ROOT,
                     "    diffraction negligible: below %.2g %% of the squared size everywhere on the curve", Math.max(100 * diffr, 1e-6))
                     : String.format(Locale.ROOT, "    diffraction matters: up to %.0f %% of the squared size", 100 * diffr));
         }

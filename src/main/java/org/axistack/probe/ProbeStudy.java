@@ -35,6 +35,12 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
     /** Default largest image-side aperture half-angle, mrad. */
     public static final String DEFAULT_ALPHA_TO_MRAD = "50";
 
+    /**
+     * A term whose share of the squared probe size stays below this everywhere on a curve is called negligible
+     * (1 %: it changes the quadrature size by under 0.5 %; common practice, no source).
+     */
+    public static final double NEGLIGIBLE_SHARE = 0.01;
+
     public ProbeStudy {
         curves = List.copyOf(curves);
         notes = List.copyOf(notes);
@@ -74,6 +80,19 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
     public record Curve(ProbeWorkingPoint workingPoint, ProbeModel model, List<ProbePoint> points) {
         public Curve {
             points = List.copyOf(points);
+        }
+
+        /**
+         * The largest share of diffraction in the squared probe size on the curve, (d_A/d)^2 with d the quadrature
+         * sum (0..1; 0 for an empty curve).
+         */
+        public double diffractionShare() {
+            return points.stream().mapToDouble(p -> p.share(ProbeTerm.DIFFRACTION)).max().orElse(0);
+        }
+
+        /** Whether diffraction is negligible on the whole curve: below {@link #NEGLIGIBLE_SHARE} of the squared size. */
+        public boolean diffractionNegligible() {
+            return diffractionShare() < NEGLIGIBLE_SHARE;
         }
 
         /** The curve point with the largest current whose FW50 does not exceed the given diameter. */

@@ -7,6 +7,7 @@ import org.axistack.probe.ProbePoint;
 import org.axistack.probe.ProbeStudy;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.LogarithmicAxis;
 import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
@@ -53,12 +54,12 @@ public final class ProbeChart {
                     new float[] {6f, 4f}, 0f));
             curve++;
         }
-        LogAxis size = new LogAxis("probe diameter, FW50 (nm; solid: root-power-sum, dashed: quadrature)");
+        // the sizes often span a decade or less: 1, 2, .. 9 times each power of ten are labelled where they fit
+        LogarithmicAxis size = new LogarithmicAxis("probe diameter, FW50 (nm; solid: root-power-sum, dashed: quadrature)");
+        size.setAutoRangeNextLogFlag(false);
         LogAxis current = new LogAxis("probe current (A)");
-        for (LogAxis a : new LogAxis[] {size, current}) {
-            a.setTickUnit(new NumberTickUnit(1)); // one tick per decade
-            a.setMinorTickMarksVisible(true);
-        }
+        current.setTickUnit(new NumberTickUnit(1)); // one tick per decade
+        current.setMinorTickMarksVisible(true);
         XYPlot plot = new XYPlot(data, size, current, r);
         plot.setBackgroundPaint(BACKGROUND);
         plot.setDomainGridlinePaint(GRID);

@@ -7,7 +7,6 @@ import java.util.Locale;
 import org.axistack.probe.ProbeLens;
 import org.axistack.probe.ProbePoint;
 import org.axistack.probe.ProbeStudy;
-import org.axistack.probe.ProbeTerm;
 
 /**
  * The report's probe section: probe diameter (FW50) against beam current at the optimum aperture angle, for the
@@ -63,8 +62,8 @@ final class ProbeSection {
             }
             b.append(Html.table(List.of("current (A)", "aperture half-angle (mrad)", "probe FW50 (nm)", "quadrature (nm)",
                     "source (nm)", "diffraction (nm)", "spherical (nm)", "chromatic (nm)", "dominant"), rows));
-            double diffr = c.points().stream().mapToDouble(p -> p.share(ProbeTerm.DIFFRACTION)).max().orElse(0);
-            b.append("<p class=\"note\">").append(Html.esc(c.dominanceInWords())).append(diffr < 0.01
+            double diffr = c.diffractionShare();
+            b.append("<p class=\"note\">").append(Html.esc(c.dominanceInWords())).append(c.diffractionNegligible()
                     ? "; diffraction negligible (below 1 % of the squared size everywhere)"
                     : String.format(Locale.ROOT, "; diffraction up to %.0f %% of the squared size", 100 * diffr))
                     .append(".</p>\n");

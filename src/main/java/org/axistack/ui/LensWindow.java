@@ -63,6 +63,8 @@ public final class LensWindow extends JFrame {
     final JProgressBar progress = new JProgressBar(0, 1000);
     final JButton cancel = new JButton("Cancel");
     final JPanel biasHolder = new JPanel(new BorderLayout());
+    /** The probe-current curve at the biases shown (computed only while its tab shows). */
+    final ProbePanel probePanel = new ProbePanel(this::status);
     final JTextField currentField = new JTextField(UiFormat.num(EnvelopeLayer.defaults().current_A() * 1e6), 6);
     final JTextField emittanceField = new JTextField(UiFormat.num(EnvelopeLayer.defaults().emittance_m_rad() * 1e6), 6);
     private final WindowActions actions;
@@ -122,7 +124,12 @@ public final class LensWindow extends JFrame {
         propScroll.setBorder(BorderFactory.createTitledBorder("Optical properties (paraxial, asymptotic; stack z)"));
         JPanel tuneTab = new JPanel(new BorderLayout());
         tuneTab.add(tune, BorderLayout.NORTH);
-        tuneTab.add(propScroll, BorderLayout.CENTER);
+        // the probe curve beside the properties, under the bias controls, so it follows the sliders in view
+        JTabbedPane below = new JTabbedPane();
+        below.addTab("Properties", propScroll);
+        below.addTab("Probe size", probePanel);
+        below.setName("tune-lower-tabs");
+        tuneTab.add(below, BorderLayout.CENTER);
         tabs.addTab("Tune", tuneTab);
         tabs.addTab("Stack text", editorPanel());
         tabs.addChangeListener(e -> {
@@ -369,6 +376,7 @@ public final class LensWindow extends JFrame {
         current = v;
         lensChart.show(v.layers());
         properties.show(v.properties());
+        probePanel.viewChanged(s, v);
         // the envelope (tens of ms) waits for this paint, so it never competes with the live redraw
         envelopeDue = v;
         if (!chartPanel.isShowing()) {
@@ -442,6 +450,7 @@ public final class LensWindow extends JFrame {
     void shutdown() {
         live.shutdownNow();
         slow.shutdownNow();
+        probePanel.shutdown();
     }
 
     private static java.util.concurrent.ThreadFactory daemon(String name) {
