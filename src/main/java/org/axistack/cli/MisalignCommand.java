@@ -66,6 +66,15 @@ final class MisalignCommand implements Callable<Integer> {
             description = "Screen plane in mm (default: the stack's [screen], else the image-side reference plane).")
     Double screen_mm;
 
+    @Option(names = "--allowed-growth", paramLabel = "MM",
+            description = "Allowed spot growth (length of the axial-coma figure at the beam's image), mm (default 0.01).")
+    double allowedGrowth_mm = Units.mToMm(MisalignmentStudy.DEFAULT_ALLOWED_GROWTH_M);
+
+    @Option(names = "--aperture-mrad", paramLabel = "MRAD",
+            description = "Image-side half-angle of the beam for the spot growth, mrad (default: the beam filling half"
+                    + " the narrowest open bore).")
+    Double aperture_mrad;
+
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the bench alignment table to this CSV file.")
     Path csv;
 
@@ -82,6 +91,14 @@ final class MisalignCommand implements Callable<Integer> {
         if (!(allowed_mm > 0) || !Double.isFinite(allowed_mm)) {
             throw new CommandLine.ParameterException(cl, "--allowed-shift must be a positive number of mm, got "
                     + allowed_mm);
+        }
+        if (!(allowedGrowth_mm > 0) || !Double.isFinite(allowedGrowth_mm)) {
+            throw new CommandLine.ParameterException(cl, "--allowed-growth must be a positive number of mm, got "
+                    + allowedGrowth_mm);
+        }
+        if (aperture_mrad != null && !(aperture_mrad > 0 && Double.isFinite(aperture_mrad))) {
+            throw new CommandLine.ParameterException(cl, "--aperture-mrad must be a positive angle in mrad, got "
+                    + aperture_mrad);
         }
         if (screen_mm != null && !Double.isFinite(screen_mm)) {
             throw new CommandLine.ParameterException(cl, "--screen-z must be a number of mm");
@@ -111,6 +128,7 @@ final class MisalignCommand implements Callable<Integer> {
                 screenFrom = "image-side reference plane (no [screen] in the stack)";
             }
             study = MisalignmentStudy.run(stack, sol, focusName, screen, Units.mmToM(allowed_mm),
+                    aperture_mrad == null ? Double.NaN : aperture_mrad * 1e-3, Units.mmToM(allowedGrowth_mm),
                     SolveReporter.to(err, silent));
         } catch (StartPlaneException e) {
             throw new CommandLine.ParameterException(cl, input.shownAs() + ": [beam] start_z_mm = "
@@ -145,6 +163,7 @@ final class MisalignCommand implements Callable<Integer> {
         m.put("assumption", MisalignmentBudget.assumption());
         m.put("tightest_decentre_electrode", b.rows().get(b.tightestDecentre()).name());
         m.put("tightest_tilt_electrode", b.rows().get(b.tightestTilt()).name());
+        m.put("spot_growth", growthJson(study));
         List<Map<String, Object>> rows = new ArrayList<>();
         for (Object[] r : AlignmentTableCsv.rows(b)) {
             Map<String, Object> row = new LinkedHashMap<>();
@@ -189,9 +208,48 @@ final class MisalignCommand implements Callable<Integer> {
         m.put("cancelling_steerer_biases", cancel);
         m.put("factor_seconds", study.factorSeconds());
         m.put("response_seconds", study.responseSeconds());
+        m.put("coma_seconds", study.comaSeconds());
         m.put("study_seconds", study.totalSeconds());
         out.println(JsonOption.text(m));
     }
+
+    private static Map<String, Object> growthJson(MisalignmentStudy study) {
+        MisalignmentBudget b = study.budget();
+        Map<String, Object> g = new LinkedHashMap<>();
+        g.put("computed", b.hasGrowth());
+        g.put("note", study.comaNote());
+        if (b.hasGrowth()) {
+            g.put("image_z_mm", Units.mToMm(b.imageZ_m()));
+            g.put("aperture_mrad", b.aperture_rad() * 1e3);
+            g.put("allowed_growth_mm", Units.mToMm(b.allowedGrowth_m()));
+            g.put("assumption", MisalignmentBudget.growthAssumption());
+            g.put("convention", COMA_CONVENTION);
+            List<Map<String, Object>> rows = new ArrayList<>();
+            for (MisalignmentBudget.Row r : b.rows()) {
+                Map<String, Object> x = new LinkedHashMap<>();
+                x.put("electrode", r.name());
+                x.put("decentre_coma_a_per_rad2", r.coma().decentreRound_m());
+                x.put("decentre_coma_b_per_rad2", r.coma().decentreCircle_m());
+                x.put("tilt_coma_a_m_per_rad3", r.coma().tiltRound_m());
+                x.put("tilt_coma_b_m_per_rad3", r.coma().tiltCircle_m());
+                x.put("growth_um_per_0_01_mm_decentre", r.coma().decentreGrowth() * 1e-5 * 1e6);
+                x.put("growth_um_per_mrad_tilt", r.coma().tiltGrowth() * 1e-3 * 1e6);
+                x.put("decentre_growth_tolerance_mm", finite(Units.mToMm(r.coma().decentreGrowthTolerance_m())));
+                x.put("tilt_growth_tolerance_mrad", finite(r.coma().tiltGrowthTolerance_rad() * 1e3));
+                x.put("decentre_limited_by", r.decentreLimitedByGrowth() ? "growth" : "shift");
+                x.put("tilt_limited_by", r.tiltLimitedByGrowth() ? "growth" : "shift");
+                rows.add(x);
+            }
+            g.put("rows", rows);
+        }
+        return g;
+    }
+
+    /** The coma convention in words, for JSON and text. */
+    static final String COMA_CONVENTION = "a ray of image-side aperture slope alpha (complex, x + i y) lands at"
+            + " eps [A alpha conj(alpha) + B alpha^2] from the central ray, eps the misalignment along x (per metre of"
+            + " decentre, per radian of tilt): a cone of half-angle beta draws circles of radius |B| eps beta^2 centred"
+            + " at A eps beta^2; first order in the misalignment (no axial astigmatism at that order)";
 
     private static Double finite(double x) {
         return Double.isFinite(x) ? x : null;
@@ -226,12 +284,13 @@ final class MisalignCommand implements Callable<Integer> {
                 + String.join(", ", b.rows().stream().map(r -> r.name() + " " + num(Units.mToMm(r.decentreAlone_m()))
                         + " mm / " + num(r.tiltAlone_rad() * 1e3) + " mrad").toList()) + ".");
         w.println("Budget: " + MisalignmentBudget.assumption() + ".");
+        growthText(w, study);
         w.println("Tilts turn about a transverse axis through the middle of each electrode's z extent. Walk: change of");
         w.println("the shift per volt of the focus bias (central difference over +-"
                 + num(MisalignmentStudy.FOCUS_STEP_V) + " V): an electrode whose walk is large moves the spot as the");
         w.println("beam is refocused. Method and accuracy: misalignment.md (first order; neglected terms of relative");
         w.println("size misalignment / electrode scale). Harmonic-1 factorisation " + num(study.factorSeconds())
-                + " s, responses " + num(study.responseSeconds()) + " s.");
+                + " s, responses " + num(study.responseSeconds()) + " s, coma " + num(study.comaSeconds()) + " s.");
         if (!bench.monitorNames().isEmpty()) {
             w.println();
             w.println("At the monitors: central-ray shift in um per 0.01 mm decentre / per mrad tilt of each electrode");
@@ -264,6 +323,31 @@ final class MisalignCommand implements Callable<Integer> {
         }
         w.println();
         w.println(SafetyNotice.text());
+    }
+
+    private static void growthText(PrintWriter w, MisalignmentStudy study) {
+        MisalignmentBudget b = study.budget();
+        w.println();
+        if (!b.hasGrowth()) {
+            w.println("Spot growth: " + study.comaNote() + ".");
+            return;
+        }
+        w.println("Spot growth (axial coma at the beam's image z = " + num(Units.mToMm(b.imageZ_m())) + " mm, "
+                + study.comaNote() + "; allowed growth " + num(Units.mToMm(b.allowedGrowth_m())) + " mm):");
+        w.println(String.format(Locale.ROOT, "%-12s %14s %14s %14s %14s %12s %12s %10s %10s", "electrode", "A", "B",
+                "growth um", "growth um", "decentre", "tilt", "decentre", "tilt"));
+        w.println(String.format(Locale.ROOT, "%-12s %29s %29s %25s %21s", "", "um/mrad^2 per 0.01 mm",
+                "0.01 mm, mrad", "growth tolerance mm, mrad", "limited by"));
+        for (MisalignmentBudget.Row r : b.rows()) {
+            MisalignmentBudget.Coma c = r.coma();
+            w.println(String.format(Locale.ROOT, "%-12s %14s %14s %14s %14s %12s %12s %10s %10s", r.name(),
+                    num(c.decentreRound_m() * 1e-5 * 1e-6 * 1e6), num(c.decentreCircle_m() * 1e-5 * 1e-6 * 1e6),
+                    num(c.decentreGrowth() * 1e-5 * 1e6), num(c.tiltGrowth() * 1e-3 * 1e6),
+                    num(Units.mToMm(c.decentreGrowthTolerance_m())), num(c.tiltGrowthTolerance_rad() * 1e3),
+                    r.decentreLimitedByGrowth() ? "growth" : "shift", r.tiltLimitedByGrowth() ? "growth" : "shift"));
+        }
+        w.println("Coma: " + COMA_CONVENTION + ".");
+        w.println("Growth budget: " + MisalignmentBudget.growthAssumption() + ".");
     }
 
     static String num(double x) {

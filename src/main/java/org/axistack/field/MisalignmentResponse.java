@@ -198,18 +198,38 @@ public final class MisalignmentResponse {
      * k's own charges.
      */
     public void dipoles(double z, double[][] out) {
+        double[][][] d = new double[centreZ.length][2][1];
+        axial(z, 0, d);
+        for (int k = 0; k < centreZ.length; k++) {
+            out[k][0] = d[k][0][0];
+            out[k][1] = d[k][1][0];
+        }
+    }
+
+    /**
+     * Phi_1 of every response at z and its first two z derivatives: out[k][motion][n] = d^n Phi_1/dz^n, n = 0..2
+     * (the misalignment aberrations need the r^3 term of the dipole, -x r^2 Phi_1''/8). The kernel a/(2 rho^3) of
+     * the correction differentiated in closed form, k's moved charges through the axial derivatives of Phi_k up
+     * to the fourth.
+     */
+    public void dipoleDerivatives(double z, double[][][] out) {
+        axial(z, 2, out);
+    }
+
+    private void axial(double z, int order, double[][][] out) {
         FieldSolution sol = field.solution();
         BoundaryMesh mesh = sol.mesh();
         List<Panel> panels = mesh.panels();
-        int order = mesh.order();
+        int basisOrder = mesh.order();
         int ne = centreZ.length;
         RingSums.Scratch s = RingSums.SCRATCH.get();
         PanelQuadrature quad = sol.quadrature();
-        double[] dip = new double[2 * ne];
-        double[][] own = new double[ne][3];
-        double[] one = new double[3];
+        double[][] dip = new double[2 * ne][order + 1];
+        double[][] own = new double[ne][order + 3];
+        double[] one = new double[order + 3];
+        double[] kern = new double[order + 1];
         for (int p = 0; p < panels.size(); p++) {
-            int base = p * order;
+            int base = p * basisOrder;
             int e = panels.get(p).electrode();
             if (sol.bounds(p).near(z, 0)) {
                 quad.build(panels.get(p), z, 0, Double.NaN, s.rule);
@@ -217,43 +237,66 @@ public final class MisalignmentResponse {
                 for (int q = 0; q < rule.size; q++) {
                     quad.basis(rule.t[q], s.basis);
                     double a = rule.r[q];
-                    double d = z - rule.z[q];
-                    double rho2 = a * a + d * d;
                     double w = 0.5 * rule.w[q] * a;
-                    double kern = w * a / (2 * rho2 * Math.sqrt(rho2));
+                    dipoleKernel(z - rule.z[q], a, w, kern);
                     for (int c = 0; c < dip.length; c++) {
                         double f = 0;
-                        for (int j = 0; j < order; j++) {
+                        for (int j = 0; j < basisOrder; j++) {
                             f += s.basis[j] * correction[c][base + j] * mesh.nodeJacobian(base + j);
                         }
-                        dip[c] += f * kern;
+                        for (int n = 0; n <= order; n++) {
+                            dip[c][n] += f * kern[n];
+                        }
                     }
                     double f = 0;
-                    for (int j = 0; j < order; j++) {
+                    for (int j = 0; j < basisOrder; j++) {
                         f += s.basis[j] * ownDensityJac[e][base + j];
                     }
                     Arrays.fill(one, 0);
-                    RingKernel.accumulateAxial(z, rule.z[q], a, w * f, 2, one);
-                    for (int m = 0; m < 3; m++) {
+                    RingKernel.accumulateAxial(z, rule.z[q], a, w * f, order + 2, one);
+                    for (int m = 0; m < one.length; m++) {
                         own[e][m] += one[m];
                     }
                 }
             } else {
-                for (int j = base; j < base + order; j++) {
-                    double a = mesh.nodeR(j);
-                    double d = z - mesh.nodeZ(j);
-                    double rho2 = a * a + d * d;
-                    double kern = a / (2 * rho2 * Math.sqrt(rho2));
+                for (int j = base; j < base + basisOrder; j++) {
+                    dipoleKernel(z - mesh.nodeZ(j), mesh.nodeR(j), 1, kern);
                     for (int c = 0; c < dip.length; c++) {
-                        dip[c] += correctionStrength[c][j] * kern;
+                        for (int n = 0; n <= order; n++) {
+                            dip[c][n] += correctionStrength[c][j] * kern[n];
+                        }
                     }
-                    RingKernel.accumulateAxial(z, mesh.nodeZ(j), a, ownStrength[e][j], 2, own[e]);
+                    RingKernel.accumulateAxial(z, mesh.nodeZ(j), mesh.nodeR(j), ownStrength[e][j], order + 2, own[e]);
                 }
             }
         }
         for (int k = 0; k < ne; k++) {
-            out[k][0] = dip[2 * k] + 0.5 * own[k][2];
-            out[k][1] = dip[2 * k + 1] + 0.5 * (z - centreZ[k]) * own[k][2] + own[k][1];
+            double dz = z - centreZ[k];
+            double[] o = own[k];
+            // decentre: Phi_k''/2 and its derivatives; tilt: (z - z_c) Phi_k''/2 + Phi_k' and its derivatives
+            out[k][0][0] = dip[2 * k][0] + 0.5 * o[2];
+            out[k][1][0] = dip[2 * k + 1][0] + 0.5 * dz * o[2] + o[1];
+            if (order >= 2) {
+                out[k][0][1] = dip[2 * k][1] + 0.5 * o[3];
+                out[k][0][2] = dip[2 * k][2] + 0.5 * o[4];
+                out[k][1][1] = dip[2 * k + 1][1] + 1.5 * o[2] + 0.5 * dz * o[3];
+                out[k][1][2] = dip[2 * k + 1][2] + 2 * o[3] + 0.5 * dz * o[4];
+            }
+        }
+    }
+
+    /**
+     * w a / (2 rho^3) and its first two derivatives in z (d = z - z', rho^2 = a^2 + d^2), as many as kern holds:
+     * d/dz = -3 a d / (2 rho^5), d^2/dz^2 = 3 a (5 d^2/rho^2 - 1) / (2 rho^5).
+     */
+    private static void dipoleKernel(double d, double a, double w, double[] kern) {
+        double rho2 = a * a + d * d;
+        double inv3 = 1 / (rho2 * Math.sqrt(rho2));
+        kern[0] = w * a * inv3 / 2;
+        if (kern.length > 1) {
+            double inv5 = inv3 / rho2;
+            kern[1] = -1.5 * w * a * d * inv5;
+            kern[2] = 1.5 * w * a * (5 * d * d / rho2 - 1) * inv5;
         }
     }
 

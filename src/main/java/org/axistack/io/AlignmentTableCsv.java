@@ -10,15 +10,17 @@ import org.axistack.optics.MisalignmentBudget;
 /**
  * The bench alignment table: RFC 4180 CSV (Commons CSV), one row per electrode and motion, units in the column
  * names: the central ray's displacement and slope at the screen per unit misalignment (0.01 mm of decentre,
- * 1 mrad of tilt), the spot walk per volt of the focus bias, and the budget and single-error tolerances. Empty
- * cells where there is no value (no focus electrode, or an unlimited tolerance).
+ * 1 mrad of tilt), the spot walk per volt of the focus bias, the budget and single-error tolerances (each the
+ * smaller of the displacement and spot-growth limits), the spot growth (length of the axial-coma figure at the
+ * beam's aperture) per unit misalignment and the growth share of the tolerance. Empty cells where there is no
+ * value (no focus electrode, no growth computed, or an unlimited tolerance).
  */
 public final class AlignmentTableCsv {
 
     /** Column names, with their units. */
     public static final List<String> HEADER = List.of("electrode", "motion", "unit", "screen_z_mm",
             "screen_shift_um_per_unit", "screen_slope_urad_per_unit", "walk_um_per_unit_per_focus_V",
-            "tolerance_budget", "tolerance_alone", "tolerance_unit");
+            "tolerance_budget", "tolerance_alone", "tolerance_unit", "spot_growth_um_per_unit", "growth_tolerance");
 
     /** 0.01 mm of decentre, m. */
     public static final double DECENTRE_UNIT_M = 1e-5;
@@ -35,10 +37,13 @@ public final class AlignmentTableCsv {
         for (MisalignmentBudget.Row r : b.rows()) {
             out.add(new Object[] {r.name(), "decentre", "0.01 mm", z, finite(r.decentreShift() * DECENTRE_UNIT_M * 1e6),
                 finite(r.decentreSlope() * DECENTRE_UNIT_M * 1e6), finite(r.decentreWalk_per_V() * DECENTRE_UNIT_M * 1e6),
-                finite(Units.mToMm(r.decentreTolerance_m())), finite(Units.mToMm(r.decentreAlone_m())), "mm"});
+                finite(Units.mToMm(r.decentreTolerance_m())), finite(Units.mToMm(r.decentreAlone_m())), "mm",
+                finite(r.coma().decentreGrowth() * DECENTRE_UNIT_M * 1e6),
+                finite(Units.mToMm(r.coma().decentreGrowthTolerance_m()))});
             out.add(new Object[] {r.name(), "tilt", "1 mrad", z, finite(r.tiltShift() * TILT_UNIT_RAD * 1e6),
                 finite(r.tiltSlope() * TILT_UNIT_RAD * 1e6), finite(r.tiltWalk_per_V() * TILT_UNIT_RAD * 1e6),
-                finite(r.tiltTolerance_rad() * 1e3), finite(r.tiltAlone_rad() * 1e3), "mrad"});
+                finite(r.tiltTolerance_rad() * 1e3), finite(r.tiltAlone_rad() * 1e3), "mrad",
+                finite(r.coma().tiltGrowth() * TILT_UNIT_RAD * 1e6), finite(r.coma().tiltGrowthTolerance_rad() * 1e3)});
         }
         return out;
     }

@@ -77,6 +77,11 @@ public final class CentralRayShift {
         return new CentralRayShift(response, optics, intervals);
     }
 
+    /** The field responses the shifts are computed from. */
+    public MisalignmentResponse response() {
+        return response;
+    }
+
     /** The paraxial optics the shifts are computed in. */
     public ParaxialOptics optics() {
         return optics;
