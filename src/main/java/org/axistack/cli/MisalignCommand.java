@@ -34,7 +34,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code misalign [STACK] [--allowed-shift MM] [--focus NAME] [--screen-z Z] [--csv FILE] [--json]}: how far the
+ * {@code misalign [STACK] [--allowed-shift MM] [--allowed-growth MM] [--aperture-mrad MRAD] [--focus NAME] [--screen-z Z] [--csv FILE] [--json]}: how far the
  * spot moves at the screen per 0.01 mm decentre and per mrad tilt of each electrode, how it walks when the focus
  * bias changes, and the machining tolerance budget (first-order harmonic-1 responses, misalignment.md).
  */
