@@ -1,5 +1,6 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -58,11 +59,10 @@ public final class CurrentScan {
     public ScanResult scan(EnvelopeChannel ch, EnvelopeProblem base, double maxCurrent_A, int steps,
             DoubleConsumer progress) {
         if (!(maxCurrent_A > 0) || !Double.isFinite(maxCurrent_A)) {
-            throw new IllegalArgumentException(BeamMessages.negativeCurrent(maxCurrent_A)
-                    + "; the top of a current scan must be > 0 A");
+            throw PhysicsMessage.CURRENT_SCAN_TOP.exception("current", maxCurrent_A);
         }
         if (steps < 1 || steps > 10_000) {
-            throw new IllegalArgumentException("a current scan needs between 1 and 10000 steps, got " + steps);
+            throw PhysicsMessage.CURRENT_SCAN_STEPS.exception("steps", steps);
         }
         int bisections = (int) Math.ceil(Math.log(steps / BISECTION_TOLERANCE) / Math.log(2));
         double total = steps + 1 + bisections;

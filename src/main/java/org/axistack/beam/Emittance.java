@@ -1,5 +1,7 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
+
 /**
  * Transverse emittance of a round beam, as the user gives it. SI inside: metre-radians
  * (1 mm mrad = 1e-6 m rad).
@@ -37,7 +39,7 @@ public record Emittance(double value_m_rad, Measure measure, Frame frame) {
             throw new IllegalArgumentException("emittance needs a measure (edge or rms) and a frame");
         }
         if (!Double.isFinite(value_m_rad) || value_m_rad < 0) {
-            throw new IllegalArgumentException(BeamMessages.negativeEmittance(value_m_rad));
+            throw PhysicsMessage.EMITTANCE_NEGATIVE.exception("emittance", value_m_rad * 1e6);
         }
     }
 

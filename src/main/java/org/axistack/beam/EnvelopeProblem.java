@@ -1,5 +1,7 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
+
 /**
  * One envelope integration: start plane, end plane, start envelope and the beam's current and
  * normalised edge emittance. SI units.
@@ -16,20 +18,20 @@ public record EnvelopeProblem(double zStart_m, double zEnd_m, double radius_m, d
 
     public EnvelopeProblem {
         if (!Double.isFinite(current_A) || current_A < 0) {
-            throw new IllegalArgumentException(BeamMessages.negativeCurrent(current_A));
+            throw PhysicsMessage.CURRENT_NEGATIVE.exception("current", current_A);
         }
         if (!Double.isFinite(normalisedEmittance_m_rad) || normalisedEmittance_m_rad < 0) {
-            throw new IllegalArgumentException(BeamMessages.negativeEmittance(normalisedEmittance_m_rad));
+            throw PhysicsMessage.EMITTANCE_NEGATIVE.exception("emittance", normalisedEmittance_m_rad * 1e6);
         }
         if (!Double.isFinite(zStart_m) || !Double.isFinite(zEnd_m) || !(zEnd_m > zStart_m)) {
-            throw new IllegalArgumentException(BeamMessages.badRange(zStart_m, zEnd_m));
+            throw PhysicsMessage.ENVELOPE_RANGE.exception("from", zStart_m * 1e3, "to", zEnd_m * 1e3);
         }
         if (!Double.isFinite(slope_rad)) {
-            throw new IllegalArgumentException(BeamMessages.badSlope(slope_rad));
+            throw PhysicsMessage.START_SLOPE.exception("slope", slope_rad * 1e3);
         }
         boolean linear = current_A == 0 && normalisedEmittance_m_rad == 0;
         if (!Double.isFinite(radius_m) || radius_m < 0 || (!linear && radius_m == 0)) {
-            throw new IllegalArgumentException(BeamMessages.badRadius(radius_m));
+            throw PhysicsMessage.START_RADIUS.exception("radius", radius_m * 1e3);
         }
     }
 

@@ -1,5 +1,6 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.OptionalDouble;
 
 /**
@@ -14,7 +15,7 @@ public record EnvelopeRequest(double current_A, EnvelopeStart start, OptionalDou
 
     public EnvelopeRequest {
         if (!Double.isFinite(current_A) || current_A < 0) {
-            throw new IllegalArgumentException(BeamMessages.negativeCurrent(current_A));
+            throw PhysicsMessage.CURRENT_NEGATIVE.exception("current", current_A);
         }
         if (start == null) {
             throw new IllegalArgumentException("an envelope request needs a start envelope");

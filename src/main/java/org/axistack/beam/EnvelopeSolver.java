@@ -1,5 +1,6 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -86,7 +87,7 @@ public final class EnvelopeSolver {
         if (!(bg2Start > 0)) {
             // U from (beta gamma)^2 = 2U* / V0, U* = U(1 + U/(2V0)): U = V0 (sqrt(1 + (beta gamma)^2) - 1)
             double u = v0 * (Math.sqrt(Math.max(0, 1 + bg2Start)) - 1);
-            throw new IllegalArgumentException(BeamMessages.notReachingStart(p.zStart_m(), u));
+            throw PhysicsMessage.NOT_REACHING_START.exception("z", p.zStart_m() * 1e3, "energy", u);
         }
         Run run = new Run(channel, p, bg2Start * settings.reflectionFraction(), progress);
         return run.integrate();

@@ -1,5 +1,7 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
+
 /**
  * The envelope at the start plane: either a radius, a slope and an emittance, or a source (its radius
  * and the half-angle of divergence of its emission), taken as a waist at the start plane.
@@ -25,10 +27,10 @@ public sealed interface EnvelopeStart permits EnvelopeStart.RadiusSlope, Envelop
     record RadiusSlope(double radius_m, double slope_rad, Emittance emittance) implements EnvelopeStart {
         public RadiusSlope {
             if (!Double.isFinite(radius_m) || radius_m < 0) {
-                throw new IllegalArgumentException(BeamMessages.badRadius(radius_m));
+                throw PhysicsMessage.START_RADIUS.exception("radius", radius_m * 1e3);
             }
             if (!Double.isFinite(slope_rad)) {
-                throw new IllegalArgumentException(BeamMessages.badSlope(slope_rad));
+                throw PhysicsMessage.START_SLOPE.exception("slope", slope_rad * 1e3);
             }
             if (emittance == null) {
                 throw new IllegalArgumentException("an envelope start needs an emittance (zero is allowed)");
@@ -48,11 +50,10 @@ public sealed interface EnvelopeStart permits EnvelopeStart.RadiusSlope, Envelop
     record Source(double radius_m, double divergence_rad) implements EnvelopeStart {
         public Source {
             if (!Double.isFinite(radius_m) || !(radius_m > 0)) {
-                throw new IllegalArgumentException(BeamMessages.badRadius(radius_m));
+                throw PhysicsMessage.START_RADIUS.exception("radius", radius_m * 1e3);
             }
             if (!Double.isFinite(divergence_rad) || divergence_rad < 0) {
-                throw new IllegalArgumentException(BeamMessages.fmt(
-                        "source divergence must be a finite half-angle >= 0 mrad, got %s mrad", divergence_rad * 1e3));
+                throw PhysicsMessage.SOURCE_DIVERGENCE.exception("divergence", divergence_rad * 1e3);
             }
         }
 

@@ -1,5 +1,6 @@
 package org.axistack.beam;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -70,12 +71,12 @@ public final class EnvelopeStudy {
         double z0 = startZ_m(stack, req);
         double z1 = endZ_m(stack, req);
         if (!(z1 > z0)) {
-            throw new IllegalArgumentException(BeamMessages.badRange(z0, z1));
+            throw PhysicsMessage.ENVELOPE_RANGE.exception("from", z0 * 1e3, "to", z1 * 1e3);
         }
         ElectrostaticChannel ch = channel(stack, field);
         double u0 = ch.accelerationPotential_V(z0);
         if (!(u0 > 0)) {
-            throw new IllegalArgumentException(BeamMessages.notReachingStart(z0, u0));
+            throw PhysicsMessage.NOT_REACHING_START.exception("z", z0 * 1e3, "energy", u0);
         }
         double bg = BeamKinematics.betaGamma(u0, ch.restPotential_V());
         EnvelopeStart s = req.start();

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import org.axistack.model.PhysicsException;
 import org.axistack.beam.CurrentScan;
 import org.axistack.beam.Emittance;
 import org.axistack.beam.EnvelopeProblem;
@@ -219,7 +220,7 @@ final class EnvelopeCommand implements Callable<Integer> {
     private static <T> T checked(CommandLine cl, java.util.function.Supplier<T> s) {
         try {
             return s.get();
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             throw new CommandLine.ParameterException(cl, e.getMessage());
         }
     }

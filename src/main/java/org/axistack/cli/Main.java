@@ -1,7 +1,10 @@
 package org.axistack.cli;
 
+import org.axistack.model.PhysicsMessage;
 import java.io.PrintWriter;
 import org.axistack.io.StackInputException;
+import org.axistack.model.PhysicsException;
+import org.axistack.model.PhysicsMessage;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -85,6 +88,10 @@ public final class Main implements Runnable {
             err.println("error: the field cannot be solved as given: " + m.getMessage() + ".");
             return EXIT_INPUT;
         }
+        if (ex instanceof PhysicsException p) {
+            err.println("error: " + org.axistack.io.TextSafety.printable(p.getMessage()));
+            return p.kind() == PhysicsMessage.Kind.REQUEST ? EXIT_INPUT : EXIT_PHYSICS;
+        }
         if (ex instanceof org.axistack.optics.BlockedAxisException b) {
             err.println(b.getMessage() + ".");
             return EXIT_PHYSICS;
@@ -120,7 +127,10 @@ public final class Main implements Runnable {
     private static int onParameterException(CommandLine.ParameterException ex, String[] args) {
         CommandLine cl = ex.getCommandLine();
         PrintWriter err = cl.getErr();
-        err.println("error: " + org.axistack.io.TextSafety.printable(ex.getMessage()) + ". Fix: see '" + cl.getCommandSpec().qualifiedName() + " --help'.");
+        String message = org.axistack.io.TextSafety.printable(ex.getMessage());
+        // a catalogued message carries its own fix; others point to the command's help
+        err.println("error: " + message + (message.contains(". Fix: ") ? ""
+                : ". Fix: see '" + cl.getCommandSpec().qualifiedName() + " --help'."));
         CommandLine.UnmatchedArgumentException.printSuggestions(ex, err);
         return EXIT_INPUT;
     }

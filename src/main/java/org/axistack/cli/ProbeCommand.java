@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.field.BemSolver;
 import org.axistack.field.FieldSolution;
 import org.axistack.io.AtomicFiles;
@@ -123,7 +124,7 @@ final class ProbeCommand implements Callable<Integer> {
                 throw new IllegalArgumentException("--points must be 2..10000");
             }
             settings = new ProbeStudy.Settings(source, alphaFrom_mrad * 1e-3, alphaTo_mrad * 1e-3, currentFrom, currentTo, points);
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             throw new CommandLine.ParameterException(cl, e.getMessage());
         }
         String name = tune != null ? tune : PlanAnalysis.strongest(stack);

@@ -15,6 +15,7 @@ import org.axistack.field.BiasedField;
 import org.axistack.field.Field;
 import org.axistack.io.StackInputException;
 import org.axistack.io.TraceTableCsv;
+import org.axistack.model.PhysicsException;
 import org.axistack.model.Units;
 import org.axistack.model.Beam;
 import org.axistack.model.Stack;
@@ -188,7 +189,7 @@ final class TraceCommand implements Callable<Integer> {
             for (var r : rays.rays()) {
                 Tracer.checkPlacement(geometry, r, targets);
             }
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             throw usage(e.getMessage());
         }
 
@@ -200,12 +201,10 @@ final class TraceCommand implements Callable<Integer> {
             double[] zr = FieldMap.zRange_m(geometry, startZ, screenZ, step);
             double z0 = zr[0];
             double z1 = zr[1];
-            double nodes = FieldMap.nodeCount(z0, z1, bore, step);
-            if (nodes > FieldMap.MAX_NODES) {
-                throw usage(String.format(Locale.ROOT, "--map-step %s mm would make a field map of %.3g nodes, more than"
-                        + " the limit of %d: use a step of at least %s mm (or --exact)", num(Units.mToMm(step)), nodes,
-                        FieldMap.MAX_NODES, String.format(Locale.ROOT, "%.3g", Units.mToMm(Math.sqrt(Math.max(z1 - z0,
-                                step) * bore / FieldMap.MAX_NODES) * 1.05))));
+            try {
+                FieldMap.checkStep(z0, z1, bore, step);
+            } catch (PhysicsException e) {
+                throw usage("--map-step: " + e.getMessage());
             }
         }
         PrintWriter progress = quiet.on() ? new PrintWriter(java.io.Writer.nullWriter()) : err;
@@ -232,7 +231,7 @@ final class TraceCommand implements Callable<Integer> {
         BundleResult res;
         try {
             res = new BundleTracer(tracer, Math.max(1, nThreads)).trace(rays, targets, progressRays(progress));
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             throw usage(e.getMessage());
         }
         TracedAberrationSection ab = null;
@@ -240,7 +239,7 @@ final class TraceCommand implements Callable<Integer> {
             progress.println("fitting aberrations to exact traces ...");
             try {
                 ab = new TracedAberrationSection(stack, biased, tracer, bore, emittanceMmMrad * 1e-6, energyWidthEv);
-            } catch (IllegalArgumentException e) {
+            } catch (IllegalArgumentException | PhysicsException e) {
                 throw usage("--aberrations: " + e.getMessage());
             }
         }

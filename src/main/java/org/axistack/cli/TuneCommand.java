@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.field.BemSolver;
 import org.axistack.field.FieldSolution;
 import org.axistack.io.StackInputException;
@@ -163,7 +164,7 @@ final class TuneCommand implements Callable<Integer> {
         try {
             condition = magnification != null ? new SecondCondition.Magnification(magnification)
                     : new SecondCondition.FocalLength(Units.mmToM(focalLength_mm));
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             throw new CommandLine.ParameterException(cl, e.getMessage());
         }
         BiasRange second = range(stack, alsoFrom_V, alsoTo_V, "--also-from/--also-to", cl);

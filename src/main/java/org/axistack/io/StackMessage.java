@@ -1,10 +1,8 @@
 package org.axistack.io;
 
-import java.util.LinkedHashSet;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import org.axistack.model.MessageTemplate;
 
 /**
  * The catalogue of user-facing input error messages: every message the tool prints about a bad
@@ -165,8 +163,6 @@ public enum StackMessage {
     REQ_IMAGE_ORDER("image_z_mm ({image} mm) must lie after object_z_mm ({object} mm)",
             "rays travel toward +z and the lens centre is at z = 0: put the object at negative z and the image at positive z");
 
-    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([a-zA-Z]+)}");
-
     private final String problem;
     private final String fix;
 
@@ -185,37 +181,11 @@ public enum StackMessage {
 
     /** The placeholder names the two templates use. */
     public Set<String> placeholders() {
-        Set<String> s = new LinkedHashSet<>();
-        for (String t : new String[] {problem, fix}) {
-            Matcher m = PLACEHOLDER.matcher(t);
-            while (m.find()) {
-                s.add(m.group(1));
-            }
-        }
-        return s;
+        return MessageTemplate.placeholders(problem, fix);
     }
 
     /** "problem. Fix: fix." with the placeholders filled; a missing value is an error in the caller. */
     public String format(Map<String, ?> values) {
-        return tidy(fill(problem, values)) + ". Fix: " + tidy(fill(fix, values)) + ".";
-    }
-
-    /** One space between words where an empty value (a unitless number's unit) left two or one before a stop. */
-    private static String tidy(String s) {
-        return s.replaceAll(" {2,}", " ").replaceAll(" +([.,;:)])", "$1").strip();
-    }
-
-    private String fill(String template, Map<String, ?> values) {
-        Matcher m = PLACEHOLDER.matcher(template);
-        StringBuilder sb = new StringBuilder();
-        while (m.find()) {
-            String key = m.group(1);
-            if (!values.containsKey(key)) {
-                throw new IllegalArgumentException("message " + name() + " needs a value for {" + key + "}");
-            }
-            m.appendReplacement(sb, Matcher.quoteReplacement(String.valueOf(values.get(key))));
-        }
-        m.appendTail(sb);
-        return sb.toString();
+        return MessageTemplate.format(name(), problem, fix, values);
     }
 }

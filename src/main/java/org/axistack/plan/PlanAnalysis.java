@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.CancellationException;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.beam.Emittance;
 import org.axistack.beam.EnvelopeRequest;
 import org.axistack.beam.EnvelopeStart;
@@ -204,7 +205,7 @@ public final class PlanAnalysis {
             PlanRays.Fan fan = PlanRays.trace(stack, field);
             rays = fan.rays();
             rayNote = fan.note();
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             rayNote = "no rays drawn: " + e.getMessage();
             warnings.add(rayNote);
         }
@@ -225,7 +226,7 @@ public final class PlanAnalysis {
                 for (EnvelopeWarning w : env.warnings()) {
                     warnings.add("envelope: " + w.message());
                 }
-            } catch (IllegalArgumentException | IllegalStateException e) {
+            } catch (IllegalArgumentException | PhysicsException | IllegalStateException e) {
                 envNote += "; not computed: " + e.getMessage();
             }
         }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
 import org.axistack.optics.ParaxialOptics;
@@ -173,7 +174,7 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
             curves.add(new Curve(wp, model, points));
         } catch (ReflectionException e) {
             notes.add(label + ": the beam is reflected (" + e.getMessage() + ")");
-        } catch (IllegalArgumentException | IllegalStateException e) {
+        } catch (IllegalArgumentException | PhysicsException | IllegalStateException e) {
             notes.add(label + ": " + e.getMessage());
         }
     }

@@ -1,5 +1,6 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
@@ -51,6 +52,19 @@ public final class FieldMap implements Field {
             return Double.POSITIVE_INFINITY;
         }
         return (Math.max(1, Math.ceil((zMax_m - zMin_m) / step_m)) + 1) * (Math.max(1, Math.ceil(rMax_m / step_m)) + 1);
+    }
+
+    /**
+     * Refuses a step that would make a map of more than {@link #MAX_NODES} nodes, naming the smallest step that fits
+     * (5 % above the bound, so that it really fits); callers check before the field solve.
+     */
+    public static void checkStep(double zMin_m, double zMax_m, double rMax_m, double step_m) {
+        double count = nodeCount(zMin_m, zMax_m, rMax_m, step_m);
+        if (count > MAX_NODES) {
+            double minimum = Math.sqrt(Math.max(zMax_m - zMin_m, step_m) * rMax_m / MAX_NODES) * 1.05;
+            throw PhysicsMessage.FIELD_MAP_TOO_FINE.exception("step", step_m * 1e3, "nodes", count, "limit", MAX_NODES,
+                    "minimum", Double.parseDouble(String.format(java.util.Locale.ROOT, "%.3g", minimum * 1e3)));
+        }
     }
 
     /** Node spacings per mapped radius when no step is given: the default step is a fortieth of the bore. */
@@ -110,11 +124,7 @@ public final class FieldMap implements Field {
         }
         this.source = source;
         this.base = base;
-        double count = nodeCount(zMin_m, zMax_m, rMax_m, step_m);
-        if (count > MAX_NODES) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT, "field map too fine: %.3g nodes,"
-                    + " more than %d; use a larger step", count, MAX_NODES));
-        }
+        checkStep(zMin_m, zMax_m, rMax_m, step_m);
         this.nz = Math.max(1, (int) Math.ceil((zMax_m - zMin_m) / step_m));
         this.nr = Math.max(1, (int) Math.ceil(rMax_m / step_m));
         long nodes = (long) (nz + 1) * (nr + 1);

@@ -1,5 +1,6 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -37,20 +38,18 @@ public record RaySet(Particle particle, List<RayStart> rays, String description)
      */
     public RaySet withEnergyOffsets(List<Double> offsets_eV) {
         if (offsets_eV.isEmpty()) {
-            throw new IllegalArgumentException("energy offsets: give at least one value (0 for the nominal energy)");
+            throw PhysicsMessage.ENERGY_OFFSETS_EMPTY.exception();
         }
         List<RayStart> out = new ArrayList<>();
         int id = 1;
         for (double d : offsets_eV) {
             if (!Double.isFinite(d)) {
-                throw new IllegalArgumentException("energy offsets must be finite: " + d);
+                throw PhysicsMessage.ENERGY_OFFSET_NOT_FINITE.exception("offset", d);
             }
             for (RayStart r : rays) {
                 double e = r.energy_eV() + d;
                 if (!(e > 0)) {
-                    throw new IllegalArgumentException("energy offset " + Fmt.num(d) + " eV leaves ray " + r.id()
-                            + " with no energy (" + Fmt.num(r.energy_eV()) + " eV): use offsets above -"
-                            + Fmt.num(r.energy_eV()) + " eV");
+                    throw PhysicsMessage.ENERGY_OFFSET_TOO_LOW.exception("offset", d, "ray", r.id(), "energy", r.energy_eV());
                 }
                 out.add(r.withEnergy_eV(e).withId(id++));
             }
@@ -65,7 +64,7 @@ public record RaySet(Particle particle, List<RayStart> rays, String description)
      */
     public RaySet withGaussianEnergy(double sigma_eV, long seed) {
         if (!(sigma_eV >= 0) || !Double.isFinite(sigma_eV)) {
-            throw new IllegalArgumentException("energy spread must be zero or positive, eV: " + sigma_eV);
+            throw PhysicsMessage.ENERGY_SPREAD_NEGATIVE.exception("spread", sigma_eV);
         }
         Random rnd = new Random(seed);
         List<RayStart> out = new ArrayList<>();
@@ -75,8 +74,8 @@ public record RaySet(Particle particle, List<RayStart> rays, String description)
             do {
                 e = r.energy_eV() + sigma_eV * rnd.nextGaussian();
                 if (++tries > 1000) {
-                    throw new IllegalArgumentException("energy spread " + Fmt.num(sigma_eV)
-                            + " eV is too wide for a beam of " + Fmt.num(r.energy_eV()) + " eV: narrow it");
+                    // a draw is positive with probability above 1/2, so this cannot happen in practice
+                    throw new IllegalStateException("energy spread " + sigma_eV + " eV: 1000 draws without energy");
                 }
             } while (!(e > 0));
             out.add(r.withEnergy_eV(e));

@@ -1,5 +1,6 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -18,13 +19,14 @@ public final class RaySets {
 
     private static void requireCount(int n, String what) {
         if (n < 1) {
-            throw new IllegalArgumentException(what + ": ask for at least one ray (got " + n + ")");
+            throw PhysicsMessage.RAY_COUNT.exception("what", what, "count", n);
         }
     }
 
+    /** v in SI units (m, rad); the message gives it in mm or mrad. */
     private static void requireNonNegative(double v, String what) {
         if (!(v >= 0) || !Double.isFinite(v)) {
-            throw new IllegalArgumentException(what + " must be zero or positive: " + Fmt.num(v));
+            throw PhysicsMessage.RAY_SET_NEGATIVE.exception("what", what, "value", v * 1e3);
         }
     }
 
@@ -38,9 +40,9 @@ public final class RaySets {
             int n, int azimuths) {
         requireCount(n, "point fan");
         requireCount(azimuths, "point fan azimuths");
-        requireNonNegative(maxAngle_rad, "fan half-angle");
+        requireNonNegative(maxAngle_rad, "fan half-angle (mrad)");
         if (!(maxAngle_rad < Math.PI / 2)) {
-            throw new IllegalArgumentException("fan half-angle must stay below 90 degrees: " + maxAngle_rad + " rad");
+            throw PhysicsMessage.FAN_ANGLE.exception("angle", maxAngle_rad * 1e3);
         }
         List<RayStart> rays = new ArrayList<>();
         if (azimuths == 1) {
@@ -68,7 +70,7 @@ public final class RaySets {
     public static RaySet uniformDisk(Particle particle, double energy_eV, double z0_m, double radius_m, int n,
             long seed) {
         requireCount(n, "uniform disk");
-        requireNonNegative(radius_m, "disk radius");
+        requireNonNegative(radius_m, "disk radius (mm)");
         Random rnd = new Random(seed);
         List<RayStart> rays = new ArrayList<>();
         for (int i = 0; i < n; i++) {
@@ -86,11 +88,10 @@ public final class RaySets {
     public static RaySet gaussianBeam(Particle particle, double energy_eV, double z0_m, double sigma_m,
             double cutoff_m, int n, long seed) {
         requireCount(n, "Gaussian beam");
-        requireNonNegative(sigma_m, "beam sigma");
-        requireNonNegative(cutoff_m, "beam cutoff radius");
+        requireNonNegative(sigma_m, "beam sigma (mm)");
+        requireNonNegative(cutoff_m, "beam cutoff radius (mm)");
         if (sigma_m > 0 && cutoff_m < 0.1 * sigma_m) {
-            throw new IllegalArgumentException("Gaussian beam cutoff " + Fmt.mm(cutoff_m)
-                    + " is too small for sigma " + Fmt.mm(sigma_m) + ": use at least 0.1 sigma (3 sigma is usual)");
+            throw PhysicsMessage.GAUSSIAN_CUTOFF.exception("cutoff", cutoff_m * 1e3, "sigma", sigma_m * 1e3);
         }
         Random rnd = new Random(seed);
         List<RayStart> rays = new ArrayList<>();
@@ -113,7 +114,7 @@ public final class RaySets {
     public static RaySet ring(Particle particle, double energy_eV, double z0_m, double radius_m, double radialSlope,
             int n) {
         requireCount(n, "ring");
-        requireNonNegative(radius_m, "ring radius");
+        requireNonNegative(radius_m, "ring radius (mm)");
         List<RayStart> rays = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             double ph = 2 * Math.PI * i / n;

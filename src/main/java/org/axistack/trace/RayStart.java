@@ -1,5 +1,7 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
+
 /**
  * Where and how one ray starts. SI units. Rays travel towards +z.
  *
@@ -19,19 +21,18 @@ public record RayStart(int id, double x_m, double y_m, double z_m, double dirX, 
     public RayStart {
         for (double v : new double[] {x_m, y_m, z_m, dirX, dirY, dirZ, energy_eV}) {
             if (!Double.isFinite(v)) {
-                throw new IllegalArgumentException("ray " + id + ": non-finite start value " + v);
+                throw PhysicsMessage.RAY_START_NOT_FINITE.exception("ray", id, "value", v);
             }
         }
         double norm = Math.sqrt(dirX * dirX + dirY * dirY + dirZ * dirZ);
         if (!(dirZ > 0) || norm == 0) {
-            throw new IllegalArgumentException("ray " + id
-                    + ": the start direction must point towards +z (angles below 90 degrees from the axis)");
+            throw PhysicsMessage.RAY_START_BACKWARD.exception("ray", id);
         }
         dirX /= norm;
         dirY /= norm;
         dirZ /= norm;
         if (!(energy_eV > 0)) {
-            throw new IllegalArgumentException("ray " + id + ": energy must be positive, eV: " + energy_eV);
+            throw PhysicsMessage.RAY_ENERGY.exception("ray", id, "energy", energy_eV);
         }
     }
 

@@ -1,5 +1,7 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
+
 /**
  * Settings of the exact tracer. Immutable.
  *
@@ -14,7 +16,7 @@ public record TraceSettings(double relativeTolerance, int maxEvaluations, double
 
     public TraceSettings {
         if (!(relativeTolerance >= 1e-15 && relativeTolerance <= 1e-3)) {
-            throw new IllegalArgumentException("trace tolerance must lie between 1e-15 and 1e-3: " + relativeTolerance);
+            throw PhysicsMessage.TRACE_TOLERANCE.exception("tolerance", relativeTolerance);
         }
         if (maxEvaluations < 100) {
             throw new IllegalArgumentException("max evaluations must be at least 100: " + maxEvaluations);

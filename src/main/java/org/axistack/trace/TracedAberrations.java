@@ -1,5 +1,6 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.OptionalDouble;
 
 import org.axistack.model.Particle;
@@ -78,7 +79,7 @@ public final class TracedAberrations {
     public static Result measure(Tracer tracer, Particle particle, double energy_eV, double zStart_m, double zEnd_m,
             double maxHeight_m, OptionalDouble paraxialFocus_m) {
         if (!(maxHeight_m > 0) || !Double.isFinite(maxHeight_m)) {
-            throw new IllegalArgumentException("largest ray height must be positive: " + Fmt.mm(maxHeight_m));
+            throw PhysicsMessage.ABERRATION_HEIGHT.exception("height", maxHeight_m * 1e3);
         }
         if (!(zEnd_m > zStart_m)) {
             throw new IllegalArgumentException("reference planes need z_end > z_start");
@@ -129,14 +130,12 @@ public final class TracedAberrations {
             h[k] = hMax * (k + 1) / HEIGHTS;
             Trajectory t = tracer.trace(particle, new RayStart(k + 1, h[k], 0, z0, 0, 0, 1, energy_eV), tt);
             if (t.status() != TraceStatus.SCREEN) {
-                throw new IllegalArgumentException("the aberration ray at height " + Fmt.mm(h[k]) + " did not reach z = "
-                        + Fmt.mm(z1) + " (" + t.statusLabel() + "): lower the largest ray height");
+                throw PhysicsMessage.ABERRATION_RAY_LOST.exception("height", h[k] * 1e3, "z", z1 * 1e3, "status", t.statusLabel());
             }
             x[k] = t.end().x_m();
             s[k] = t.end().slopeX();
             if (!(s[k] < 0)) {
-                throw new IllegalArgumentException("the lens does not converge the ray at height " + Fmt.mm(h[k])
-                        + ": traced aberration coefficients need a converging lens");
+                throw PhysicsMessage.ABERRATION_NOT_CONVERGING.exception("height", h[k] * 1e3);
             }
         }
         return new Fan(h, x, s);

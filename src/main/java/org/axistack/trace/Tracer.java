@@ -1,5 +1,6 @@
 package org.axistack.trace;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -60,10 +61,6 @@ public final class Tracer {
         return settings;
     }
 
-    private static String mm(double z_m) {
-        return Fmt.mm(z_m);
-    }
-
     /** Checks that the screen and the planes lie inside the traced region. */
     public void validateTargets(TraceTargets targets) {
         checkTargets(geometry, targets);
@@ -73,17 +70,14 @@ public final class Tracer {
     public static void checkTargets(ElectrodeGeometry geometry, TraceTargets targets) {
         double zs = targets.screenZ_m();
         if (zs < geometry.regionZMin_m() || zs > geometry.regionZMax_m()) {
-            throw new IllegalArgumentException("screen at z = " + mm(zs) + " lies outside the traced region ("
-                    + geometry.describeRegion() + "): put the screen inside it");
+            throw PhysicsMessage.SCREEN_OUTSIDE_REGION.exception("z", zs * 1e3, "region", geometry.describeRegion());
         }
         for (double z : targets.planes_m()) {
             if (z < geometry.regionZMin_m() || z > geometry.regionZMax_m()) {
-                throw new IllegalArgumentException("plane at z = " + mm(z) + " lies outside the traced region ("
-                        + geometry.describeRegion() + "): choose planes inside it");
+                throw PhysicsMessage.PLANE_OUTSIDE_REGION.exception("z", z * 1e3, "region", geometry.describeRegion());
             }
             if (z > zs) {
-                throw new IllegalArgumentException("plane at z = " + mm(z) + " lies beyond the screen at z = "
-                        + mm(zs) + ": rays stop at the screen; move the screen or drop the plane");
+                throw PhysicsMessage.PLANE_BEYOND_SCREEN.exception("z", z * 1e3, "screen", zs * 1e3);
             }
         }
     }
@@ -98,9 +92,8 @@ public final class Tracer {
         double phi0 = field.potential_V(ray.z_m(), r);
         double t = w - particle.chargeSign() * phi0;
         if (!(t > 0)) {
-            throw new IllegalArgumentException("ray " + ray.id() + " cannot start at z = " + mm(ray.z_m()) + ", r = "
-                    + mm(r) + ": the potential there (" + Fmt.num(phi0) + " V) leaves it no kinetic energy (energy "
-                    + Fmt.num(ray.energy_eV()) + " eV at 0 V); start it where the potential lets it move, or raise its energy");
+            throw PhysicsMessage.RAY_NO_ENERGY.exception("ray", ray.id(), "z", ray.z_m() * 1e3, "r", r * 1e3, "potential", phi0,
+                    "energy", ray.energy_eV());
         }
         return t;
     }
@@ -112,25 +105,24 @@ public final class Tracer {
     public static void checkPlacement(ElectrodeGeometry geometry, RayStart ray, TraceTargets targets) {
         double r = ray.r_m();
         if (!geometry.inRegion(ray.z_m(), r)) {
-            throw new IllegalArgumentException("ray " + ray.id() + " starts at z = " + mm(ray.z_m()) + ", r = " + mm(r)
-                    + ", outside the traced region (" + geometry.describeRegion() + "): start it inside");
+            throw PhysicsMessage.RAY_OUTSIDE_REGION.exception("ray", ray.id(), "z", ray.z_m() * 1e3, "r", r * 1e3, "region",
+                    geometry.describeRegion());
         }
         Optional<String> in = geometry.insideElectrode(ray.z_m(), r);
         if (in.isEmpty()) {
             in = geometry.onSurface(ray.z_m(), r, 1e-9 * geometry.scale_m());
         }
         if (in.isPresent()) {
-            throw new IllegalArgumentException("ray " + ray.id() + " starts inside electrode '" + in.get() + "' at z = "
-                    + mm(ray.z_m()) + ", r = " + mm(r) + ": start rays in the open bore");
+            throw PhysicsMessage.RAY_INSIDE_ELECTRODE.exception("ray", ray.id(), "electrode", in.get(), "z", ray.z_m() * 1e3,
+                    "r", r * 1e3);
         }
         if (!(targets.screenZ_m() > ray.z_m())) {
-            throw new IllegalArgumentException("ray " + ray.id() + " starts at z = " + mm(ray.z_m())
-                    + ", at or beyond the screen at z = " + mm(targets.screenZ_m()) + ": start rays before the screen");
+            throw PhysicsMessage.RAY_AT_SCREEN.exception("ray", ray.id(), "z", ray.z_m() * 1e3, "screen",
+                    targets.screenZ_m() * 1e3);
         }
         for (double z : targets.planes_m()) {
             if (z < ray.z_m()) {
-                throw new IllegalArgumentException("plane at z = " + mm(z) + " lies before the start of ray " + ray.id()
-                        + " at z = " + mm(ray.z_m()) + ": choose planes after the start");
+                throw PhysicsMessage.PLANE_BEFORE_START.exception("z", z * 1e3, "ray", ray.id(), "start", ray.z_m() * 1e3);
             }
         }
     }

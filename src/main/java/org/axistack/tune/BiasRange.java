@@ -1,5 +1,6 @@
 package org.axistack.tune;
 
+import org.axistack.model.PhysicsMessage;
 import org.axistack.model.Beam;
 
 /**
@@ -25,7 +26,7 @@ public record BiasRange(double from_V, double to_V) {
 
     public BiasRange {
         if (!Double.isFinite(from_V) || !Double.isFinite(to_V) || !(from_V < to_V)) {
-            throw new IllegalArgumentException("a bias range needs finite from < to: " + from_V + ", " + to_V);
+            throw PhysicsMessage.BIAS_RANGE.exception("from", from_V, "to", to_V);
         }
     }
 

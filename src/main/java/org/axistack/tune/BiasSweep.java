@@ -1,5 +1,6 @@
 package org.axistack.tune;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.Arrays;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -46,7 +47,7 @@ public final class BiasSweep {
             double to_V, int steps, OptionalDouble objectZ_m, Progress progress) {
         int index = stack.indexOf(electrode);
         if (index < 0) {
-            throw new IllegalArgumentException("no electrode named '" + electrode + "'");
+            throw PhysicsMessage.UNKNOWN_ELECTRODE.exception("name", electrode, "names", String.join(", ", stack.names()));
         }
         if (steps < 1 || !Double.isFinite(from_V) || !Double.isFinite(to_V) || from_V == to_V) {
             throw new IllegalArgumentException("a sweep needs finite, different ends and at least one step");

@@ -1,5 +1,6 @@
 package org.axistack.tune;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -67,7 +68,7 @@ public final class BiasTuner {
     public TuneResult focus(String electrode, FocusTarget target, BiasRange range) {
         int index = stack.indexOf(electrode);
         if (index < 0) {
-            throw new IllegalArgumentException("no electrode named '" + electrode + "'");
+            throw PhysicsMessage.UNKNOWN_ELECTRODE.exception("name", electrode, "names", String.join(", ", stack.names()));
         }
         FocusProbe coarse = new FocusProbe(solution, stack, target, FocusProbe.scanSettings());
         FocusProbe fine = new FocusProbe(solution, stack, target);

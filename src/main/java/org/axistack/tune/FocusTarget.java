@@ -1,5 +1,6 @@
 package org.axistack.tune;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.OptionalDouble;
 
 /**
@@ -13,12 +14,11 @@ public record FocusTarget(double imageZ_m, OptionalDouble objectZ_m) {
 
     public FocusTarget {
         if (!Double.isFinite(imageZ_m)) {
-            throw new IllegalArgumentException("image plane must be finite: " + imageZ_m);
+            throw PhysicsMessage.IMAGE_PLANE.exception("z", imageZ_m * 1e3);
         }
         objectZ_m = objectZ_m == null ? OptionalDouble.empty() : objectZ_m;
         if (objectZ_m.isPresent() && !(objectZ_m.getAsDouble() < imageZ_m)) {
-            throw new IllegalArgumentException("the object must lie before the image plane: object "
-                    + objectZ_m.getAsDouble() + " m, image " + imageZ_m + " m");
+            throw PhysicsMessage.OBJECT_AFTER_IMAGE.exception("object", objectZ_m.getAsDouble() * 1e3, "image", imageZ_m * 1e3);
         }
     }
 

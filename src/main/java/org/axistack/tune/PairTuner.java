@@ -1,5 +1,6 @@
 package org.axistack.tune;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -79,13 +80,13 @@ public final class PairTuner {
         int i1 = stack.indexOf(first);
         int i2 = stack.indexOf(second);
         if (i1 < 0 || i2 < 0) {
-            throw new IllegalArgumentException("no electrode named '" + (i1 < 0 ? first : second) + "'");
+            throw PhysicsMessage.UNKNOWN_ELECTRODE.exception("name", i1 < 0 ? first : second, "names", String.join(", ", stack.names()));
         }
         if (i1 == i2) {
-            throw new IllegalArgumentException("two different electrodes are needed for two conditions");
+            throw PhysicsMessage.SAME_ELECTRODE_TWICE.exception("name", first);
         }
         if (condition instanceof SecondCondition.Magnification && target.objectAtInfinity()) {
-            throw new IllegalArgumentException("a magnification needs a finite object position");
+            throw PhysicsMessage.MAGNIFICATION_NEEDS_OBJECT.exception();
         }
         FocusProbe probe = new FocusProbe(solution, stack, target);
         Biases base = stack.biases();

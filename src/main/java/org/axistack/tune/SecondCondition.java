@@ -1,5 +1,6 @@
 package org.axistack.tune;
 
+import org.axistack.model.PhysicsMessage;
 import org.axistack.optics.ParaxialOptics;
 
 /** The second condition solved together with the image position when two electrodes are varied. */
@@ -21,7 +22,7 @@ public sealed interface SecondCondition permits SecondCondition.Magnification, S
     record Magnification(double value) implements SecondCondition {
         public Magnification {
             if (!Double.isFinite(value) || value == 0) {
-                throw new IllegalArgumentException("magnification must be finite and non-zero: " + value);
+                throw PhysicsMessage.MAGNIFICATION_VALUE.exception("value", value);
             }
         }
 
@@ -43,7 +44,7 @@ public sealed interface SecondCondition permits SecondCondition.Magnification, S
     record FocalLength(double value) implements SecondCondition {
         public FocalLength {
             if (!Double.isFinite(value) || value == 0) {
-                throw new IllegalArgumentException("focal length must be finite and non-zero: " + value);
+                throw PhysicsMessage.FOCAL_LENGTH_VALUE.exception("value", value * 1e3);
             }
         }
 

@@ -12,6 +12,7 @@ import javax.swing.JPanel;
 import javax.swing.JSlider;
 import javax.swing.JTextField;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.model.Electrode;
 import org.axistack.model.Stack;
 
@@ -107,7 +108,7 @@ final class BiasPanel extends JPanel {
             if (v != biases[k]) {
                 set(k, v, false);
             }
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             onError.accept(e.getMessage());
             f.setText(UiFormat.volts(biases[k]));
         }

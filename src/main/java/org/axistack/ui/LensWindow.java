@@ -31,6 +31,7 @@ import javax.swing.SwingUtilities;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.io.BuiltInStacks;
 import org.axistack.io.StackInputException;
 import org.axistack.model.Stack;
@@ -187,7 +188,7 @@ public final class LensWindow extends JFrame {
             if (current != null) {
                 startEnvelope(current);
             }
-        } catch (IllegalArgumentException ex) {
+        } catch (IllegalArgumentException | PhysicsException ex) {
             status("envelope: type a current >= 0 in microamperes and an emittance >= 0 in mm mrad");
         }
     }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.field.AxialField;
 import org.axistack.model.Units;
 import org.axistack.model.Beam;
@@ -120,7 +121,7 @@ public final class LiveRays {
                 Tracer.checkPlacement(g, r, targets);
             }
             return true;
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | PhysicsException e) {
             return false;
         }
     }
@@ -142,7 +143,7 @@ public final class LiveRays {
         for (RayStart r : set.rays()) {
             try {
                 out.add(tracer.trace(set.particle(), r, targets));
-            } catch (IllegalArgumentException e) {
+            } catch (IllegalArgumentException | PhysicsException e) {
                 problem = "; a ray could not start: " + e.getMessage();
             }
         }

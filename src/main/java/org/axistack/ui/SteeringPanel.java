@@ -11,6 +11,7 @@ import javax.swing.JPanel;
 import javax.swing.JSlider;
 import javax.swing.JTextField;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
 
@@ -79,7 +80,7 @@ final class SteeringPanel extends JPanel {
                     updating = false;
                     onChange.run();
                 }
-            } catch (IllegalArgumentException ex) {
+            } catch (IllegalArgumentException | PhysicsException ex) {
                 onError.accept(ex.getMessage());
                 f.setText(UiFormat.volts(v[axis]));
             }

@@ -70,7 +70,7 @@ class TracedAberrationsTest {
         RingLens lens = RingLens.standard();
         Tracer tracer = new Tracer(lens.field(), lens.geometry(), TraceSettings.defaults());
         assertThatThrownBy(() -> TracedAberrations.measure(tracer, Particle.electron(), 1000, Z0, Z1, 5e-3,
-                OptionalDouble.empty())).isInstanceOf(IllegalArgumentException.class)
+                OptionalDouble.empty())).isInstanceOf(org.axistack.model.PhysicsException.class)
                 .hasMessageContaining("lower the largest ray height");
     }
 }

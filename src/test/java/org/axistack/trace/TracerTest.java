@@ -186,10 +186,10 @@ class TracerTest {
         Tracer tracer = new Tracer(new UniformField(0, 0), g, TraceSettings.defaults());
         Particle el = Particle.electron();
         assertThatThrownBy(() -> tracer.trace(el, RayStart.withSlopes(3, 2e-3, 0, 0.03, 0, 0, 100),
-                TraceTargets.screenOnly(0.06))).isInstanceOf(IllegalArgumentException.class)
+                TraceTargets.screenOnly(0.06))).isInstanceOf(org.axistack.model.PhysicsException.class)
                 .hasMessageContaining("ray 3 starts inside electrode 'stop'").hasMessageContaining("open bore");
         assertThatThrownBy(() -> tracer.trace(el, RayStart.withSlopes(1, 0, 0, 0, 0, 0, 100),
-                TraceTargets.screenOnly(0.5))).isInstanceOf(IllegalArgumentException.class)
+                TraceTargets.screenOnly(0.5))).isInstanceOf(org.axistack.model.PhysicsException.class)
                 .hasMessageContaining("screen at z = 500 mm lies outside the traced region");
         assertThatThrownBy(() -> tracer.trace(el, RayStart.withSlopes(1, 0, 0, 0.02, 0, 0, 100),
                 new TraceTargets(List.of(0.01), 0.06))).hasMessageContaining("before the start of ray 1");

@@ -1,0 +1,62 @@
+package org.axistack.model;
+
+import java.util.LinkedHashSet;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * The one way a catalogued message is written: a problem template and a fix template with placeholders
+ * {@code {name}}, filled and joined as "problem. Fix: fix." Both catalogues (bad input files and physics failures)
+ * use it, so every message the tool prints about what went wrong reads the same way.
+ */
+public final class MessageTemplate {
+
+    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([a-zA-Z]+)}");
+
+    private MessageTemplate() {
+    }
+
+    /** The placeholder names the templates use, in order of first appearance. */
+    public static Set<String> placeholders(String... templates) {
+        Set<String> s = new LinkedHashSet<>();
+        for (String t : templates) {
+            Matcher m = PLACEHOLDER.matcher(t);
+            while (m.find()) {
+                s.add(m.group(1));
+            }
+        }
+        return s;
+    }
+
+    /**
+     * "problem. Fix: fix." with the placeholders filled; numbers are written by {@link Numbers#text(double)}.
+     *
+     * @param entry the catalogue entry's name, for the error a missing value is
+     */
+    public static String format(String entry, String problem, String fix, Map<String, ?> values) {
+        return tidy(fill(entry, problem, values)) + ". Fix: " + tidy(fill(entry, fix, values)) + ".";
+    }
+
+    /** One space between words where an empty value (a unitless number's unit) left two or one before a stop. */
+    private static String tidy(String s) {
+        return s.replaceAll(" {2,}", " ").replaceAll(" +([.,;:)])", "$1").strip();
+    }
+
+    private static String fill(String entry, String template, Map<String, ?> values) {
+        Matcher m = PLACEHOLDER.matcher(template);
+        StringBuilder sb = new StringBuilder();
+        while (m.find()) {
+            String key = m.group(1);
+            if (!values.containsKey(key)) {
+                throw new IllegalArgumentException("message " + entry + " needs a value for {" + key + "}");
+            }
+            Object v = values.get(key);
+            String text = v instanceof Double d ? Numbers.text(d) : String.valueOf(v);
+            m.appendReplacement(sb, Matcher.quoteReplacement(text));
+        }
+        m.appendTail(sb);
+        return sb.toString();
+    }
+}
