@@ -62,7 +62,7 @@ public enum PhysicsMessage {
     RAY_ENERGY(Kind.REQUEST, "ray {ray} has energy {energy} eV; a ray needs a positive energy",
             "give a positive beam energy"),
     RAY_COUNT(Kind.REQUEST, "{what}: asked for {count} rays", "ask for at least one ray"),
-    RAY_SET_NEGATIVE(Kind.REQUEST, "{what} must be zero or positive, got {value}", "give zero or a positive value"),
+    RAY_SET_NEGATIVE(Kind.REQUEST, "{what} must be zero or positive, got {value} {unit}", "give zero or a positive value"),
     FAN_ANGLE(Kind.REQUEST, "fan half-angle {angle} mrad is not below 90 degrees", "give a half-angle below 1570 mrad"),
     GAUSSIAN_CUTOFF(Kind.REQUEST, "Gaussian beam cutoff {cutoff} mm is too small for sigma {sigma} mm",
             "use a cutoff of at least 0.1 sigma (3 sigma is usual)"),

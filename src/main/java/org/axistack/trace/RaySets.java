@@ -24,9 +24,9 @@ public final class RaySets {
     }
 
     /** v in SI units (m, rad); the message gives it in mm or mrad. */
-    private static void requireNonNegative(double v, String what) {
+    private static void requireNonNegative(double v, String what, String unit) {
         if (!(v >= 0) || !Double.isFinite(v)) {
-            throw PhysicsMessage.RAY_SET_NEGATIVE.exception("what", what, "value", v * 1e3);
+            throw PhysicsMessage.RAY_SET_NEGATIVE.exception("what", what, "value", v * 1e3, "unit", unit);
         }
     }
 
@@ -40,7 +40,7 @@ public final class RaySets {
             int n, int azimuths) {
         requireCount(n, "point fan");
         requireCount(azimuths, "point fan azimuths");
-        requireNonNegative(maxAngle_rad, "fan half-angle (mrad)");
+        requireNonNegative(maxAngle_rad, "fan half-angle", "mrad");
         if (!(maxAngle_rad < Math.PI / 2)) {
             throw PhysicsMessage.FAN_ANGLE.exception("angle", maxAngle_rad * 1e3);
         }
@@ -70,7 +70,7 @@ public final class RaySets {
     public static RaySet uniformDisk(Particle particle, double energy_eV, double z0_m, double radius_m, int n,
             long seed) {
         requireCount(n, "uniform disk");
-        requireNonNegative(radius_m, "disk radius (mm)");
+        requireNonNegative(radius_m, "disk radius", "mm");
         Random rnd = new Random(seed);
         List<RayStart> rays = new ArrayList<>();
         for (int i = 0; i < n; i++) {
@@ -88,8 +88,8 @@ public final class RaySets {
     public static RaySet gaussianBeam(Particle particle, double energy_eV, double z0_m, double sigma_m,
             double cutoff_m, int n, long seed) {
         requireCount(n, "Gaussian beam");
-        requireNonNegative(sigma_m, "beam sigma (mm)");
-        requireNonNegative(cutoff_m, "beam cutoff radius (mm)");
+        requireNonNegative(sigma_m, "beam sigma", "mm");
+        requireNonNegative(cutoff_m, "beam cutoff radius", "mm");
         if (sigma_m > 0 && cutoff_m < 0.1 * sigma_m) {
             throw PhysicsMessage.GAUSSIAN_CUTOFF.exception("cutoff", cutoff_m * 1e3, "sigma", sigma_m * 1e3);
         }
@@ -114,7 +114,7 @@ public final class RaySets {
     public static RaySet ring(Particle particle, double energy_eV, double z0_m, double radius_m, double radialSlope,
             int n) {
         requireCount(n, "ring");
-        requireNonNegative(radius_m, "ring radius (mm)");
+        requireNonNegative(radius_m, "ring radius", "mm");
         List<RayStart> rays = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             double ph = 2 * Math.PI * i / n;
