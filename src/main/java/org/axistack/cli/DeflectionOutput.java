@@ -26,10 +26,14 @@ final class DeflectionOutput {
     private DeflectionOutput() {
     }
 
-    /** Adds the deflection keys to {@code out} when the stack has split electrodes. */
-    static void put(Map<String, Object> out, Stack stack, BiasedField field, ParaxialOptics optics, SolveProgress progress) {
+    /**
+     * Adds the deflection keys to {@code out} when the stack has split electrodes; returns the harmonics solved
+     * (1, and 2 when a split electrode carries a quadrupole, for {@link StigmationOutput}), or null.
+     */
+    static SectorField put(Map<String, Object> out, Stack stack, BiasedField field, ParaxialOptics optics,
+            SolveProgress progress) {
         if (!stack.hasSectors()) {
-            return;
+            return null;
         }
         Map<Integer, Sectors> byIndex = new LinkedHashMap<>();
         Map<Integer, List<Double>> biases = new LinkedHashMap<>();
@@ -39,9 +43,10 @@ final class DeflectionOutput {
         });
         double zScreen = stack.screenZ_m().orElse(optics.zEnd_m());
         if (!(zScreen > optics.zStart_m())) {
-            return;
+            return null;
         }
-        SectorField sf = SectorField.solve(field.solution(), byIndex, 1, progress);
+        SectorField sf = SectorField.solve(field.solution(), byIndex, StigmationOutput.hasStigmators(stack) ? 2 : 1,
+                progress);
         SplitDeflection d = SplitDeflection.of(sf, optics, optics.zStart_m(), new double[] {zScreen});
         double[] ray = d.ray(0, biases);
         out.put("deflection_plane_z_mm", Units.mToMm(zScreen));
@@ -64,6 +69,7 @@ final class DeflectionOutput {
         out.put("deflection", per);
         out.put("deflection_method", "first order in the sector biases (dipole harmonic, central ray launched on the"
                 + " axis at the object-side reference plane)");
+        return sf;
     }
 
     /** Text lines for the deflection keys, if present. */

@@ -66,6 +66,12 @@ final class OpticsCommand implements Callable<Integer> {
             description = "Object-side aperture angle in mrad for the off-axis aberrations' blur (with --object-height-mm).")
     Double aperture_mrad;
 
+    @Option(names = "--astigmatism", paramLabel = "DZ:DEG",
+            description = "An astigmatism to cancel with the stack's stigmators (split electrodes with a quadrupole"
+                    + " harmonic): the rays in the plane at DEG degrees from x focus DZ mm downstream of those in the"
+                    + " perpendicular plane; prints the stigmator biases that cancel it.")
+    String astigmatism;
+
     @Option(names = "--accuracy", paramLabel = "REL", defaultValue = "1e-5",
             description = "Relative accuracy asked of the cardinal elements (default ${DEFAULT-VALUE} of f); exit 1 when"
                     + " the estimated error is larger.")
@@ -97,6 +103,7 @@ final class OpticsCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--object-height-mm needs a finite object: give --object-z or object_z_mm in the stack's [beam]");
         }
+        double[] givenAstigmatism = astigmatism == null ? null : astigmatism(stack);
         org.axistack.field.SolveProgress progress = SolveReporter.to(err, quiet.on());
         BiasedField field = BemSolver.solve(stack.electrodes(), stack.mesh(), progress).biased();
         Map<String, Object> out = new LinkedHashMap<>();
@@ -188,7 +195,8 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("chromatic_aberration_mm", null);
             out.put("aberration_convention", "undefined for an afocal lens");
         }
-        DeflectionOutput.put(out, stack, field, optics, progress);
+        org.axistack.field.SectorField sectors = DeflectionOutput.put(out, stack, field, optics, progress);
+        StigmationOutput.put(out, stack, sectors, optics, objectZ, givenAstigmatism);
         java.util.List<String> warnings = new java.util.ArrayList<>();
         org.axistack.optics.OpticsAccuracy.shortfall(c, accuracy).ifPresent(warnings::add);
         org.axistack.optics.OpticsAccuracy.closeTheLens(c).ifPresent(warnings::add);
@@ -201,6 +209,32 @@ final class OpticsCommand implements Callable<Integer> {
             throw new OutcomeException(c.notFocusingStatement() + "; change the biases (e.g. with --set) to get a real focus");
         }
         return 0;
+    }
+
+    /** --astigmatism DZ:DEG read and checked before the solve: {difference m, axis rad}. */
+    private double[] astigmatism(Stack stack) {
+        CommandLine cl = spec.commandLine();
+        if (!StigmationOutput.hasStigmators(stack)) {
+            throw new CommandLine.ParameterException(cl, "--astigmatism needs a stigmator: " + input.shownAs()
+                    + " has no split electrode with a quadrupole harmonic (give one electrode sectors = 4 or 8 and"
+                    + " sector_biases_V)");
+        }
+        String[] parts = astigmatism.split(":", -1);
+        try {
+            if (parts.length != 2) {
+                throw new NumberFormatException();
+            }
+            double dz = Double.parseDouble(parts[0].strip());
+            double deg = Double.parseDouble(parts[1].strip());
+            if (!Double.isFinite(dz) || !Double.isFinite(deg) || Math.abs(dz) > 10000 || Math.abs(deg) > 360) {
+                throw new NumberFormatException();
+            }
+            return new double[] {Units.mmToM(dz), Math.toRadians(deg)};
+        } catch (NumberFormatException e) {
+            throw new CommandLine.ParameterException(cl, "--astigmatism " + astigmatism + ": expected DZ:DEG, the"
+                    + " distance in mm (within +-10000) between the line foci and the angle in degrees (within +-360)"
+                    + " of the plane whose rays focus farther, for example 0.2:30");
+        }
     }
 
     private static double[] mmArray(double[] m) {
@@ -277,6 +311,7 @@ final class OpticsCommand implements Callable<Integer> {
             OffAxisOutput.print(w, typed);
         }
         DeflectionOutput.print(w, out);
+        StigmationOutput.print(w, out);
         for (Object warning : (java.util.List<?>) out.get("warnings")) {
             w.println("  WARNING: " + warning);
         }

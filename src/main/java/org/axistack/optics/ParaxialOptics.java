@@ -383,6 +383,14 @@ public final class ParaxialOptics {
         return matrix(zEnd_m(), zEnd_m(), m);
     }
 
+    /**
+     * The map from the real ray at the image-side plane {@link #zEnd_m()} (height, slope) to its image-side
+     * asymptote (height at zEnd, slope): the identity unless the image side is open.
+     */
+    public TransferMatrix toImageAsymptote() {
+        return exitToAsymptote();
+    }
+
     /** The map between the asymptotes: object-side (height at zStart, slope) to image-side (height at zEnd, slope). */
     public TransferMatrix asymptoticTransfer() {
         return entryFromAsymptote().then(transfer(zStart_m(), zEnd_m())).then(exitToAsymptote())
