@@ -34,6 +34,9 @@ final class PlanSummary {
         p.cardinal().ifPresent(c -> cardinal(w, c, p));
         p.imaging().ifPresent(im -> imaging(w, im));
         p.aberrations().ifPresent(a -> aberrations(w, a));
+        p.offAxis().ifPresent(o -> OffAxisOutput.print(w, OffAxisOutput.map(o.coefficients(),
+                o.objectHeight_m().isPresent() ? o.objectHeight_m().getAsDouble() * 1e3 : null,
+                o.aperture_rad().isPresent() ? o.aperture_rad().getAsDouble() * 1e3 : null)));
         spot(w, p);
         tuning(w, p);
         if (!p.sweep().isEmpty() && p.sweepElectrode().isPresent()) {
@@ -179,6 +182,9 @@ final class PlanSummary {
                     c.workingPoint().label(), g(a.fw50_m() * 1e9), g(a.current_A()), g(z.fw50_m() * 1e9), g(z.current_A()),
                     c.dominanceInWords(), pinned ? "; the best aperture angle lies at the end of the range for some currents"
                             : ""));
+            if (c.offAxis().isPresent()) {
+                w.println("  " + c.offAxisInWords());
+            }
         }
         for (String n : study.notes()) {
             w.println("Probe note: " + n);

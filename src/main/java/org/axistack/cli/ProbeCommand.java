@@ -234,6 +234,7 @@ final class ProbeCommand implements Callable<Integer> {
             w.println(c.diffractionNegligible() ? String.format(Locale.ROOT,
                     "    diffraction negligible: below %.2g %% of the squared size everywhere on the curve", Math.max(100 * diffr, 1e-6))
                     : String.format(Locale.ROOT, "    diffraction matters: up to %.0f %% of the squared size", 100 * diffr));
+            w.println("    " + c.offAxisInWords());
         }
         for (String n : study.notes()) {
             w.println("  note: " + n);

@@ -27,6 +27,8 @@ import org.axistack.optics.Imaging;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
 import org.axistack.optics.SpotSizeBudget;
+import org.axistack.optics.OffAxisAberrations;
+import org.axistack.optics.OffAxisEffects;
 import org.axistack.optics.OpticsAccuracy;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.probe.ProbeSource;
@@ -74,10 +76,17 @@ public final class PlanAnalysis {
      * @param depth_m          the supply-stability budget keeps the focus within +/- this, m
      * @param probeBrightness_A_per_m2_sr_V reduced brightness of the source for the probe section (empty: no probe
      *                         plan); the energy spread above is taken as its FWHM
+     * @param objectHeight_m   object height for the off-axis aberrations' effects (a stack with a finite object;
+     *                         empty: the coefficients only)
+     * @param aperture_rad     object-side aperture half-angle for their blur (needs the height; empty: none)
      */
     public record Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
-            boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V) {
+            boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V, OptionalDouble objectHeight_m,
+            OptionalDouble aperture_rad) {
         public Settings {
+            objectHeight_m = objectHeight_m == null ? OptionalDouble.empty() : objectHeight_m;
+            aperture_rad = aperture_rad == null ? OptionalDouble.empty() : aperture_rad;
+            OffAxisEffects.requireValid(objectHeight_m, aperture_rad);
             probeBrightness_A_per_m2_sr_V = probeBrightness_A_per_m2_sr_V == null ? OptionalDouble.empty()
                     : probeBrightness_A_per_m2_sr_V;
             if (probeBrightness_A_per_m2_sr_V.isPresent() && !(probeBrightness_A_per_m2_sr_V.getAsDouble() > 0
@@ -101,6 +110,19 @@ public final class PlanAnalysis {
             return new Settings(1, 1e-5, 1e-6, null, true, FocusSensitivity.DEFAULT_DEPTH_M);
         }
 
+        /** Settings without object height or aperture for the off-axis effects. */
+        public Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
+                boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V) {
+            this(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
+                    probeBrightness_A_per_m2_sr_V, OptionalDouble.empty(), OptionalDouble.empty());
+        }
+
+        /** The same settings with an object height and aperture angle for the off-axis effects (either may be empty). */
+        public Settings withOffAxis(OptionalDouble height_m, OptionalDouble alpha_rad) {
+            return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
+                    probeBrightness_A_per_m2_sr_V, height_m, alpha_rad);
+        }
+
         /** Settings without a probe plan. */
         public Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
                 boolean runChecks, double depth_m) {
@@ -110,19 +132,19 @@ public final class PlanAnalysis {
         /** The same settings with another envelope beam. */
         public Settings withEnvelope(double newCurrent_A, double newEmittance_m_rad) {
             return new Settings(energySpread_eV, newCurrent_A, newEmittance_m_rad, tuneElectrode, runChecks, depth_m,
-                    probeBrightness_A_per_m2_sr_V);
+                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad);
         }
 
         /** The same settings with or without the verification cases. */
         public Settings withChecks(boolean run) {
             return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, run, depth_m,
-                    probeBrightness_A_per_m2_sr_V);
+                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad);
         }
 
         /** The same settings with a probe plan for a source of this reduced brightness, A/(m^2 sr V). */
         public Settings withProbeBrightness(double brightness_A_per_m2_sr_V) {
             return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
-                    OptionalDouble.of(brightness_A_per_m2_sr_V));
+                    OptionalDouble.of(brightness_A_per_m2_sr_V), objectHeight_m, aperture_rad);
         }
     }
 
@@ -185,6 +207,7 @@ public final class PlanAnalysis {
 
         announce(progress, "paraxial optics and aberrations", share.optics);
         Optics o = Optics.of(stack, field, warnings);
+        Optional<OffAxisEffects> offAxis = o.offAxis.map(c -> new OffAxisEffects(c, s.objectHeight_m(), s.aperture_rad()));
 
         Optional<SpotSizeBudget.Inputs> spotInputs = Optional.empty();
         List<SpotSizeBudget.Row> spotRows = new ArrayList<>();
@@ -277,7 +300,7 @@ public final class PlanAnalysis {
         return new LensPlan(stack, source, solution, field, o.reflection, o.cardinal, o.note, o.imaging,
                 o.aberrations, spotInputs, spotRows, rays, rayNote, envelope, envNote, tuning.tune(), tuning.note(),
                 tuning.budgets(), tuning.budgetNote(), Optional.ofNullable(name), sweep, checks, warnings,
-                (System.nanoTime() - t0) * 1e-9, probe);
+                (System.nanoTime() - t0) * 1e-9, probe, offAxis, o.offAxisNote);
     }
 
     /** The default envelope beam's edge radius: a quarter of the narrowest open bore, m (plan and envelope commands). */
@@ -373,7 +396,8 @@ public final class PlanAnalysis {
 
     /** The paraxial part of the plan, or why it is missing. */
     private record Optics(Optional<String> reflection, Optional<CardinalElements> cardinal, String note,
-            Optional<Imaging> imaging, Optional<Aberrations> aberrations, Optional<CheckResult> lensCheck) {
+            Optional<Imaging> imaging, Optional<Aberrations> aberrations, Optional<CheckResult> lensCheck,
+            Optional<OffAxisAberrations> offAxis, String offAxisNote) {
 
         /**
          * The verification row for the lens at hand: its image-side focal length with the far-field traced range
@@ -401,6 +425,9 @@ public final class PlanAnalysis {
             Optional<Imaging> imaging = Optional.empty();
             Optional<Aberrations> aberrations = Optional.empty();
             Optional<CheckResult> lensCheck = Optional.empty();
+            Optional<OffAxisAberrations> offAxis = Optional.empty();
+            String offAxisNote = "the stack's object is at infinity ([beam] has no object_z_mm): the off-axis aberrations"
+                    + " of a finite object are not computed";
             String note;
             try {
                 ParaxialOptics optics = ParaxialOptics.of(field, stack);
@@ -419,6 +446,14 @@ public final class PlanAnalysis {
                     imaging = Optional.of(optics.imaging(obj.getAsDouble()));
                 }
                 aberrations = optics.quotedAberrations(imaging);
+                if (obj.isPresent()) {
+                    try {
+                        offAxis = Optional.of(optics.offAxisAberrations(obj.getAsDouble()));
+                        offAxisNote = "";
+                    } catch (IllegalArgumentException e) {
+                        offAxisNote = e.getMessage();
+                    }
+                }
                 if (!c.focuses()) {
                     warnings.add(c.notFocusingStatement() + "; change the biases (with --set or the window's bias controls) to get a real focus");
                 }
@@ -432,7 +467,10 @@ public final class PlanAnalysis {
                         + "%s mm); move it into the field-free entrance region", PlanFormat.num(Units.mToMm(e.startZ_m())),
                         PlanFormat.num(Units.mToMm(e.usableFromZ_m())), PlanFormat.num(Units.mToMm(e.usableToZ_m()))));
             }
-            return new Optics(reflection, cardinal, note, imaging, aberrations, lensCheck);
+            if (reflection.isPresent()) {
+                offAxisNote = "the beam is reflected: no off-axis aberrations";
+            }
+            return new Optics(reflection, cardinal, note, imaging, aberrations, lensCheck, offAxis, offAxisNote);
         }
     }
 }

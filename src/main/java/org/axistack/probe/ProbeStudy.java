@@ -8,6 +8,7 @@ import java.util.Optional;
 import org.axistack.model.PhysicsException;
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
+import org.axistack.optics.OffAxisAberrations;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
 import org.axistack.tune.BiasTuner;
@@ -77,10 +78,61 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
         }
     }
 
-    /** A working point and its probe curve. */
-    public record Curve(ProbeWorkingPoint workingPoint, ProbeModel model, List<ProbePoint> points) {
+    /**
+     * A working point and its probe curve.
+     *
+     * @param offAxis the off-axis third-order aberrations for the source plane (empty: source at infinity)
+     */
+    public record Curve(ProbeWorkingPoint workingPoint, ProbeModel model, List<ProbePoint> points,
+            Optional<OffAxisAberrations> offAxis) {
         public Curve {
             points = List.copyOf(points);
+            offAxis = offAxis == null ? Optional.empty() : offAxis;
+        }
+
+        /**
+         * Off-axis blur at the edge of the source image for a curve point, m (NaN without off-axis coefficients): the
+         * source point imaged at the FW50 radius of the source image sits at object height h = d_I/(2|M|) and sends a
+         * pencil of object-side half-angle a_o = a / |s'(z_i)| (the axial ray's image slope per unit object slope);
+         * at the Gaussian image its tangential coma is 3 |M K| h a_o^2 long and field curvature with astigmatism
+         * spread it over 2 |M| max(|F + A|, |F - A|) h^2 a_o (the convention of {@link OffAxisAberrations}); the two
+         * are added in quadrature. An estimate (third order, at the Gaussian image, the edge point only).
+         */
+        public double offAxisBlur_m(ProbePoint p) {
+            if (offAxis.isEmpty()) {
+                return Double.NaN;
+            }
+            OffAxisAberrations oa = offAxis.get();
+            double m = Math.abs(oa.magnification());
+            double h = p.source_m() / (2 * m);
+            double ao = p.alpha_rad() / Math.abs(oa.imageSlopeRatio());
+            double coma = 3 * m * Math.abs(oa.coma()) * h * ao * ao;
+            double field = 2 * m * Math.max(Math.abs(oa.fieldCurvature_per_m() + oa.astigmatism_per_m()),
+                    Math.abs(oa.fieldCurvature_per_m() - oa.astigmatism_per_m())) * h * h * ao;
+            return Math.hypot(coma, field);
+        }
+
+        /** The largest (off-axis blur / quadrature size)^2 on the curve (NaN without off-axis coefficients). */
+        public double offAxisShare() {
+            if (offAxis.isEmpty()) {
+                return Double.NaN;
+            }
+            return points.stream().mapToDouble(p -> Math.pow(offAxisBlur_m(p) / p.quadrature_m(), 2)).max().orElse(0);
+        }
+
+        /** When the off-axis blur matters, in words. */
+        public String offAxisInWords() {
+            if (offAxis.isEmpty()) {
+                return "off-axis aberrations not evaluated: the source is at infinity (give [beam] object_z_mm)";
+            }
+            double share = offAxisShare();
+            String what = "off-axis blur at the edge of the source image (coma, field curvature and astigmatism at the"
+                    + " Gaussian image, third order)";
+            return share < NEGLIGIBLE_SHARE
+                    ? String.format(Locale.ROOT, "%s negligible: below %.2g %% of the squared probe size everywhere on the"
+                            + " curve", what, Math.max(100 * share, 1e-6))
+                    : String.format(Locale.ROOT, "%s matters: up to %.0f %% of the squared probe size; the probe is larger"
+                            + " than given there", what, 100 * share);
         }
 
         /**
@@ -171,7 +223,11 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
             if (points.isEmpty()) {
                 notes.add(label + ": no current in the range can pass the aperture angles at this magnification");
             }
-            curves.add(new Curve(wp, model, points));
+            Optional<OffAxisAberrations> offAxis = Optional.empty();
+            if (stack.beam().objectZ_m().isPresent()) {
+                offAxis = Optional.of(optics.offAxisAberrations(stack.beam().objectZ_m().getAsDouble()));
+            }
+            curves.add(new Curve(wp, model, points, offAxis));
         } catch (ReflectionException e) {
             notes.add(label + ": the beam is reflected (" + e.getMessage() + ")");
         } catch (IllegalArgumentException | PhysicsException | IllegalStateException e) {

@@ -149,6 +149,7 @@ public final class HtmlReport {
         b.append("<h2>Geometry and rays</h2>\n<img src=\"geometry.png\" alt=\"meridian section with rays\">\n<p class=\"note\">")
                 .append(Html.esc(plan.rayNote())).append("</p>\n");
         PlanSections.optics(b, plan);
+        OffAxisSection.html(b, plan);
         PlanSections.spot(b, plan);
         ProbeSection.html(b, plan);
         PlanSections.tuning(b, plan);

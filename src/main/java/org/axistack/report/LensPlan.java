@@ -48,6 +48,9 @@ import org.axistack.verify.CheckResult;
  * @param seconds      wall time of the whole plan, s
  * @param probe        probe size against current at the given and the focusing biases (empty: no source brightness
  *                     given, or the beam is reflected)
+ * @param offAxis      the off-axis aberrations of the stack's finite object, with the object height and aperture angle
+ *                     of their effects when given (empty: object at infinity, imaged to infinity, or reflected)
+ * @param offAxisNote  why they are missing (empty text when present)
  */
 public record LensPlan(Stack stack, String source, FieldSolution solution, BiasedField field,
         Optional<String> reflection, Optional<CardinalElements> cardinal, String optics, Optional<Imaging> imaging,
@@ -55,7 +58,8 @@ public record LensPlan(Stack stack, String source, FieldSolution solution, Biase
         List<Trajectory> rays, String rayNote, Optional<EnvelopeStudyResult> envelope, String envelopeNote,
         Optional<TuneResult> tune, String tuneNote, List<FocusSensitivity> budgets, String budgetNote,
         Optional<String> sweepElectrode, List<SweepPoint> sweep,
-        List<CheckResult> checks, List<String> warnings, double seconds, Optional<org.axistack.probe.ProbeStudy> probe) {
+        List<CheckResult> checks, List<String> warnings, double seconds, Optional<org.axistack.probe.ProbeStudy> probe,
+        Optional<org.axistack.optics.OffAxisEffects> offAxis, String offAxisNote) {
 
     public LensPlan {
         spotRows = List.copyOf(spotRows);

@@ -66,7 +66,7 @@ final class ProbeSection {
             b.append("<p class=\"note\">").append(Html.esc(c.dominanceInWords())).append(c.diffractionNegligible()
                     ? "; diffraction negligible (below 1 % of the squared size everywhere)"
                     : String.format(Locale.ROOT, "; diffraction up to %.0f %% of the squared size", 100 * diffr))
-                    .append(".</p>\n");
+                    .append("; ").append(Html.esc(c.offAxisInWords())).append(".</p>\n");
         }
         for (String n : study.notes()) {
             b.append("<p class=\"note\">").append(Html.esc(n)).append("</p>\n");

@@ -61,6 +61,7 @@ record ProbeCurveView(double[] biases_V, ProbeStudy study, List<String> summary,
                 lines.add(c.diffractionNegligible() ? "  diffraction negligible (below 1 % of the squared size everywhere)"
                         : String.format(Locale.ROOT, "  diffraction matters: up to %.0f %% of the squared size",
                                 100 * c.diffractionShare()));
+                lines.add("  " + c.offAxisInWords());
             }
         }
         lines.addAll(study.notes());

@@ -7,6 +7,7 @@ import static org.assertj.core.api.Assertions.within;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.CancellationException;
 
 import org.axistack.field.BemSolver;
@@ -159,5 +160,75 @@ class PlanAnalysisTest {
                 .contains(study.curves().get(0).dominanceInWords());
         assertThat(dir.resolve("probe").resolve("probe.csv")).exists();
         assertThat(dir.resolve("probe").resolve("probe.svg")).exists();
+    }
+
+    /**
+     * A stack with a finite object (the demo with [beam] object_z_mm 100 mm before its first electrode): the plan
+     * carries the off-axis aberrations that the optics package gives for that object (same computation on the same
+     * solution; the coefficients themselves are checked against exact skew rays in OffAxisAberrationsTest), with the
+     * height and aperture asked for, the report has the section with the effects, and the probe section says whether
+     * off-axis blur at the edge of the source image matters. The blur estimate (coma length and field-curvature
+     * diameter in quadrature) is compared with the diameter of the whole pencil's spot sampled from the five-term form
+     * of OffAxisAberrations (which lies between their larger and their sum): within a factor sqrt(2).
+     */
+    @Test
+    void aFiniteObjectGetsItsOffAxisAberrationsInThePlanAndTheProbeSection(@TempDir Path dir) throws IOException {
+        double zo = stack.minZ_m() - 0.1;
+        Stack imaging = stack.withBeam(stack.beam().withObjectZ_m(java.util.OptionalDouble.of(zo)));
+        LensPlan p = PlanAnalysis.run(imaging, "test", PlanAnalysis.Settings.defaults().withChecks(false)
+                .withProbeBrightness(1e8).withOffAxis(java.util.OptionalDouble.of(0.5e-3),
+                        java.util.OptionalDouble.of(2e-3)), solution, PlanAnalysis.Progress.NONE);
+        assertThat(p.offAxis()).isPresent();
+        org.axistack.optics.OffAxisAberrations ref = ParaxialOptics.of(solution.withBiases(imaging.biases_V()), imaging)
+                .offAxisAberrations(zo);
+        org.axistack.optics.OffAxisAberrations got = p.offAxis().get().coefficients();
+        assertThat(got.coma()).isEqualTo(ref.coma());
+        assertThat(got.distortion_per_m2()).isEqualTo(ref.distortion_per_m2());
+        assertThat(got.petzval_per_m()).isEqualTo(ref.petzval_per_m());
+        assertThat(p.offAxis().get().objectHeight_m().getAsDouble()).isEqualTo(0.5e-3);
+        String html = Files.readString(HtmlReport.write(p, dir.resolve("imaging"), java.util.Map.of()));
+        assertThat(html).contains("Off-axis aberrations (finite object)").contains("coma K")
+                .contains("object height h = 0.5 mm").contains("aperture a = 2 mrad");
+        org.axistack.probe.ProbeStudy.Curve curve = p.probe().get().curves().get(0);
+        assertThat(curve.offAxis()).isPresent();
+        assertThat(html).contains(curve.offAxisInWords());
+        for (org.axistack.probe.ProbePoint q : List.of(curve.points().get(0), curve.points().get(curve.points().size() - 1))) {
+            double estimate = curve.offAxisBlur_m(q);
+            double sampled = pencilDiameter(got, q.source_m() / (2 * Math.abs(got.magnification())),
+                    q.alpha_rad() / Math.abs(got.imageSlopeRatio()));
+            assertThat(estimate / sampled).isBetween(1 / Math.sqrt(2), Math.sqrt(2));
+        }
+        // without an object: a note, no section
+        assertThat(plan.offAxis()).isEmpty();
+        assertThat(plan.offAxisNote()).contains("object_z_mm");
+    }
+
+    /**
+     * The diameter of the off-axis part of the spot (coma, field curvature, astigmatism: the five-term form less the
+     * spherical term and the distortion shift) of the pencil of half-angle a from object height h, sampled over the
+     * filled pencil (12 rings x 72 directions), m.
+     */
+    private static double pencilDiameter(org.axistack.optics.OffAxisAberrations oa, double h, double a) {
+        List<double[]> pts = new java.util.ArrayList<>();
+        for (int ring = 0; ring <= 12; ring++) {
+            double r = a * ring / 12;
+            for (int k = 0; k < 72; k++) {
+                double phi = 2 * Math.PI * k / 72;
+                double bx = r * Math.cos(phi), by = r * Math.sin(phi);
+                // 2K h b conj(b) + K h b^2 + F h^2 b + A h^2 conj(b), times M
+                double x = oa.coma() * h * (2 * r * r + bx * bx - by * by) + oa.fieldCurvature_per_m() * h * h * bx
+                        + oa.astigmatism_per_m() * h * h * bx;
+                double y = oa.coma() * h * (2 * bx * by) + oa.fieldCurvature_per_m() * h * h * by
+                        - oa.astigmatism_per_m() * h * h * by;
+                pts.add(new double[] {oa.magnification() * x, oa.magnification() * y});
+            }
+        }
+        double d = 0;
+        for (double[] u : pts) {
+            for (double[] v : pts) {
+                d = Math.max(d, Math.hypot(u[0] - v[0], u[1] - v[1]));
+            }
+        }
+        return d;
     }
 }
