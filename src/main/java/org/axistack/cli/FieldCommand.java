@@ -81,6 +81,8 @@ final class FieldCommand implements Callable<Integer> {
             m.put("residual_V_per_V", solution.residual());
             m.put("solved_as_mirror_halves", solution.solvedAsMirrorHalves());
             m.put("axial_expansion_relative_error", field.axialExpansionError());
+            m.put("mesh_error_estimate_relative", solution.meshAccuracy().filter(a -> !Double.isNaN(a.estimate())).map(a -> (Object) a.estimate()).orElse(null));
+            m.put("mesh_error", solution.meshErrorStatement());
             List<Map<String, Object>> es = new ArrayList<>();
             for (int e = 0; e < stack.electrodes().size(); e++) {
                 Electrode el = stack.electrodes().get(e);
@@ -117,6 +119,7 @@ final class FieldCommand implements Callable<Integer> {
                 + " collocation nodes); solved in %.3f s%s; collocation residual %.1e V/V%n",
                 solution.mesh().panels().size(), solution.unknowns(), solution.solveSeconds(),
                 solution.solvedAsMirrorHalves() ? " (mirror-symmetric: two half-size systems)" : "", solution.residual());
+        out.println("  " + solution.meshErrorStatement());
         out.printf(Locale.ROOT, "  method: surface-charge boundary elements, exact ring kernel (elliptic integrals);"
                 + " axial values from a Chebyshev expansion within %.0e of the exact sum%n", Math.max(field.axialExpansionError(), 1e-16));
         out.println();

@@ -28,6 +28,7 @@ final class PlanSummary {
         w.println();
         w.println(String.format(Locale.ROOT, "Field: %d unknowns, collocation residual %.1e, axial expansion error %.1e",
                 p.solution().unknowns(), p.solution().residual(), p.field().axialExpansionError()));
+        w.println("  " + p.solution().meshErrorStatement());
         if (p.reflection().isPresent()) {
             w.println("REFLECTED: " + p.reflection().get());
         }
@@ -140,6 +141,7 @@ final class PlanSummary {
                         r.name(), g(Units.vPerMToVPerMm(r.peak().field_V_per_m())),
                         100 * r.peak().field_V_per_m() / s.limits().comfort_V_per_m(), r.verdict(),
                         PlanFormat.num(Units.mToMm(r.peak().z_m())), PlanFormat.num(Units.mToMm(r.peak().r_m()))));
+                r.convergence().ifPresent(c -> w.println("  " + " ".repeat(14) + " " + c));
             }
         }
     }

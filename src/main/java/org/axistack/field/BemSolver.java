@@ -46,12 +46,16 @@ public final class BemSolver {
     }
 
     /**
-     * Meshes and solves.
+     * Meshes and solves: to the settings' element count, or refining until the settings' accuracy is met
+     * ({@link AccurateSolve}) when they have one.
      *
      * @throws SolveException if the stack cannot be meshed, the system is singular, or the solved capacitance
      *                       matrix breaks reciprocity or the sign law badly ({@link CapacitanceCheck#refused()})
      */
     public static FieldSolution solve(List<Electrode> electrodes, MeshSettings settings, SolveProgress progress) {
+        if (settings.accuracyDriven()) {
+            return AccurateSolve.solve(electrodes, settings, progress);
+        }
         long t0 = System.nanoTime();
         BoundaryMesh mesh;
         try {
@@ -59,6 +63,15 @@ public final class BemSolver {
         } catch (IllegalArgumentException e) {
             throw new SolveException(SolveException.Reason.MESH, e.getMessage());
         }
+        return solveMesh(electrodes, mesh, progress, t0);
+    }
+
+    /** Solves on a given mesh of the electrodes (from {@link Mesher}). */
+    public static FieldSolution solveMesh(List<Electrode> electrodes, BoundaryMesh mesh, SolveProgress progress) {
+        return solveMesh(electrodes, mesh, progress, System.nanoTime());
+    }
+
+    private static FieldSolution solveMesh(List<Electrode> electrodes, BoundaryMesh mesh, SolveProgress progress, long t0) {
         int n = mesh.size();
         int limit = maxUnknownsForHeap();
         if (n > limit) {

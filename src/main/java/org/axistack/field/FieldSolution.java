@@ -29,6 +29,10 @@ public final class FieldSolution {
     private final boolean mirrorHalves;
     private final double[][] capacitance;
     private volatile AxialExpansion axialExpansion;
+    /** Set by an accuracy-driven solve (null for a fixed mesh). */
+    private MeshAccuracy meshAccuracy;
+    /** The next coarser mesh's solution of an accuracy-driven solve (null for a fixed mesh or a single rung). */
+    private FieldSolution coarser;
 
     FieldSolution(List<Electrode> electrodes, BoundaryMesh mesh, PanelQuadrature quad, PanelQuadrature.Bounds[] bounds,
             double[][] unitDensity, double residual, double solveSeconds, double assembleSeconds, boolean mirrorHalves) {
@@ -69,6 +73,51 @@ public final class FieldSolution {
             q[mesh.electrodeOf(j)] += fourPiEps0 * strength[j];
         }
         return q;
+    }
+
+    /** This solution with the record of the accuracy-driven refinement that produced it. */
+    FieldSolution withMeshAccuracy(MeshAccuracy accuracy, FieldSolution coarserRung) {
+        FieldSolution s = new FieldSolution(electrodes, mesh, quad, bounds, unitDensity, residual, accuracy.seconds(),
+                assembleSeconds, mirrorHalves);
+        s.meshAccuracy = accuracy;
+        s.coarser = coarserRung;
+        return s;
+    }
+
+    /**
+     * The solution on the next coarser mesh of an accuracy-driven solve (for convergence checks such as the peak
+     * surface field's); empty for a fixed mesh or when only one mesh was solved.
+     */
+    public java.util.Optional<FieldSolution> coarserRung() {
+        return java.util.Optional.ofNullable(coarser);
+    }
+
+    /** The accuracy-driven refinement that produced this solution, if any (empty for a fixed mesh). */
+    public java.util.Optional<MeshAccuracy> meshAccuracy() {
+        return java.util.Optional.ofNullable(meshAccuracy);
+    }
+
+    /**
+     * What is known of the mesh's error, in words for every output: the estimate of an accuracy-driven solve
+     * (relative to the largest bias difference, for any biases), or that a fixed mesh's error is not estimated.
+     */
+    public String meshErrorStatement() {
+        if (meshAccuracy == null) {
+            return "mesh error not estimated (fixed mesh of [mesh] target_elements; give [mesh] accuracy or --mesh-accuracy"
+                    + " to refine until an estimate meets it)";
+        }
+        MeshAccuracy a = meshAccuracy;
+        String est = Double.isNaN(a.estimate()) ? "not estimated (only one mesh fits under the element cap)"
+                : org.axistack.model.Numbers.scientific(a.estimate(), 1) + " of the largest bias difference";
+        String how = a.rungs().size() + " meshes refined by 1/sqrt(2), three times the change of the axial potential from the"
+                + " next coarser one";
+        if (a.met()) {
+            return "mesh error estimate " + est + " (requested " + org.axistack.model.Numbers.scientific(a.requested(), 0)
+                    + "; " + how + ")";
+        }
+        return "mesh error estimate " + est + ", ABOVE the requested " + org.axistack.model.Numbers.scientific(a.requested(), 0)
+                + (a.capped() ? ": refinement stopped at the element cap ([mesh] target_elements " + unknowns()
+                        + " unknowns solved); raise the cap or relax the accuracy" : "") + " (" + how + ")";
     }
 
     /** The field for the electrodes' own biases. */

@@ -242,12 +242,13 @@ public final class StackReader {
         TomlTable meshTable = table(top, "mesh", false, "[mesh]");
         if (meshTable != null) {
             TableFields m = new TableFields(source, meshTable, "[mesh]", lineOf(toml, "mesh"));
-            m.rejectUnknown(List.of("target_elements", "edge_levels"));
+            m.rejectUnknown(List.of("target_elements", "edge_levels", "accuracy"));
+            Double accuracy = m.optionalNumber("accuracy", "", MeshSettings.MIN_ACCURACY, MeshSettings.MAX_ACCURACY, "1e-7");
             int n = m.has("target_elements") ? (int) m.requireInteger("target_elements", 8, MeshSettings.MAX_ELEMENTS, "1200")
-                    : MeshSettings.DEFAULT_TARGET_ELEMENTS;
+                    : accuracy == null ? MeshSettings.DEFAULT_TARGET_ELEMENTS : MeshSettings.DEFAULT_ACCURACY_CAP;
             int lv = m.has("edge_levels") ? (int) m.requireInteger("edge_levels", 0, 40, "10")
                     : MeshSettings.DEFAULT_EDGE_LEVELS;
-            mesh = new MeshSettings(n, lv);
+            mesh = new MeshSettings(n, lv, accuracy == null ? Double.NaN : accuracy);
         }
         SurfaceFieldLimits limits = SurfaceFieldLimits.defaults();
         TomlTable limTable = table(top, "limits", false, "[limits]");

@@ -62,6 +62,9 @@ public final class StackWriter {
         if (!s.mesh().equals(MeshSettings.defaults())) {
             sb.append("\n[mesh]\ntarget_elements = ").append(s.mesh().targetElements())
                     .append("\nedge_levels = ").append(s.mesh().edgeLevels()).append('\n');
+            if (s.mesh().accuracyDriven()) {
+                sb.append("accuracy = ").append(num(s.mesh().accuracy())).append('\n');
+            }
         }
         if (!s.limits().equals(SurfaceFieldLimits.defaults())) {
             sb.append("\n[limits]\ncomfort_surface_field_V_per_mm = ")

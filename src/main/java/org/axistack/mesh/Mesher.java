@@ -59,12 +59,37 @@ public final class Mesher {
         return build(plans, hi, levels, totalLength);
     }
 
+    /**
+     * Meshes at a refinement scale instead of an element count (accuracy-driven meshing): every size the mesher
+     * sets scales with {@code scale} together (the uniform panel size is scale / 192 of the whole outline length,
+     * arc panels, the smallest panel across a gap, and above scale 1 also the cap of bore panels at their distance
+     * from the axis and the graded levels toward corners, which lose one level per doubling). Scale 1 is the
+     * reference mesh; 1/2 halves every panel.
+     */
+    public static BoundaryMesh meshAtScale(List<Electrode> electrodes, int edgeLevels, double scale) {
+        if (!(scale > 0) || scale > 1024) {
+            throw new IllegalArgumentException("mesh scale must be in (0, 1024], got " + scale);
+        }
+        List<SegPlan> plans = plans(electrodes);
+        double totalLength = 0;
+        for (Electrode e : electrodes) {
+            totalLength += e.contour().length_m();
+        }
+        int levels = scale > 1 ? Math.max(1, edgeLevels - (int) Math.round(Math.log(scale) / Math.log(2))) : edgeLevels;
+        return build(plans, scale * ARC_REFERENCE_SHARE * totalLength, levels, totalLength, scale);
+    }
+
     private static BoundaryMesh build(List<SegPlan> plans, double h, int levels, double totalLength) {
+        return build(plans, h, levels, totalLength, Double.NaN);
+    }
+
+    /** Builds the mesh; {@code scale} NaN: sizes set by h alone (element-count mode), else the scale mode. */
+    private static BoundaryMesh build(List<SegPlan> plans, double h, int levels, double totalLength, double scale) {
         List<Panel> panels = new ArrayList<>();
         for (SegPlan p : plans) {
-            cut(p, h, levels, totalLength, panels);
+            cut(p, h, levels, totalLength, scale, panels);
         }
-        panels = GapRefinement.refine(panels, Math.min(1, h / (ARC_REFERENCE_SHARE * totalLength)));
+        panels = GapRefinement.refine(panels, Double.isNaN(scale) ? Math.min(1, h / (ARC_REFERENCE_SHARE * totalLength)) : scale);
         GaussIntegrator gauss = new GaussIntegratorFactory().legendre(ORDER, 0, 1);
         double[] tau = new double[ORDER];
         double[] w = new double[ORDER];
@@ -231,7 +256,7 @@ public final class Mesher {
         int count = 0;
         for (SegPlan p : plans) {
             sink.clear();
-            cut(p, h, levels, totalLength, sink);
+            cut(p, h, levels, totalLength, Double.NaN, sink);
             count += sink.size();
         }
         return count;
@@ -251,10 +276,12 @@ public final class Mesher {
     }
 
     /** Cuts one segment into panels (appends to out). */
-    private static void cut(SegPlan p, double h, int levels, double totalLength, List<Panel> out) {
+    private static void cut(SegPlan p, double h, int levels, double totalLength, double scale, List<Panel> out) {
         // below the reference size every locally set size (arc panels, the smallest panel across a narrow gap)
-        // shrinks in proportion to h, so that refining h refines them too
-        double refine = Math.min(1, h / (ARC_REFERENCE_SHARE * totalLength));
+        // shrinks in proportion to h, so that refining h refines them too; in the scale mode they also grow with it
+        boolean scaled = !Double.isNaN(scale);
+        double refine = scaled ? scale : Math.min(1, h / (ARC_REFERENCE_SHARE * totalLength));
+        double coarse = scaled ? Math.max(1, scale) : 1;
         double len = p.segment.length_m();
         boolean arcS = p.arcStart < Double.POSITIVE_INFINITY;
         boolean arcE = p.arcEnd < Double.POSITIVE_INFINITY;
@@ -274,7 +301,7 @@ public final class Mesher {
             // No panel longer than its distance from the axis (a quarter of the segment at least): the charge on a
             // bore varies on the scale of the bore radius, and long panels would make every interaction "near".
             double rMin = Math.min(p.segment.at(s / len).r_m(), p.segment.at(midEnd / len).r_m());
-            double cap = Math.max(rMin, 0.25 * len);
+            double cap = Math.max(rMin * coarse, 0.25 * len);
             if (p.segment instanceof Segment.Arc arc) {
                 cap = Math.min(cap, arcPanel(arc.radius_m(), refine));
             }

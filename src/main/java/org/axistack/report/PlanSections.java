@@ -152,7 +152,8 @@ final class PlanSections {
             rows.add(List.of(r.name(), HtmlReport.num(s.electrodes().get(i).bias_V()),
                     r.peak().sharp() ? r.describe() : HtmlReport.field(max, r.check()),
                     r.peak().sharp() ? "-" : Html.g(max / s.limits().comfort_V_per_m() * 100),
-                    r.verdict(), Html.g(r.peak().z_m() * 1e3), Html.g(r.peak().r_m() * 1e3), Html.g(q[i] * 1e12)));
+                    r.verdict() + r.convergence().map(c -> "; " + c).orElse(""), Html.g(r.peak().z_m() * 1e3),
+                    Html.g(r.peak().r_m() * 1e3), Html.g(q[i] * 1e12)));
         }
         b.append("<h2>Electrode surface fields</h2>\n");
         b.append(Html.table(List.of("electrode", "bias (V)", "largest surface field (V/mm)", "% of comfort limit",
@@ -161,7 +162,8 @@ final class PlanSections {
                 + "largest over each electrode (between the collocation nodes by the element's polynomial on solid "
                 + "electrodes; sheets: per face at the nodes). Limits from the stack: comfort %s V/mm, "
                 + "aggressive %s V/mm (common practice for polished electrodes in good vacuum, no single source; large "
-                + "gaps hold less per mm). On rounded edges (edge_radius_mm) the value converges as the mesh is refined; "
+                + "gaps hold less per mm). On rounded edges (edge_radius_mm) the value converges as the mesh is refined "
+                + "(with [mesh] accuracy the value on the next coarser mesh and the change are shown); "
                 + "at a sharp corner the field has no finite limit and the table says so instead of giving a number.</p>%n",
                 HtmlReport.num(Units.vPerMToVPerMm(s.limits().comfort_V_per_m())),
                 HtmlReport.num(Units.vPerMToVPerMm(s.limits().aggressive_V_per_m()))));
@@ -218,8 +220,8 @@ final class PlanSections {
         FieldSolution sol = plan.solution();
         List<List<String>> rows = new ArrayList<>();
         rows.add(List.of("field", String.format(Locale.ROOT, "boundary elements (surface-charge method), %d unknowns, "
-                + "graded toward edges (%d levels); collocation residual %s; solve %.2f s", sol.unknowns(),
-                plan.stack().mesh().edgeLevels(), Html.sci(sol.residual()), sol.solveSeconds()),
+                + "graded toward edges (%d levels); collocation residual %s; solve %.2f s; %s", sol.unknowns(),
+                plan.stack().mesh().edgeLevels(), Html.sci(sol.residual()), sol.solveSeconds(), sol.meshErrorStatement()),
                 "verification: thin disk, sphere and two-tube cases below"));
         rows.add(List.of("axial potential", "piecewise Chebyshev expansion of the exact element sums (V, V', V'' ...)",
                 "largest relative error against the exact sums: " + Html.sci(plan.field().axialExpansionError())));

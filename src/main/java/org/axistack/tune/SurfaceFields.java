@@ -24,8 +24,32 @@ public final class SurfaceFields {
      * @param peak  the largest field and where it sits (sharp: at a corner without a finite limit)
      * @param check the sampled value against the limits (at a sharp corner: the field at the mesh's resolution,
      *              which the true field only exceeds)
+     * @param coarser the same electrode's peak on the next coarser mesh of an accuracy-driven solve, or null
+     * @param coarserUnknowns unknowns of that mesh (0 without one)
      */
-    public record Row(String name, SurfacePeak peak, SurfaceFieldCheck check) {
+    public record Row(String name, SurfacePeak peak, SurfaceFieldCheck check, SurfacePeak coarser, int coarserUnknowns) {
+
+        /**
+         * The mesh convergence of a finite peak in words, when the solve refined to an accuracy: the value on the next
+         * coarser mesh and the relative change, "converged" when it is at most {@link #CONVERGED}; empty for a fixed
+         * mesh (one solve) and for a sharp corner (no finite value to converge).
+         */
+        public java.util.Optional<String> convergence() {
+            if (coarser == null || peak.sharp()) {
+                return java.util.Optional.empty();
+            }
+            double change = relativeChange();
+            return java.util.Optional.of(String.format(Locale.ROOT, "%s: %s V/mm on the next coarser mesh (%d unknowns),"
+                    + " relative change %s (tolerance %s)", change <= CONVERGED ? "converged" : "NOT converged",
+                    num(coarser.field_V_per_m() * 1e-3), coarserUnknowns,
+                    org.axistack.model.Numbers.scientific(change, 1), org.axistack.model.Numbers.scientific(CONVERGED, 0)));
+        }
+
+        /** |peak - coarser| / peak (NaN without a coarser mesh). */
+        public double relativeChange() {
+            return coarser == null ? Double.NaN
+                    : Math.abs(peak.field_V_per_m() - coarser.field_V_per_m()) / peak.field_V_per_m();
+        }
 
         /** The field in words: "195.43 V/mm at z = 5.483, r = 5.84 mm", or the sharp-corner statement. */
         public String describe() {
@@ -42,6 +66,9 @@ public final class SurfaceFields {
             return peak.sharp() ? "unbounded (sharp corner); " + v + " already at the mesh's resolution" : v;
         }
     }
+
+    /** Relative change between two meshes under which a finite peak field counts as converged. */
+    public static final double CONVERGED = 1e-3;
 
     private SurfaceFields() {
     }
@@ -61,10 +88,14 @@ public final class SurfaceFields {
     /** The assessment of every electrode, in electrode order. */
     public static List<Row> of(Stack stack, BiasedField field) {
         SurfacePeak[] peaks = field.surfacePeaks();
+        var coarse = field.solution().coarserRung();
+        SurfacePeak[] before = coarse.map(c -> c.withBiases(field.biases_V()).surfacePeaks()).orElse(null);
+        int beforeUnknowns = coarse.map(org.axistack.field.FieldSolution::unknowns).orElse(0);
         SurfaceFieldLimits lim = stack.limits();
         List<Row> rows = new ArrayList<>();
         for (int i = 0; i < peaks.length; i++) {
-            rows.add(new Row(stack.electrodes().get(i).name(), peaks[i], SurfaceFieldCheck.of(peaks[i].field_V_per_m(), lim)));
+            rows.add(new Row(stack.electrodes().get(i).name(), peaks[i], SurfaceFieldCheck.of(peaks[i].field_V_per_m(), lim),
+                    before == null ? null : before[i], beforeUnknowns));
         }
         return rows;
     }

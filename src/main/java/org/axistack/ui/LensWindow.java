@@ -333,8 +333,8 @@ public final class LensWindow extends JFrame {
             biasHolder.add(steeringPanel, BorderLayout.SOUTH);
         }
         biasHolder.revalidate();
-        status(String.format(java.util.Locale.ROOT, "field solved: %d unknowns in %.2f s (once per geometry)",
-                s.solution().unknowns(), s.solution().solveSeconds()));
+        status(String.format(java.util.Locale.ROOT, "field solved: %d unknowns in %.2f s (once per geometry); %s",
+                s.solution().unknowns(), s.solution().solveSeconds(), s.solution().meshErrorStatement()));
         biasesChanged(s.stack().biases_V());
     }
 

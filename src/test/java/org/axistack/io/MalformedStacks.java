@@ -221,6 +221,8 @@ final class MalformedStacks {
         add(c, "mesh budget too large", append("[mesh]\ntarget_elements = 100000\n"), OUT_OF_RANGE, 22, "target_elements", "12000");
         add(c, "mesh budget a million", append("[mesh]\ntarget_elements = 1000000\n"), OUT_OF_RANGE, 22, "target_elements", "1000000 is outside the accepted range 8 to 12000. Fix");
         add(c, "mesh budget fractional", append("[mesh]\ntarget_elements = 1200.5\n"), WRONG_TYPE, 22, "target_elements", "whole number");
+        add(c, "mesh accuracy loose", append("[mesh]\naccuracy = 0.5\n"), OUT_OF_RANGE, 22, "accuracy", "outside the accepted range");
+        add(c, "mesh accuracy text", append("[mesh]\naccuracy = \"fine\"\n"), WRONG_TYPE, 22, "accuracy", "1e-7");
         add(c, "mesh key misspelt", append("[mesh]\nedge_level = 10\n"), UNKNOWN_KEY, 22, "edge_level", "did you mean 'edge_levels'");
         add(c, "limits in the wrong order", append("[limits]\ncomfort_surface_field_V_per_mm = 8000.0\naggressive_surface_field_V_per_mm = 4000.0\n"),
                 LIMITS_ORDER, 23, "aggressive_surface_field_V_per_mm", "below the comfort limit");

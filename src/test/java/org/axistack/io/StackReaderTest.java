@@ -10,6 +10,7 @@ import org.axistack.model.Codata2018;
 import org.axistack.model.Contour;
 import org.axistack.model.Electrode;
 import org.axistack.model.GapRule;
+import org.axistack.model.MeshSettings;
 import org.axistack.model.Segment;
 import org.axistack.model.Stack;
 import org.axistack.model.SurfaceFieldLimits;
@@ -100,6 +101,16 @@ class StackReaderTest {
 
         Stack again = StackReader.parse(StackWriter.toToml(s), "again.toml");
         assertThat(again).isEqualTo(s);
+    }
+
+    @Test
+    void meshAccuracyIsReadAndWrittenBack() throws Exception {
+        Stack s = StackReader.parse(MalformedStacks.append("[mesh]\naccuracy = 1e-7\n"), "acc.toml");
+        assertThat(s.mesh().accuracyDriven()).isTrue();
+        assertThat(s.mesh().accuracy()).isEqualTo(1e-7);
+        // without target_elements the cap is the accuracy default, not the fixed-mesh count
+        assertThat(s.mesh().targetElements()).isEqualTo(MeshSettings.DEFAULT_ACCURACY_CAP);
+        assertThat(StackReader.parse(StackWriter.toToml(s), "again.toml")).isEqualTo(s);
     }
 
     @Test
