@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.axistack.model.Numbers;
 import org.axistack.model.Units;
 import org.axistack.model.Sectors;
 import org.axistack.model.Stack;
@@ -184,7 +185,7 @@ final class AimOutput {
         if (m.containsKey("exact_trace")) {
             w.println();
             w.println("Exact trace: " + m.get("exact_trace") + "; bundle radius " + n(m.get("bundle_radius_mm"))
-                    + " mm; energy conserved to " + String.format(java.util.Locale.ROOT, "%.1e",
+                    + " mm; energy conserved to " + Numbers.estimate(
                             (Double) m.get("energy_conservation")) + "; " + String.format(java.util.Locale.ROOT,
                             "%.1f", (Double) m.get("trace_seconds")) + " s.");
         }

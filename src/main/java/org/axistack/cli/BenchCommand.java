@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.axistack.model.Numbers;
 import org.axistack.field.AxialField;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
@@ -103,7 +104,7 @@ final class BenchCommand implements Callable<Integer> {
         first.axial(0.5 * (stack.minZ_m() + stack.maxZ_m()), 0, new double[1]);
         double build = (System.nanoTime() - t0) * 1e-9;
         row(out, "axial expansion build (once per solve), " + first.axialExpansionIntervals() + " intervals, error "
-                + String.format(Locale.ROOT, "%.1e", first.axialExpansionError()), build, Double.NaN);
+                + Numbers.estimate(first.axialExpansionError()), build, Double.NaN);
         double[] biases = stack.biases_V();
         double[] rebias = new double[Math.max(repeat, 20)];
         double[] d = new double[7];

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.axistack.model.Numbers;
 import org.axistack.verify.CheckResult;
 import org.axistack.verify.VerificationSuite;
 
@@ -63,7 +64,7 @@ final class CheckCommand implements Callable<Integer> {
         for (CheckResult r : results) {
             w.println("  " + r.name() + ": " + r.quantity());
             w.println("      measure: " + r.errorMeasure() + "; project: " + r.method()
-                    + String.format(Locale.ROOT, " (%.2f s)", r.seconds()));
+                    + " (" + Numbers.seconds(r.seconds()) + " s)");
             w.println("      reference: " + r.source());
         }
         long passed = results.stream().filter(CheckResult::passed).count();

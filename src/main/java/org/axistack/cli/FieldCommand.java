@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
+import org.axistack.model.Numbers;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.field.CapacitanceCheck;
@@ -116,12 +117,14 @@ final class FieldCommand implements Callable<Integer> {
         }
         out.printf(Locale.ROOT, "Field of %s%n", input.shownAs());
         out.printf(Locale.ROOT, "  boundary elements: %d (pieces of the electrode contours) with %d unknowns (charge values at the"
-                + " collocation nodes); solved in %.3f s%s; collocation residual %.1e V/V%n",
-                solution.mesh().panels().size(), solution.unknowns(), solution.solveSeconds(),
-                solution.solvedAsMirrorHalves() ? " (mirror-symmetric: two half-size systems)" : "", solution.residual());
+                + " collocation nodes); solved in %s s%s; collocation residual %s V/V%n",
+                solution.mesh().panels().size(), solution.unknowns(), Numbers.seconds(solution.solveSeconds()),
+                solution.solvedAsMirrorHalves() ? " (mirror-symmetric: two half-size systems)" : "",
+                Numbers.estimate(solution.residual()));
         out.println("  " + solution.meshErrorStatement());
         out.printf(Locale.ROOT, "  method: surface-charge boundary elements, exact ring kernel (elliptic integrals);"
-                + " axial values from a Chebyshev expansion within %.0e of the exact sum%n", Math.max(field.axialExpansionError(), 1e-16));
+                + " axial values from a Chebyshev expansion within %s of the exact sum%n",
+                Numbers.tolerance(Math.max(field.axialExpansionError(), 1e-16)));
         out.println();
         out.printf(Locale.ROOT, "  %-14s %10s %14s %22s%n", "electrode", "bias_V", "charge_pC", "max_surface_field_V_per_mm");
         for (int e = 0; e < stack.electrodes().size(); e++) {

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
+import org.axistack.model.Numbers;
 import org.axistack.field.BemSolver;
 import org.axistack.field.BiasedField;
 import org.axistack.io.StackInputException;
@@ -274,12 +275,11 @@ final class OpticsCommand implements Callable<Integer> {
         for (Object line : (java.util.List<?>) out.get("field_ends")) {
             w.println("    " + line);
         }
-        w.println(String.format(Locale.ROOT, "  estimated error %.1e of f (asked: %.0e; %s)%s", (Double) out.get("error_estimate"),
-                (Double) out.get("accuracy_requested"), org.axistack.optics.OpticsAccuracy.SCOPE, (Double) out.get("far_field_share") > 0
-                        ? String.format(Locale.ROOT, "; the far field beyond the traced range contributes %.1e",
-                                (Double) out.get("far_field_share"))
-                        : String.format(Locale.ROOT, "; moving the ended planes inward changes the results by %.1e",
-                                (Double) out.get("plane_sensitivity"))));
+        w.println("  estimated error " + Numbers.estimate((Double) out.get("error_estimate")) + " of f (asked: "
+                + Numbers.tolerance((Double) out.get("accuracy_requested")) + "; " + org.axistack.optics.OpticsAccuracy.SCOPE + ")"
+                + ((Double) out.get("far_field_share") > 0
+                        ? org.axistack.optics.OpticsAccuracy.FAR_FIELD_WORDS + Numbers.estimate((Double) out.get("far_field_share"))
+                        : org.axistack.optics.OpticsAccuracy.PLANE_WORDS + Numbers.estimate((Double) out.get("plane_sensitivity"))));
         w.println("                      object side       image side");
         row(w, "focal length f1, f2", out.get("focal_length_object_mm"), out.get("focal_length_image_mm"));
         row(w, "focal point F1, F2", out.get("focal_point_object_z_mm"), out.get("focal_point_image_z_mm"));

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
 
+import org.axistack.model.Numbers;
 import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
@@ -26,8 +27,9 @@ final class PlanSummary {
 
     static void print(PrintWriter w, LensPlan p) {
         w.println();
-        w.println(String.format(Locale.ROOT, "Field: %d unknowns, collocation residual %.1e, axial expansion error %.1e",
-                p.solution().unknowns(), p.solution().residual(), p.field().axialExpansionError()));
+        w.println(String.format(Locale.ROOT, "Field: %d unknowns, collocation residual %s, axial expansion error %s",
+                p.solution().unknowns(), Numbers.estimate(p.solution().residual()),
+                Numbers.estimate(p.field().axialExpansionError())));
         w.println("  " + p.solution().meshErrorStatement());
         if (p.reflection().isPresent()) {
             w.println("REFLECTED: " + p.reflection().get());

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import org.axistack.model.Numbers;
 import org.axistack.size.Design;
 import org.axistack.size.Infeasibility;
 import org.axistack.size.Limit;
@@ -43,10 +44,10 @@ final class SizeText {
             dims.append(String.format(Locale.ROOT, " %s %.4g mm,", e.getKey(), e.getValue() * 1e3));
         }
         w.println(dims.substring(0, dims.length() - 1));
-        w.printf(Locale.ROOT, "  real image z %.4f mm, focal length f2 %.4g mm%s (optics error estimate %.1e of f)%n",
+        w.printf(Locale.ROOT, "  real image z %.4f mm, focal length f2 %.4g mm%s (optics error estimate %s of f)%n",
                 d.imageZ_m() * 1e3, d.focalLength_m() * 1e3,
                 Double.isNaN(d.magnification()) ? "" : String.format(Locale.ROOT, ", magnification %.4g", d.magnification()),
-                d.opticsError());
+                Numbers.estimate(d.opticsError()));
         for (String warning : d.planWarnings()) {
             w.printf(Locale.ROOT, "  WARNING (plan on the written stack says the same): %s%n", warning);
         }
@@ -125,9 +126,10 @@ final class SizeText {
     }
 
     static void meshCheck(PrintWriter w, MeshCheck m) {
-        w.printf(Locale.ROOT, "Search mesh accuracy (winner re-solved with %d instead of %d unknowns): bias %.1e, Cs %.1e,"
-                + " Cc %.1e, surface field %.1e (relative changes).%n", m.fineUnknowns(), m.coarseUnknowns(), m.biasChange(),
-                m.sphericalChange(), m.chromaticChange(), m.fieldChange());
+        w.printf(Locale.ROOT, "Search mesh accuracy (winner re-solved with %d instead of %d unknowns): bias %s, Cs %s,"
+                + " Cc %s, surface field %s (relative changes).%n", m.fineUnknowns(), m.coarseUnknowns(),
+                Numbers.estimate(m.biasChange()), Numbers.estimate(m.sphericalChange()),
+                Numbers.estimate(m.chromaticChange()), Numbers.estimate(m.fieldChange()));
     }
 
     /** The answer when nothing is feasible; returns the one-line outcome message. */

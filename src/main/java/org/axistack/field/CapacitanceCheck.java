@@ -3,6 +3,7 @@ package org.axistack.field;
 import java.util.List;
 import java.util.Locale;
 
+import org.axistack.model.Numbers;
 import org.axistack.model.Electrode;
 import org.axistack.model.GeometryCheck;
 
@@ -81,8 +82,8 @@ public record CapacitanceCheck(int first, int second, double asymmetry, double o
         String what = positive
                 ? String.format(Locale.ROOT, "a positive mutual capacitance between '%s' and '%s' (%.2g of sqrt(C_ii C_jj);"
                         + " physically it is never positive)", a.name(), b.name(), offDiagonal)
-                : String.format(Locale.ROOT, "a capacitance matrix %.1e away from symmetric between '%s' and '%s' (allowed"
-                        + " %.0e)", asymmetry, a.name(), b.name(), WARN_ASYMMETRY);
+                : String.format(Locale.ROOT, "a capacitance matrix %s away from symmetric between '%s' and '%s' (allowed"
+                        + " %s)", Numbers.estimate(asymmetry), a.name(), b.name(), Numbers.tolerance(WARN_ASYMMETRY));
         return String.format(Locale.ROOT, "the boundary-element mesh gives %s: the charges are %s; the two"
                 + " electrodes are %s micrometres apart at their closest. Fix: raise [mesh] target_elements (try twice"
                 + " the present value) or widen the gap between '%s' and '%s'", what,

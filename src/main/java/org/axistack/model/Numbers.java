@@ -28,6 +28,10 @@ public final class Numbers {
     public static final int BIAS_DIGITS = 10;
     /** Digits of numbers in values echoed in input messages. */
     public static final int INPUT_DIGITS = 12;
+    /** Decimals of error estimates, residuals and relative changes ("3.8e-08": their size, not their digits, matters). */
+    public static final int ESTIMATE_DECIMALS = 1;
+    /** Decimals of elapsed times in seconds. */
+    public static final int SECONDS_DECIMALS = 2;
     /** Digits of floats written into stack files (a round trip keeps every digit that matters). */
     public static final int TOML_DIGITS = 15;
 
@@ -51,6 +55,21 @@ public final class Numbers {
     /** {@code x} in the "%.{decimals}e" style (for error estimates, residuals). */
     public static String scientific(double x, int decimals) {
         return String.format(Locale.ROOT, "%." + decimals + "e", x);
+    }
+
+    /** An error estimate, residual or relative change ("3.8e-08"), with {@link #ESTIMATE_DECIMALS}. */
+    public static String estimate(double x) {
+        return scientific(x, ESTIMATE_DECIMALS);
+    }
+
+    /** A tolerance or accuracy asked for, as its order of magnitude ("1e-05"). */
+    public static String tolerance(double x) {
+        return scientific(x, 0);
+    }
+
+    /** An elapsed time in seconds, without the unit ("0.28"), with {@link #SECONDS_DECIMALS}. */
+    public static String seconds(double s) {
+        return String.format(Locale.ROOT, "%." + SECONDS_DECIMALS + "f", s);
     }
 
     /** Trailing zeros of a decimal fraction cut, also before an exponent ("1.2300e-05" to "1.23e-05", "2.0" to "2"). */

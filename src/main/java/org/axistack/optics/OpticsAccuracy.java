@@ -1,5 +1,6 @@
 package org.axistack.optics;
 
+import org.axistack.model.Numbers;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -42,15 +43,20 @@ public final class OpticsAccuracy {
     public static final String SCOPE = "integration and the field's ends; the mesh's own error is not in it:"
             + " refine [mesh] target_elements to see it";
 
+    /** The words before the far field's share of the results, in every statement of the estimate. */
+    public static final String FAR_FIELD_WORDS = "; the far field beyond the traced range contributes ";
+
+    /** The words before the change when the ended planes move inward. */
+    public static final String PLANE_WORDS = "; moving the ended planes inward changes the results by ";
+
     /** A sentence giving the estimated error and what it comes from. */
     public static String estimate(CardinalElements c) {
-        String s = String.format(Locale.ROOT, "estimated error %.1e of f (%s", c.errorEstimate(), SCOPE);
+        String s = "estimated error " + Numbers.estimate(c.errorEstimate()) + " of f (" + SCOPE;
         if (c.planeSensitivity() > 0) {
-            s += String.format(Locale.ROOT, "; moving the ended planes 10%% inward changes the results by %.1e",
-                    c.planeSensitivity());
+            s += "; moving the ended planes 10 % inward changes the results by " + Numbers.estimate(c.planeSensitivity());
         }
         if (c.farFieldShare() > 0) {
-            s += String.format(Locale.ROOT, "; the far field beyond the traced range contributes %.1e", c.farFieldShare());
+            s += FAR_FIELD_WORDS + Numbers.estimate(c.farFieldShare());
         }
         return s + ")";
     }
@@ -65,8 +71,8 @@ public final class OpticsAccuracy {
                         + " move the beam start and screen deeper into it"
                 : "the integration did not settle: tighten the tolerance";
         return java.util.Optional.of(String.format(Locale.ROOT,
-                "the cardinal elements carry an estimated error of %.1e of f, more than the %.0e asked for: %s",
-                c.errorEstimate(), requested, why));
+                "the cardinal elements carry an estimated error of %s of f, more than the %s asked for: %s",
+                Numbers.estimate(c.errorEstimate()), Numbers.tolerance(requested), why));
     }
 
     /** Advice to close an open lens, when its far field matters. */
@@ -76,10 +82,10 @@ public final class OpticsAccuracy {
         }
         return java.util.Optional.of(String.format(Locale.ROOT,
                 "the lens is open: its electrodes carry a net charge, so its axial potential falls off only like 1/|z|,"
-                        + " and %.1e (relative) of these results comes from the field more than z = %.4g .. %.4g mm away;"
+                        + " and %s (relative) of these results comes from the field more than z = %.4g .. %.4g mm away;"
                         + " in the instrument the chamber walls and nearby parts will shape that field instead. Model"
                         + " what closes the lens there (a grounded enclosure, or grounded end plates or tubes before"
                         + " and after the lens) as electrodes of the stack",
-                c.farFieldShare(), c.zStart_m() * 1e3, c.zEnd_m() * 1e3));
+                Numbers.estimate(c.farFieldShare()), c.zStart_m() * 1e3, c.zEnd_m() * 1e3));
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.axistack.model.Numbers;
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Units;
 import org.axistack.model.Stack;
@@ -72,7 +73,7 @@ final class PlanSections {
                 a.chromaticObject_m().isPresent() ? HtmlReport.mm(a.chromaticObject_m().getAsDouble()) : "-"));
         b.append(Html.table(List.of("", "image side (object at infinity)", "object side (finite object)"), ab));
         b.append("<p class=\"note\">Convention: ").append(Html.esc(a.convention()))
-                .append(String.format(Locale.ROOT, ". Quadrature change at the last refinement %.1e.", a.quadratureChange()))
+                .append(". Quadrature change at the last refinement ").append(Numbers.estimate(a.quadratureChange())).append(".")
                 .append("</p>\n");
     }
 
@@ -220,8 +221,9 @@ final class PlanSections {
         FieldSolution sol = plan.solution();
         List<List<String>> rows = new ArrayList<>();
         rows.add(List.of("field", String.format(Locale.ROOT, "boundary elements (surface-charge method), %d unknowns, "
-                + "graded toward edges (%d levels); collocation residual %s; solve %.2f s; %s", sol.unknowns(),
-                plan.stack().mesh().edgeLevels(), Html.sci(sol.residual()), sol.solveSeconds(), sol.meshErrorStatement()),
+                + "graded toward edges (%d levels); collocation residual %s; solve %s s; %s", sol.unknowns(),
+                plan.stack().mesh().edgeLevels(), Html.sci(sol.residual()), Numbers.seconds(sol.solveSeconds()),
+                sol.meshErrorStatement()),
                 "verification: thin disk, sphere and two-tube cases below"));
         rows.add(List.of("axial potential", "piecewise Chebyshev expansion of the exact element sums (V, V', V'' ...)",
                 "largest relative error against the exact sums: " + Html.sci(plan.field().axialExpansionError())));

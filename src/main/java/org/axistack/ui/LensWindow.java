@@ -6,7 +6,6 @@ import java.awt.Font;
 import java.awt.event.KeyEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
-import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.Optional;
 import java.util.concurrent.ExecutorService;
@@ -19,7 +18,6 @@ import javax.swing.BoxLayout;
 import javax.swing.JButton;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
-import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
@@ -31,6 +29,7 @@ import javax.swing.SwingUtilities;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 
+import org.axistack.model.Numbers;
 import org.axistack.model.PhysicsException;
 import org.axistack.io.BuiltInStacks;
 import org.axistack.io.StackInputException;
@@ -333,8 +332,8 @@ public final class LensWindow extends JFrame {
             biasHolder.add(steeringPanel, BorderLayout.SOUTH);
         }
         biasHolder.revalidate();
-        status(String.format(java.util.Locale.ROOT, "field solved: %d unknowns in %.2f s (once per geometry); %s",
-                s.solution().unknowns(), s.solution().solveSeconds(), s.solution().meshErrorStatement()));
+        status(String.format(java.util.Locale.ROOT, "field solved: %d unknowns in %s s (once per geometry); %s",
+                s.solution().unknowns(), Numbers.seconds(s.solution().solveSeconds()), s.solution().meshErrorStatement()));
         biasesChanged(s.stack().biases_V());
     }
 

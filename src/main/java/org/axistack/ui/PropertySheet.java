@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.axistack.model.Numbers;
 import org.axistack.field.BiasedField;
 import org.axistack.model.Units;
 import org.axistack.model.Electrode;
@@ -147,7 +148,7 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
                     marks.add(new LensChart.Mark("image", Units.mToMm(im.imageZ_m())));
                 }
             }
-            rows.add(new Row("optics error estimate (of f)", String.format(java.util.Locale.ROOT, "%.1e", c.errorEstimate()),
+            rows.add(new Row("optics error estimate (of f)", Numbers.estimate(c.errorEstimate()),
                     c.errorEstimate() > org.axistack.optics.OpticsAccuracy.DEFAULT_REQUESTED ? Level.CAUTION : Level.PLAIN));
             // the same object position as the plan and optics outputs (image side)
             optics.quotedAberrations(img).ifPresent(ab -> {

@@ -48,4 +48,19 @@ class NumbersTest {
             assertThat(Math.abs(back - x)).isLessThanOrEqualTo((5e-15 + 2.3e-16) * Math.abs(x));
         }
     }
+
+    /** Estimates keep their size to one decimal; a parse round trip is within half a unit of that decimal. */
+    @Test
+    void estimatesTolerancesAndSecondsHaveOneStyleEach() {
+        assertThat(Numbers.estimate(3.8249e-8)).isEqualTo("3.8e-08");
+        assertThat(Numbers.tolerance(1e-5)).isEqualTo("1e-05");
+        assertThat(Numbers.seconds(0.2849)).isEqualTo("0.28");
+        java.util.Random rnd = new java.util.Random(5);
+        for (int i = 0; i < 2000; i++) {
+            double x = rnd.nextDouble() * Math.pow(10, -rnd.nextInt(15));
+            double back = Double.parseDouble(Numbers.estimate(x));
+            // one decimal of the mantissa: the rounding error is at most 0.05 of the leading power of ten
+            assertThat(Math.abs(back - x)).isLessThanOrEqualTo(0.05 * Math.pow(10, Math.floor(Math.log10(x))) * (1 + 1e-12));
+        }
+    }
 }
