@@ -29,6 +29,9 @@ final class OffAxisOutput {
         m.put("astigmatism_A_per_mm", oa.astigmatism_per_m() * 1e-3);
         m.put("distortion_D_per_mm2", oa.distortion_per_m2() * 1e-6);
         m.put("petzval_P_per_mm", oa.petzval_per_m() * 1e-3);
+        m.put("axial_chromatic_Cc_mm", oa.chromatic_m() * 1e3);
+        m.put("lateral_chromatic_CL", oa.lateralChromatic());
+        m.put("stop_slope_per_mm", oa.stopSlope() * 1e-3);
         m.put("quadrature_change", oa.quadratureChange());
         if (height_mm != null) {
             double h = height_mm * 1e-3;
@@ -52,8 +55,8 @@ final class OffAxisOutput {
         m.put("convention", oa.convention() + "; effects at the Gaussian image for object height h and object-side"
                 + " aperture angle alpha: spherical M C alpha^3, coma 3 M K h alpha^2 (tangential) and M K h alpha^2"
                 + " (sagittal), field curvature M F h^2 alpha, astigmatism M A h^2 alpha, distortion M D h^3, for the pencil"
-                + " about the ray that leaves the object parallel to the axis (aperture at the object; the Petzval"
-                + " coefficient does not depend on where the aperture is); focus shifts along the axis from the Gaussian"
+                + " about the chief ray (the Petzval coefficient does not depend on where the aperture is); focus shifts"
+                + " along the axis from the Gaussian"
                 + " image of the tangential, sagittal and Petzval surfaces at height h");
         return m;
     }
@@ -65,8 +68,9 @@ final class OffAxisOutput {
         w.println(String.format(Locale.ROOT, "    C = %s mm, coma K = %s, field curvature F = %s /mm, astigmatism A = %s /mm,",
                 f(m.get("spherical_C_mm")), f(m.get("coma_K")), f(m.get("field_curvature_F_per_mm")),
                 f(m.get("astigmatism_A_per_mm"))));
-        w.println(String.format(Locale.ROOT, "    distortion D = %s /mm^2, Petzval P = F - 2A = %s /mm",
-                f(m.get("distortion_D_per_mm2")), f(m.get("petzval_P_per_mm"))));
+        w.println(String.format(Locale.ROOT, "    distortion D = %s /mm^2, Petzval P = F - 2A = %s /mm, lateral colour C_L = %s"
+                + " (axial Cc = %s mm)", f(m.get("distortion_D_per_mm2")), f(m.get("petzval_P_per_mm")),
+                f(m.get("lateral_chromatic_CL")), f(m.get("axial_chromatic_Cc_mm"))));
         if (m.containsKey("object_height_mm")) {
             double rel = ((Number) m.get("distortion_relative")).doubleValue();
             w.println(String.format(Locale.ROOT, "    at object height %s mm: distortion %s um (%s of the image height, %s);"

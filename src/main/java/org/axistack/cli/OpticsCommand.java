@@ -73,6 +73,11 @@ final class OpticsCommand implements Callable<Integer> {
                     + " perpendicular plane; prints the stigmator biases that cancel it.")
     String astigmatism;
 
+    @Option(names = "--stop-z-mm", paramLabel = "Z",
+            description = "Aperture stop position in mm (stack z): the off-axis aberrations are given about the chief ray"
+                    + " through its centre (stop-shift formulas; default: the aperture at the object).")
+    Double stopZ_mm;
+
     @Option(names = "--accuracy", paramLabel = "REL", defaultValue = "1e-5",
             description = "Relative accuracy asked of the cardinal elements (default ${DEFAULT-VALUE} of f); exit 1 when"
                     + " the estimated error is larger.")
@@ -83,6 +88,9 @@ final class OpticsCommand implements Callable<Integer> {
         if (!(accuracy > 0 && accuracy < 1)) {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--accuracy must lie between 0 and 1 (a relative error, e.g. 1e-5), got " + accuracy);
+        }
+        if (stopZ_mm != null && !Double.isFinite(stopZ_mm)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--stop-z-mm must be a position in mm, got " + stopZ_mm);
         }
         if (objectHeight_mm != null && !(Double.isFinite(objectHeight_mm) && objectHeight_mm > 0)) {
             throw new CommandLine.ParameterException(spec.commandLine(),
@@ -188,8 +196,17 @@ final class OpticsCommand implements Callable<Integer> {
             out.put("chromatic_aberration_poly_mm", mmArray(poly.chromatic_m()));
             out.put("aberration_poly_convention", poly.convention());
             if (ab.objectZ_m().isPresent()) {
-                out.put("off_axis_aberrations", OffAxisOutput.map(optics.offAxisAberrations(ab.objectZ_m().getAsDouble()),
-                        objectHeight_mm, aperture_mrad));
+                org.axistack.optics.OffAxisAberrations oa = optics.offAxisAberrations(ab.objectZ_m().getAsDouble());
+                if (stopZ_mm != null) {
+                    try {
+                        oa = oa.aboutStop(optics, Units.mmToM(stopZ_mm));
+                    } catch (IllegalArgumentException e) {
+                        throw new CommandLine.ParameterException(spec.commandLine(), "--stop-z-mm: " + e.getMessage()
+                                + "; put the stop elsewhere");
+                    }
+                    out.put("stop_z_mm", stopZ_mm);
+                }
+                out.put("off_axis_aberrations", OffAxisOutput.map(oa, objectHeight_mm, aperture_mrad));
             }
         } else {
             out.put("spherical_aberration_mm", null);

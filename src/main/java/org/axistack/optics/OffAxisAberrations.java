@@ -54,10 +54,57 @@ import java.util.Locale;
  * @param imageSlopeRatio    the image-side slope per unit object-side slope of the axial ray, s'(z_i)
  * @param relativistic       whether the relativistic trajectory equation was expanded
  * @param quadratureChange   relative change of the integrals at the last refinement
+ * @param chromatic_m        Cc_o, the axial chromatic coefficient of the same object (m; as {@link Aberrations})
+ * @param lateralChromatic   C_L, the lateral chromatic coefficient (dimensionless): raising the kinetic energy by dT
+ *                           moves the image of object height a by -M C_L a dT/T_o (T_o at the object); with the
+ *                           aperture term the whole chromatic miss is -M (Cc_o b + C_L a) dT/T_o
+ * @param stopSlope          kappa, the slope per unit object height of the chief ray the aperture angle is measured
+ *                           about (b = kappa a + beta): 0 for the aperture at the object, -t(z_s)/s(z_s) for a stop
+ *                           at z_s ({@link #aboutStop})
  */
 public record OffAxisAberrations(double objectZ_m, double imageZ_m, double magnification, double spherical_m,
         double coma, double fieldCurvature_per_m, double astigmatism_per_m, double distortion_per_m2,
-        double comaMismatch, double imageSlopeRatio, boolean relativistic, double quadratureChange) {
+        double comaMismatch, double imageSlopeRatio, boolean relativistic, double quadratureChange,
+        double chromatic_m, double lateralChromatic, double stopSlope) {
+
+    /**
+     * The same aberrations with the aperture angle measured about the chief ray of slope kappa a (stop-shift formulas,
+     * derived in optics.md: substitute b = beta + kappa a in the five-term form and the chromatic miss):
+     * C' = C, K' = K + kappa C, F' = F + 4 kappa K + 2 kappa^2 C, A' = A + 2 kappa K + kappa^2 C,
+     * D' = D + kappa (F + A) + 3 kappa^2 K + kappa^3 C, Cc' = Cc, C_L' = C_L + kappa Cc; kappa adds to the stop
+     * slope already applied. The Petzval coefficient F' - 2A' = F - 2A is unchanged.
+     */
+    public OffAxisAberrations withStopSlope(double kappa) {
+        double c = spherical_m;
+        double k = coma;
+        double f = fieldCurvature_per_m;
+        double a = astigmatism_per_m;
+        return new OffAxisAberrations(objectZ_m, imageZ_m, magnification, c, k + kappa * c,
+                f + 4 * kappa * k + 2 * kappa * kappa * c, a + 2 * kappa * k + kappa * kappa * c,
+                distortion_per_m2 + kappa * (f + a) + 3 * kappa * kappa * k + kappa * kappa * kappa * c, comaMismatch,
+                imageSlopeRatio, relativistic, quadratureChange, chromatic_m, lateralChromatic + kappa * chromatic_m,
+                stopSlope + kappa);
+    }
+
+    /**
+     * The aberrations for an aperture stop at z_s (these coefficients must be about the object, stop slope 0): the
+     * chief ray through the stop's centre leaves the object point at slope kappa a with kappa = -t(z_s)/s(z_s) (t the
+     * field ray, s the axial ray from the object).
+     *
+     * @throws IllegalArgumentException when the stop lies at the object or at an image of it (s(z_s) = 0)
+     */
+    public OffAxisAberrations aboutStop(ParaxialOptics optics, double stopZ_m) {
+        if (stopSlope != 0) {
+            throw new IllegalStateException("the coefficients are already about a stop");
+        }
+        TransferMatrix m = optics.transfer(objectZ_m, stopZ_m);
+        double scale = Math.abs(stopZ_m - objectZ_m) + Math.abs(imageZ_m - objectZ_m);
+        if (!(Math.abs(m.b()) > 1e-9 * scale)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "a stop at z = %.4f mm lies at the object or"
+                    + " at an image of it: every ray through it from one object point passes one point", stopZ_m * 1e3));
+        }
+        return withStopSlope(-m.a() / m.b());
+    }
 
     /** The Petzval coefficient P = F - 2A, 1/m. */
     public double petzval_per_m() {
@@ -79,11 +126,13 @@ public record OffAxisAberrations(double objectZ_m, double imageZ_m, double magni
         double inverseRest = 1 / p.restPotential_V();
         double[] d = new double[5];
         double[] mono = new double[6];
+        // slots 0-5: the geometric monomials; 6: the chromatic integrand of the field ray (lateral colour), 7: of the
+        // axial ray (axial colour, the Cc_o of Aberrations)
         // the six integrals have different dimensions (a is a length, b a slope): scaled by powers of a lens length so
         // that one convergence test, against the largest, treats them alike
         double length = Math.abs(im.imageZ_m() - objectZ_m) + Math.abs(optics.cardinal().focalLengthImage_m());
-        double[] powers = {length * length * length, length * length, length * length, length, length, 1};
-        AberrationQuadrature.Result q = AberrationQuadrature.integrate(optics, objectZ_m, new int[] {0, 0, 0, 0, 0, 0},
+        double[] powers = {length * length * length, length * length, length * length, length, length, 1, length, 1};
+        AberrationQuadrature.Result q = AberrationQuadrature.integrate(optics, objectZ_m, new int[] {0, 0, 0, 0, 0, 0, 1, 1},
                 (z, w, acc) -> {
                     TransferMatrix m = optics.transfer(objectZ_m, z);
                     double t = m.a();
@@ -116,12 +165,16 @@ public record OffAxisAberrations(double objectZ_m, double imageZ_m, double magni
                     for (int k = 0; k < 6; k++) {
                         acc[k] += weight * mono[k] * powers[k];
                     }
+                    // a uniform raise dU perturbs the paraxial equation by -K[w] dU (AberrationIntegrals), linear in w
+                    double kc = (g * g / uStar - inverseRest) / uStar;
+                    acc[6] += weight * kc * (d[1] * tp / 2 + d[2] * t / 4) * powers[6];
+                    acc[7] += weight * kc * (d[1] * sp / 2 + d[2] * s / 4) * powers[7];
                 });
         boolean drift = objectZ_m < optics.zStart_m() && optics.objectTail() == null;
         double uo = p.u_V(drift ? optics.zStart_m() : objectZ_m);
         double scale = -1 / Math.sqrt(p.uStar(uo));
         double[] j = q.values().clone();
-        for (int k = 0; k < 6; k++) {
+        for (int k = 0; k < 8; k++) {
             j[k] /= powers[k];
         }
         double dist = scale * j[0];
@@ -132,8 +185,10 @@ public record OffAxisAberrations(double objectZ_m, double imageZ_m, double magni
         double spherical = scale * j[5];
         double mismatch = Math.abs(comaBB - comaB2) / Math.max(Math.abs(comaB2), Double.MIN_NORMAL);
         double slope = im.objectToImage().d();
+        double chromaticScale = uo / Math.sqrt(p.uStar(uo));
         return new OffAxisAberrations(objectZ_m, im.imageZ_m(), im.lateralMagnification(), spherical, comaB2, field,
-                astig, dist, mismatch, slope, optics.relativistic(), q.change());
+                astig, dist, mismatch, slope, optics.relativistic(), q.change(), chromaticScale * j[7],
+                chromaticScale * j[6], 0);
     }
 
     /**
@@ -180,7 +235,11 @@ public record OffAxisAberrations(double objectZ_m, double imageZ_m, double magni
         return String.format(Locale.ROOT, "object at z = %.4f mm, object height a (x axis), object-side ray slope b ="
                 + " bx + i by: the ray misses the paraxial image point at the Gaussian image z = %.4f mm by"
                 + " M [C b^2 conj(b) + 2K a b conj(b) + K a b^2 + F a^2 b + A a^2 conj(b) + D a^3] (x + i y);"
-                + " tangential field F + A, sagittal F - A, Petzval P = F - 2A; third-order aberration integrals of the %s"
-                + " trajectory equation", objectZ_m * 1e3, imageZ_m * 1e3, relativistic ? "relativistic" : "non-relativistic");
+                + " tangential field F + A, sagittal F - A, Petzval P = F - 2A; a kinetic energy raised by dT adds"
+                + " -M (Cc b + C_L a) dT/T_o (C_L lateral colour, T_o at the object); %s; third-order aberration integrals"
+                + " of the %s trajectory equation", objectZ_m * 1e3, imageZ_m * 1e3, stopSlope == 0
+                        ? "b measured about the ray that leaves the object parallel to the axis (aperture at the object)"
+                        : String.format(Locale.ROOT, "b measured about the chief ray of slope kappa a, kappa = %.6g /m (through the stop)",
+                                stopSlope), relativistic ? "relativistic" : "non-relativistic");
     }
 }

@@ -47,6 +47,9 @@ final class OffAxisSection {
         rows.add(List.of("Petzval P = F - 2A (1/mm)", Html.g(oa.petzval_per_m() * 1e-3), !height ? "-"
                 : "focus shift along the axis: tangential " + Html.g(shifts[0] * 1e3) + " mm, sagittal "
                         + Html.g(shifts[1] * 1e3) + " mm, Petzval " + Html.g(shifts[2] * 1e3) + " mm"));
+        rows.add(List.of("lateral colour C_L", Html.g(oa.lateralChromatic()), !height ? "-"
+                : "image height changes by -C_L dT/T_o (T_o the kinetic energy at the object): "
+                        + um(-oa.magnification() * oa.lateralChromatic() * h * 1e-3) + " um per 0.1 % of energy"));
         String at = !height ? "effect at the image (give --object-height-mm and --aperture-mrad)"
                 : String.format(Locale.ROOT, "effect at the image, object height h = %s mm%s", Html.trim(h * 1e3),
                         use.aperture_rad().isPresent() ? ", aperture a = " + Html.trim(use.aperture_rad().getAsDouble() * 1e3)
@@ -55,9 +58,9 @@ final class OffAxisSection {
         b.append(String.format(Locale.ROOT, "<p class=\"note\">Object at z = %s mm, Gaussian image at %s mm, M = %s. ",
                 HtmlReport.mm(oa.objectZ_m()), HtmlReport.mm(oa.imageZ_m()), Html.g(oa.magnification())))
                 .append(Html.esc(oa.convention()))
-                .append(". The effects are for the pencil about the ray that leaves the object parallel to the axis (the"
-                        + " aperture at the object); about a stop elsewhere the coefficients change by the stop-shift"
-                        + " formulas of optics.md, the Petzval coefficient does not. Third order only.</p>\n");
+                .append(". About a stop elsewhere the coefficients change by the stop-shift formulas of optics.md"
+                        + " (optics --stop-z-mm gives them); the Petzval coefficient and Cc do not. Third order (first order"
+                        + " in dT for the colour) only.</p>\n");
     }
 
     private static String um(double m) {

@@ -87,6 +87,35 @@ class OpticsCommandTest {
         assertThat(o.get("convention").asText()).contains("Petzval");
     }
 
+    /**
+     * --stop-z-mm: the off-axis coefficients about the chief ray through the stop follow the stop-shift formulas of
+     * optics.md from those about the object (checked against exact rays in optics.OffAxisAberrationsTest): K' = K +
+     * kappa C, C_L' = C_L + kappa Cc, the Petzval coefficient and C unchanged; a stop at the object is refused.
+     */
+    @Test
+    void aStopPositionShiftsTheOffAxisCoefficients() throws Exception {
+        Run plain = run("optics", stack(), "--json", "--object-z=-80");
+        Run stopped = run("optics", stack(), "--json", "--object-z=-80", "--stop-z-mm=-40");
+        assertThat(stopped.code()).as(stopped.err()).isZero();
+        JsonNode o = new ObjectMapper().readTree(plain.out()).get("off_axis_aberrations");
+        JsonNode s = new ObjectMapper().readTree(stopped.out()).get("off_axis_aberrations");
+        assertThat(o.get("stop_slope_per_mm").asDouble()).isZero();
+        double kappa = s.get("stop_slope_per_mm").asDouble();
+        assertThat(kappa).isNotZero();
+        double c = o.get("spherical_C_mm").asDouble();
+        assertThat(s.get("spherical_C_mm").asDouble()).isEqualTo(c);
+        assertThat(s.get("coma_K").asDouble()).isCloseTo(o.get("coma_K").asDouble() + kappa * c,
+                within(1e-12 * Math.abs(kappa * c)));
+        assertThat(s.get("lateral_chromatic_CL").asDouble()).isCloseTo(o.get("lateral_chromatic_CL").asDouble()
+                + kappa * o.get("axial_chromatic_Cc_mm").asDouble(), within(1e-12 * Math.abs(kappa * c)));
+        assertThat(s.get("petzval_P_per_mm").asDouble()).isCloseTo(o.get("petzval_P_per_mm").asDouble(),
+                within(1e-9 * Math.abs(o.get("field_curvature_F_per_mm").asDouble())));
+        assertThat(s.get("convention").asText()).contains("chief ray of slope kappa a");
+        Run atObject = run("optics", stack(), "--object-z=-80", "--stop-z-mm=-80");
+        assertThat(atObject.code()).isEqualTo(2);
+        assertThat(atObject.err()).contains("--stop-z-mm").contains("at the object");
+    }
+
     @Test
     void offAxisOptionsAreCheckedBeforeTheSolve() throws Exception {
         Run negative = run("optics", stack(), "--object-z=-80", "--object-height-mm=-1");

@@ -139,6 +139,89 @@ class OffAxisAberrationsTest {
     }
 
     /**
+     * Lateral chromatic aberration and the stop shift (issue 18) against exact skew rays in the same three lenses.
+     * Lateral colour: rays from object height a about the chief ray of slope kappa a, traced with the kinetic energy
+     * raised and lowered by eps T_o; half the difference of their misses at the Gaussian image (the geometric terms
+     * cancel) divided by -M a eps, extrapolated to eps -> 0 from eps and 2 eps (Richardson), is C_L + kappa Cc
+     * ({@link OffAxisAberrations#withStopSlope}). Stop shift: with the stop at the object-side reference plane, the
+     * coma K' (even part of a meridional pair about the chief ray), F' + A' (odd part), F' - A' (sagittal, y) and
+     * D' (the chief ray itself) fitted from traced rays as in {@link #check}. Required 1 % of the term (of the larger
+     * field term for F' +- A'); Cc of this route against the meridional Cc_o: 1e-9.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("lenses")
+    void lateralColourAndStopShiftAgreeWithExactSkewRays(String name, AxialField field, Particle particle, double t0,
+            double back) {
+        ParaxialOptics optics = ParaxialOptics.auto(field, new Beam(particle, t0), -0.08, 0.08);
+        double zo = optics.zStart_m() - back;
+        OffAxisAberrations oa = OffAxisAberrations.of(optics, zo);
+        double cc = optics.aberrations(zo).chromaticObject_m().getAsDouble();
+        assertThat(Math.abs(oa.chromatic_m() - cc)).as("Cc, %s", name).isLessThan(1e-9 * Math.abs(cc));
+        ExactSkewTracer tracer = new ExactSkewTracer(field, particle);
+        double z0 = Math.max(zo, optics.zStart_m());
+        double z1 = optics.zEnd_m();
+        double zi = oa.imageZ_m();
+        double m = oa.magnification();
+        double uo = optics.potential().u_V(z0);
+        double tObject = uo * Math.abs(particle.chargeNumber()); // eV at the object (drift before z0)
+        OffAxisAberrations stop = oa.aboutStop(optics, optics.zStart_m());
+        for (OffAxisAberrations about : new OffAxisAberrations[] {oa, stop}) {
+            double kappa = about.stopSlope();
+            double a = 1e-4;
+            double[] lateral = new double[2];
+            for (int r = 0; r < 2; r++) {
+                double eps = 1e-4 * (r + 1);
+                double[] miss = new double[2];
+                for (int sgn = 0; sgn < 2; sgn++) {
+                    double t = t0 + (sgn == 0 ? 1 : -1) * eps * tObject;
+                    double d = z0 - zo;
+                    double[] end = tracer.trace(z0, a + kappa * a * d, 0, kappa * a, 0, t, z1);
+                    miss[sgn] = end[0] + end[2] * (zi - z1) - m * a;
+                }
+                lateral[r] = (miss[0] - miss[1]) / 2 / (-m * a * eps);
+            }
+            double cl = (4 * lateral[0] - lateral[1]) / 3; // the odd difference leaves eps^2 errors
+            System.out.printf(java.util.Locale.ROOT, "%s, stop slope %.6g: C_L %.8g / traced %.8g%n", name, kappa,
+                    about.lateralChromatic(), cl);
+            assertThat(Math.abs(cl - about.lateralChromatic())).as("C_L, %s, kappa %s", name, kappa)
+                    .isLessThan(0.01 * Math.max(Math.abs(about.lateralChromatic()), Math.abs(kappa * cc) + 1e-30));
+        }
+        // the geometric terms about the stop: rays b = kappa a + beta
+        Traced t = traced(optics, tracer, t0, zo, oa);
+        double kappa = stop.stopSlope();
+        double aMax = 1e-3;
+        double bMax = 5e-3;
+        double c = oa.spherical_m();
+        double dStop = thirdOrder(t, m, aMax, kappa * aMax, 0)[0] / Math.pow(aMax, 3);
+        double cTraced = thirdOrder(t, m, 0, bMax, 0)[0] / Math.pow(bMax, 3);
+        double bK = bMax;
+        double aK = Math.min(aMax, bK * Math.sqrt(Math.abs(c / (3 * stop.coma()))) / 3);
+        double[] plus = thirdOrder(t, m, aK, kappa * aK + bK, 0);
+        double[] minus = thirdOrder(t, m, aK, kappa * aK - bK, 0);
+        double kTraced = ((plus[0] + minus[0]) / 2 - dStop * aK * aK * aK) / (3 * aK * bK * bK);
+        double fa = stop.fieldCurvature_per_m() + stop.astigmatism_per_m();
+        double fs = stop.fieldCurvature_per_m() - stop.astigmatism_per_m();
+        double aF = aMax;
+        double bF = Math.min(bMax, aF * Math.sqrt(Math.max(Math.abs(fa), Math.abs(fs)) / Math.abs(c)) / 3);
+        double[] fPlus = thirdOrder(t, m, aF, kappa * aF + bF, 0);
+        double[] fMinus = thirdOrder(t, m, aF, kappa * aF - bF, 0);
+        double faTraced = ((fPlus[0] - fMinus[0]) / 2 - cTraced * bF * bF * bF) / (aF * aF * bF);
+        double[] fSag = thirdOrder(t, m, aF, kappa * aF, bF);
+        double fsTraced = (fSag[1] - cTraced * bF * bF * bF) / (aF * aF * bF);
+        System.out.printf(java.util.Locale.ROOT, "%s, stop at the object-side plane (kappa %.6g): K' %.6g / %.6g, F'+A' %.6g"
+                + " / %.6g, F'-A' %.6g / %.6g 1/m, D' %.6g / %.6g 1/m^2%n", name, kappa, stop.coma(), kTraced, fa,
+                faTraced, fs, fsTraced, stop.distortion_per_m2(), dStop);
+        double fieldScale = Math.max(Math.abs(fa), Math.abs(fs));
+        assertThat(Math.abs(kTraced - stop.coma())).as("K', %s", name).isLessThan(0.01 * Math.abs(stop.coma()));
+        assertThat(Math.abs(faTraced - fa)).as("F' + A', %s", name).isLessThan(0.01 * fieldScale);
+        assertThat(Math.abs(fsTraced - fs)).as("F' - A', %s", name).isLessThan(0.01 * fieldScale);
+        assertThat(Math.abs(dStop - stop.distortion_per_m2())).as("D', %s", name)
+                .isLessThan(0.01 * Math.abs(stop.distortion_per_m2()));
+        assertThat(stop.petzval_per_m()).isCloseTo(oa.petzval_per_m(), org.assertj.core.api.Assertions.within(
+                1e-9 * Math.abs(oa.fieldCurvature_per_m())));
+    }
+
+    /**
      * The open three-plate einzel of {@link OpenLensAberrationTest} (boundary-element field, far-field tails on both
      * sides): a real object at z = -80 mm inside the decaying field, exact skew rays traced from it to z = +0.5 m and
      * carried to their outgoing asymptotes by the paraxial tail map (the third-order action beyond 0.5 m is below
