@@ -14,7 +14,7 @@ import org.axistack.tune.SurfaceFields;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.SpotSizeBudget;
-import org.axistack.report.LensPlan;
+import org.axistack.plan.LensPlan;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSolution;
 import org.axistack.tune.TuneResult;

@@ -177,7 +177,7 @@ final class SweepCommand implements Callable<Integer> {
 
     private static String f(double x) {
         // five significant digits in plain notation up to 1e7 (one notation down the column)
-        return Double.isFinite(x) ? org.axistack.report.Rounding.sig(x, 5) : "-";
+        return Double.isFinite(x) ? org.axistack.model.Rounding.sig(x, 5) : "-";
     }
 
     /** A one-line progress bar on standard error, redrawn in place at each whole percent. */

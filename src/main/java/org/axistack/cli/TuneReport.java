@@ -9,7 +9,7 @@ import java.util.Map;
 
 import org.axistack.model.Units;
 import org.axistack.model.Stack;
-import org.axistack.report.Rounding;
+import org.axistack.model.Rounding;
 import org.axistack.report.SafetyNotice;
 import org.axistack.tune.BiasRange;
 import org.axistack.tune.FocusRanking;

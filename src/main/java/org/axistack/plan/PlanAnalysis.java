@@ -33,7 +33,6 @@ import org.axistack.optics.OpticsAccuracy;
 import org.axistack.optics.StartPlaneException;
 import org.axistack.probe.ProbeSource;
 import org.axistack.probe.ProbeStudy;
-import org.axistack.report.LensPlan;
 import org.axistack.trace.Trajectory;
 import org.axistack.tune.BiasRange;
 import org.axistack.tune.BiasSweep;

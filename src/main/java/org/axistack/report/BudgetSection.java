@@ -3,7 +3,9 @@ package org.axistack.report;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.axistack.model.Rounding;
 import org.axistack.model.Units;
+import org.axistack.plan.LensPlan;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.TuneResult;

@@ -14,6 +14,7 @@ import org.axistack.io.AtomicFiles;
 import org.axistack.io.StackWriter;
 import org.axistack.model.Units;
 import org.axistack.model.Stack;
+import org.axistack.plan.LensPlan;
 import org.axistack.trace.RayPoint;
 import org.axistack.trace.Trajectory;
 import org.axistack.tune.SurfaceFieldCheck;

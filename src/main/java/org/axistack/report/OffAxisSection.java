@@ -6,6 +6,7 @@ import java.util.Locale;
 
 import org.axistack.optics.OffAxisAberrations;
 import org.axistack.optics.OffAxisEffects;
+import org.axistack.plan.LensPlan;
 
 /**
  * The plan report's section on the off-axis third-order aberrations of the stack's finite object (coma, astigmatism,

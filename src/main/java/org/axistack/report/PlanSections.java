@@ -6,12 +6,14 @@ import java.util.Locale;
 
 import org.axistack.model.Numbers;
 import org.axistack.field.FieldSolution;
+import org.axistack.model.Rounding;
 import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.Aberrations;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.Imaging;
 import org.axistack.optics.SpotSizeBudget;
+import org.axistack.plan.LensPlan;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;

@@ -10,6 +10,7 @@ import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.SpotSizeBudget;
+import org.axistack.plan.LensPlan;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSolution;
 import org.axistack.verify.CheckResult;

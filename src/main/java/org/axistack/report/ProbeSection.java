@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.axistack.plan.LensPlan;
 import org.axistack.probe.ProbeLens;
 import org.axistack.probe.ProbePoint;
 import org.axistack.probe.ProbeStudy;

@@ -9,6 +9,7 @@ import org.axistack.optics.ParaxialOptics;
 import org.axistack.optics.ReflectionException;
 import org.axistack.optics.SplitDeflection;
 import org.axistack.optics.SteeringTable;
+import org.axistack.plan.LensPlan;
 
 /**
  * The report's steering section for a stack with split electrodes: the offset per volt of each steerer's x and y

@@ -14,7 +14,7 @@ import javax.swing.SwingWorker;
 import org.axistack.model.Units;
 import org.axistack.model.Stack;
 import org.axistack.tune.BiasTuner;
-import org.axistack.report.Rounding;
+import org.axistack.model.Rounding;
 import org.axistack.tune.FocusRanking;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;

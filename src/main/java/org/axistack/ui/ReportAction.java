@@ -17,9 +17,9 @@ import javax.swing.SwingWorker;
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
 import org.axistack.plan.PlanAnalysis;
-import org.axistack.plan.PlanFolder;
+import org.axistack.report.PlanFolder;
 import org.axistack.report.HtmlReport;
-import org.axistack.report.LensPlan;
+import org.axistack.plan.LensPlan;
 
 /**
  * File > Export HTML report: the plan of the lens as shown (its geometry, the biases as set in the window, the

@@ -18,7 +18,7 @@ import org.axistack.model.Stack;
 import org.axistack.optics.CardinalElements;
 import org.axistack.optics.ParaxialOptics;
 import org.axistack.report.HtmlReport;
-import org.axistack.report.LensPlan;
+import org.axistack.report.PlanFolder;
 import org.axistack.tune.FocusSensitivity;
 import org.axistack.tune.FocusSolution;
 import org.junit.jupiter.api.BeforeAll;

@@ -20,7 +20,6 @@ import org.axistack.optics.SplitDeflection;
 import org.axistack.optics.SteeringTable;
 import org.axistack.optics.TransferMatrix;
 import org.axistack.report.HtmlReport;
-import org.axistack.report.LensPlan;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -1,4 +1,4 @@
-package org.axistack.plan;
+package org.axistack.report;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -10,8 +10,7 @@ import java.util.function.BooleanSupplier;
 import org.axistack.io.AtomicFiles;
 import org.axistack.io.OutputPathException;
 import org.axistack.io.SweepTableCsv;
-import org.axistack.report.HtmlReport;
-import org.axistack.report.LensPlan;
+import org.axistack.plan.LensPlan;
 
 /**
  * The plan's output folder: report.html with its figures (PNG, SVG) and CSV tables, as the plan command and the

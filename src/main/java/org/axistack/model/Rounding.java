@@ -1,6 +1,4 @@
-package org.axistack.report;
-
-import org.axistack.model.Numbers;
+package org.axistack.model;
 
 /**
  * Figures rounded to what their accuracy supports, for every front end (report, window, command line): a

@@ -1,4 +1,4 @@
-package org.axistack.report;
+package org.axistack.plan;
 
 import java.util.List;
 import java.util.Optional;
