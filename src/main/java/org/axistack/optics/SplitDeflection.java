@@ -78,7 +78,8 @@ public final class SplitDeflection {
     private static List<DoubleUnaryOperator> dipoles(SectorField field, List<Integer> es) {
         List<DoubleUnaryOperator> dip = new ArrayList<>();
         for (int e : es) {
-            dip.add(z -> field.unitDipole_V_per_m(e, z));
+            // tabulated (built here, before the parallel quadrature): a common-mode change reuses the table
+            dip.add(field.unitFunction(e, 1));
         }
         return dip;
     }

@@ -154,6 +154,10 @@ public final class Stigmation {
         boolean imaged = withObject && Math.abs(sl) * length >= CardinalElements.AFOCAL_LIMIT * Math.abs(h);
         double iz = imaged ? zE - h / sl : Double.NaN;
         int k = imaged ? 2 * n : n;
+        List<java.util.function.DoubleUnaryOperator> quad = new ArrayList<>();
+        for (int e : es) {
+            quad.add(field.unitFunction(e, 2));
+        }
         CentralRayDeflection.Sources sources = new CentralRayDeflection.Sources() {
             @Override
             public int count() {
@@ -164,12 +168,11 @@ public final class Stigmation {
             public void at(double z, double[] out) {
                 double parallel = optics.fromObjectAsymptote(z).height(1, 0);
                 double fromObject = imaged && z > zo ? optics.transfer(zo, z).height(0, 1) : 0;
-                double[] q = new double[1];
                 for (int i = 0; i < n; i++) {
-                    field.unitAxial(es.get(i), 2, z, 0, q);
-                    out[i] = 2 * q[0] * parallel;
+                    double q = quad.get(i).applyAsDouble(z);
+                    out[i] = 2 * q * parallel;
                     if (imaged) {
-                        out[n + i] = 2 * q[0] * fromObject;
+                        out[n + i] = 2 * q * fromObject;
                     }
                 }
             }
