@@ -32,6 +32,7 @@ final class SizeText {
         return switch (l) {
             case BIAS -> String.format(Locale.ROOT, "%.0f V", si);
             case SURFACE_FIELD -> String.format(Locale.ROOT, "%.0f V/mm", si / 1e3);
+            case GAP -> Double.isInfinite(si) ? "no limit (no facing gap under voltage)" : String.format(Locale.ROOT, "%.0f V", si);
             default -> mm(si);
         };
     }

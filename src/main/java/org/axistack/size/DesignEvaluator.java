@@ -181,7 +181,24 @@ public final class DesignEvaluator {
         v.add(Violation.upper(Limit.LENGTH, s.maxZ_m() - s.minZ_m(), req.maxLength_m()));
         v.add(Violation.lower(Limit.BORE, s.minBore_m(), req.minBore_m()));
         v.add(placement(s));
+        v.add(gapRule(s));
         return v;
+    }
+
+    /**
+     * The gap rule as a limit (issue 19: designs over it are rejected, not only flagged): the facing gap whose
+     * voltage is the largest share of the rule's comfort voltage at its width (GapMargins, plan's own assessment);
+     * without a facing gap under voltage nothing can break it.
+     */
+    private static Violation gapRule(Stack s) {
+        GapMargins.Row worst = null;
+        for (GapMargins.Row r : GapMargins.of(s)) {
+            if (worst == null || r.voltage_V() / r.comfort_V() > worst.voltage_V() / worst.comfort_V()) {
+                worst = r;
+            }
+        }
+        return worst == null ? Violation.upper(Limit.GAP, 0, Double.POSITIVE_INFINITY)
+                : Violation.upper(Limit.GAP, worst.voltage_V(), worst.comfort_V());
     }
 
     /**

@@ -6,7 +6,9 @@ public enum Limit {
     SURFACE_FIELD("surface field (max_surface_field_V_per_mm)", "V/mm"),
     LENGTH("overall length (max_length_mm)", "mm"),
     BORE("bore (min_bore_radius_mm)", "mm"),
-    PLACEMENT("room between object and image (the stack must lie between them)", "mm");
+    PLACEMENT("room between object and image (the stack must lie between them)", "mm"),
+    /** The voltage across the facing gap nearest its limit against the comfort voltage of the gap rule there. */
+    GAP("gap rule (voltage across each facing gap, comfort)", "V");
 
     private final String label;
     private final String unit;

@@ -162,7 +162,30 @@ public record PropertySheet(List<Row> rows, List<LensChart.Mark> marks, Optional
             rows.add(new Row("optics", "not available: " + problem, Level.CAUTION));
         }
         surfaceRows(stack, field, rows);
+        gapRows(stack, rows);
         return new PropertySheet(rows, marks, card, img, problem);
+    }
+
+    /** Label of a gap row: "gap focus - outlet (V across)". */
+    static String gapLabel(org.axistack.tune.GapMargins.Row r) {
+        return "gap " + r.pair() + " (V across)";
+    }
+
+    /**
+     * One row per pair of facing electrodes with a voltage across them (issue 19): the voltage, the gap and the share
+     * of the gap rule's comfort voltage, at the level of plan's verdict (tune.GapMargins, the same rows as plan).
+     */
+    private static void gapRows(Stack stack, List<Row> rows) {
+        for (org.axistack.tune.GapMargins.Row r : org.axistack.tune.GapMargins.of(stack)) {
+            Level level = switch (r.check()) {
+                case ABOVE_AGGRESSIVE -> Level.OVER;
+                case ABOVE_COMFORT -> Level.CAUTION;
+                default -> Level.PLAIN;
+            };
+            rows.add(new Row(gapLabel(r), UiFormat.num(r.voltage_V()) + " over " + UiFormat.num(Units.mToMm(r.gap().gap_m()))
+                    + " mm  (" + UiFormat.num(r.percentOfComfort()) + " % of the gap rule's comfort "
+                    + UiFormat.num(r.comfort_V()) + " V)", level));
+        }
     }
 
     /**

@@ -90,6 +90,8 @@ class SizingChecksTest {
         assertThat(Arrays.stream(s.biases_V()).map(Math::abs).max().orElseThrow()).isLessThanOrEqualTo(base.maxBias_V());
         assertThat(s.maxZ_m() - s.minZ_m()).isLessThanOrEqualTo(base.maxLength_m());
         assertThat(s.minBore_m()).isGreaterThanOrEqualTo(base.minBore_m() * (1 - 1e-12));
+        // every facing gap of the written design within plan's gap rule (issue 19: size rejects designs over it)
+        assertThat(org.axistack.tune.GapMargins.of(s)).allMatch(r -> r.voltage_V() <= r.comfort_V());
         assertThat(s.minZ_m()).isGreaterThan(base.objectZ_m().getAsDouble());
         assertThat(s.maxZ_m()).isLessThan(base.imageZ_m().getAsDouble());
         // the claimed Cs is what the optics of the written file gives (object side, same mesh)

@@ -54,6 +54,26 @@ class LensSessionTest {
     }
 
     @Test
+    void gapMarginsFollowTheBiasesAsPlanAssessesThem() {
+        // the window's gap rows are plan's assessment (tune.GapMargins) at the biases shown: the voltage across
+        // inlet - focus follows the focus bias, and a bias far above the gap rule's voltages turns the row red
+        double[] b = stack.biases_V();
+        int focus = stack.indexOf("focus");
+        for (double scale : new double[] {1, 100}) {
+            double[] bb = b.clone();
+            bb[focus] = b[focus] * scale;
+            LensView v = session.view(bb);
+            org.axistack.tune.GapMargins.Row plan = org.axistack.tune.GapMargins.of(stack.withBiases(bb)).get(0);
+            PropertySheet.Row row = v.properties().rows().stream()
+                    .filter(r -> r.label().equals(PropertySheet.gapLabel(plan))).findFirst().orElseThrow();
+            assertThat(row.value()).startsWith(UiFormat.num(plan.voltage_V()) + " over ")
+                    .contains(UiFormat.num(plan.percentOfComfort()) + " % of the gap rule's comfort");
+            assertThat(plan.voltage_V()).isCloseTo(Math.abs(bb[focus]), within(1e-9));
+            assertThat(row.level()).isEqualTo(scale == 1 ? PropertySheet.Level.PLAIN : PropertySheet.Level.OVER);
+        }
+    }
+
+    @Test
     void windowQuotesCsAndCcForTheStacksObjectAsThePlanDoes() {
         // an object 60 mm before the lens: the window quotes, beside the image-side Cs and Cc, the object-side ones
         // for that object, as plan and optics do (the object side is chosen in one place)
