@@ -177,6 +177,10 @@ final class ProbeCommand implements Callable<Integer> {
             cm.put("image_energy_eV", lens.imageEnergy_eV());
             cm.put("wavelength_pm", lens.wavelength_m() * 1e12);
             cm.put("fixed_magnification", c.model().fixedMagnification());
+            if (c.offAxis().isPresent()) {
+                cm.put("off_axis_blur_share_max", c.offAxisShare());
+            }
+            cm.put("off_axis", c.offAxisInWords());
             List<Map<String, Object>> rows = new ArrayList<>();
             for (ProbePoint p : c.points()) {
                 Object[] r = ProbeTableCsv.row(c.workingPoint().label(), p);

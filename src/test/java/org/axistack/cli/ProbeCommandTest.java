@@ -37,6 +37,8 @@ class ProbeCommandTest {
             assertThat(p.get("dominant").asText()).isIn("source", "diffraction", "spherical", "chromatic");
         }
         assertThat(curves.get(0).get("spherical_aberration_image_mm").asDouble()).isPositive();
+        // the demo's source is at infinity: the off-axis statement says why it is not evaluated
+        assertThat(curves.get(0).get("off_axis").asText()).contains("source is at infinity");
         assertThat(Files.readString(out.resolve("probe.csv"))).startsWith("working_point,current_A,alpha_mrad,probe_fw50_nm");
         assertThat(Files.size(out.resolve("probe.png"))).isGreaterThan(1000);
         assertThat(Files.readString(out.resolve("probe.svg"))).contains("<svg");
