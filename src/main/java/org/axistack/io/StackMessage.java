@@ -1,7 +1,6 @@
 package org.axistack.io;
 
 import java.util.Map;
-import java.util.Set;
 import org.axistack.model.MessageTemplate;
 
 /**
@@ -10,7 +9,7 @@ import org.axistack.model.MessageTemplate;
  * fix template; placeholders are written {name} and filled by {@link #format(Map)}. Lengths in the
  * messages are millimetres, potentials volts, energies electronvolts, as in the stack file.
  */
-public enum StackMessage {
+public enum StackMessage implements MessageTemplate.Entry {
     FILE_NOT_FOUND("the file does not exist",
             "check the path, or leave STACK out to use the built-in demo lens"),
     FILE_UNREADABLE("the file cannot be read ({reason})",
@@ -171,21 +170,13 @@ public enum StackMessage {
         this.fix = fix;
     }
 
+    @Override
     public String problemTemplate() {
         return problem;
     }
 
+    @Override
     public String fixTemplate() {
         return fix;
-    }
-
-    /** The placeholder names the two templates use. */
-    public Set<String> placeholders() {
-        return MessageTemplate.placeholders(problem, fix);
-    }
-
-    /** "problem. Fix: fix." with the placeholders filled; a missing value is an error in the caller. */
-    public String format(Map<String, ?> values) {
-        return MessageTemplate.format(name(), problem, fix, values);
     }
 }

@@ -13,6 +13,29 @@ import java.util.regex.Pattern;
  */
 public final class MessageTemplate {
 
+    /**
+     * A catalogue entry: an enum constant with a problem and a fix template. The placeholders and the filled text
+     * come from here, so both catalogues behave alike.
+     */
+    public interface Entry {
+        /** The constant's name, for the error a missing value is. */
+        String name();
+
+        String problemTemplate();
+
+        String fixTemplate();
+
+        /** The placeholder names the two templates use. */
+        default Set<String> placeholders() {
+            return MessageTemplate.placeholders(problemTemplate(), fixTemplate());
+        }
+
+        /** "problem. Fix: fix." with the placeholders filled; a missing value is an error in the caller. */
+        default String format(Map<String, ?> values) {
+            return MessageTemplate.format(name(), problemTemplate(), fixTemplate(), values);
+        }
+    }
+
     private static final Pattern PLACEHOLDER = Pattern.compile("\\{([a-zA-Z]+)}");
 
     private MessageTemplate() {

@@ -2,7 +2,6 @@ package org.axistack.model;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
-import java.util.Set;
 
 /**
  * The catalogue of physics failures a user can meet: a request the physics cannot carry out (a beam that cannot
@@ -14,7 +13,7 @@ import java.util.Set;
  * <p>Checks that only a programming error can fail (a null field, a negative thread count from code) stay plain
  * {@link IllegalArgumentException}s: the command line reports those as a bug, not as the user's mistake.
  */
-public enum PhysicsMessage {
+public enum PhysicsMessage implements MessageTemplate.Entry {
     // beam envelope
     CURRENT_NEGATIVE(Kind.REQUEST, "beam current must be a finite number >= 0 A, got {current} A",
             "give the magnitude of the current (the sign of the charge comes from the particle)"),
@@ -122,22 +121,14 @@ public enum PhysicsMessage {
         return kind;
     }
 
+    @Override
     public String problemTemplate() {
         return problem;
     }
 
+    @Override
     public String fixTemplate() {
         return fix;
-    }
-
-    /** The placeholder names the two templates use. */
-    public Set<String> placeholders() {
-        return MessageTemplate.placeholders(problem, fix);
-    }
-
-    /** "problem. Fix: fix." with the placeholders filled; a missing value is an error in the caller. */
-    public String format(Map<String, ?> values) {
-        return MessageTemplate.format(name(), problem, fix, values);
     }
 
     /**

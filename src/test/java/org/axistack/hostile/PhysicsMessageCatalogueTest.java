@@ -16,9 +16,7 @@ import org.axistack.beam.EnvelopeProblem;
 import org.axistack.beam.EnvelopeRequest;
 import org.axistack.beam.EnvelopeSolver;
 import org.axistack.beam.EnvelopeStart;
-import org.axistack.field.AxialField;
 import org.axistack.field.BemSolver;
-import org.axistack.field.Field;
 import org.axistack.field.FieldSolution;
 import org.axistack.field.SolveProgress;
 import org.axistack.io.BuiltInStacks;
@@ -35,6 +33,7 @@ import org.axistack.trace.RayStart;
 import org.axistack.trace.TraceSettings;
 import org.axistack.trace.TraceTargets;
 import org.axistack.trace.TracedAberrations;
+import org.axistack.trace.UniformField;
 import org.axistack.trace.Tracer;
 import org.axistack.tune.BiasRange;
 import org.axistack.tune.BiasSweep;
@@ -51,29 +50,6 @@ import org.junit.jupiter.api.Test;
  */
 class PhysicsMessageCatalogueTest {
 
-    /** Uniform axial field E_z = e0 with potential phi0 at z = 0 (textbook: phi = phi0 - e0 z). */
-    record Uniform(double phi0_V, double e0_V_per_m) implements Field, AxialField {
-        @Override
-        public double potential_V(double z_m, double r_m) {
-            return phi0_V - e0_V_per_m * z_m;
-        }
-
-        @Override
-        public double evaluate(double z_m, double r_m, double[] out) {
-            out[0] = e0_V_per_m;
-            out[1] = 0;
-            return potential_V(z_m, r_m);
-        }
-
-        @Override
-        public void axial(double z_m, int order, double[] out) {
-            out[0] = potential_V(z_m, 0);
-            for (int k = 1; k <= order; k++) {
-                out[k] = k == 1 ? -e0_V_per_m : 0;
-            }
-        }
-    }
-
     private static final Particle EL = Particle.electron();
     private static Stack demo;
     private static FieldSolution solution;
@@ -88,9 +64,9 @@ class PhysicsMessageCatalogueTest {
         Electrode stop = new Electrode.Aperture("stop", 0, 0.03, 1e-3, 6e-3, 1e-3);
         ElectrodeGeometry g = new ElectrodeGeometry(List.of(stop), -0.01, 0.07, 0.02);
         ElectrodeGeometry open = new ElectrodeGeometry(List.of(), -0.01, 0.07, 0.02);
-        Tracer drift = new Tracer(new Uniform(0, 0), g, TraceSettings.defaults());
-        Tracer freeDrift = new Tracer(new Uniform(0, 0), open, TraceSettings.defaults());
-        Tracer retarding = new Tracer(new Uniform(-200, 0), g, TraceSettings.defaults());
+        Tracer drift = new Tracer(new UniformField(0, 0), g, TraceSettings.defaults());
+        Tracer freeDrift = new Tracer(new UniformField(0, 0), open, TraceSettings.defaults());
+        Tracer retarding = new Tracer(new UniformField(-200, 0), g, TraceSettings.defaults());
         TraceTargets screen = TraceTargets.screenOnly(0.06);
         RaySet fan = RaySets.pointFan(EL, 100, 0, 0, 0.01, 2, 1);
         ElectrostaticChannel mirror = new ElectrostaticChannel((z, order, out) -> {
@@ -99,7 +75,7 @@ class PhysicsMessageCatalogueTest {
             }
         }, EL, 1000);
         EnvelopeProblem base = new EnvelopeProblem(0, 0.1, 1e-3, 0, 0, 0);
-        ElectrostaticChannel plain = new ElectrostaticChannel(new Uniform(0, 0), EL, 1000);
+        ElectrostaticChannel plain = new ElectrostaticChannel(new UniformField(0, 0), EL, 1000);
         FocusTarget parallel = FocusTarget.parallelBeam(0.2);
 
         Map<PhysicsMessage, Runnable> c = new EnumMap<>(PhysicsMessage.class);

@@ -4,7 +4,7 @@ import org.axistack.field.AxialField;
 import org.axistack.field.Field;
 
 /** Test fixture: a uniform field E_z = e0 everywhere, potential phi = phi0 - e0 z (textbook). */
-record UniformField(double phi0_V, double e0_V_per_m) implements Field, AxialField {
+public record UniformField(double phi0_V, double e0_V_per_m) implements Field, AxialField {
 
     @Override
     public double potential_V(double z_m, double r_m) {
