@@ -59,13 +59,8 @@ final class OpticsCommand implements Callable<Integer> {
     @Mixin
     JsonOption json;
 
-    @Option(names = "--object-height-mm", paramLabel = "H",
-            description = "Object height in mm for the off-axis aberrations' effects (needs a finite object).")
-    Double objectHeight_mm;
-
-    @Option(names = "--aperture-mrad", paramLabel = "MRAD",
-            description = "Object-side aperture angle in mrad for the off-axis aberrations' blur (with --object-height-mm).")
-    Double aperture_mrad;
+    @Mixin
+    OffAxisOptions offAxis;
 
     @Option(names = "--astigmatism", paramLabel = "DZ:DEG",
             description = "An astigmatism to cancel with the stack's stigmators (split electrodes with a quadrupole"
@@ -92,23 +87,12 @@ final class OpticsCommand implements Callable<Integer> {
         if (stopZ_mm != null && !Double.isFinite(stopZ_mm)) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--stop-z-mm must be a position in mm, got " + stopZ_mm);
         }
-        if (objectHeight_mm != null && !(Double.isFinite(objectHeight_mm) && objectHeight_mm > 0)) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--object-height-mm must be a positive number of millimetres, got " + objectHeight_mm);
-        }
-        if (aperture_mrad != null && !(Double.isFinite(aperture_mrad) && aperture_mrad > 0)) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--aperture-mrad must be a positive angle in mrad, got " + aperture_mrad);
-        }
-        if (aperture_mrad != null && objectHeight_mm == null) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--aperture-mrad needs --object-height-mm (the off-axis blur depends on both)");
-        }
+        offAxis.check(spec.commandLine());
         Stack stack = input.loadOrDemo();
         PrintWriter err = spec.commandLine().getErr();
         OptionalDouble objectZ = objectZ_mm != null ? OptionalDouble.of(Units.mmToM(objectZ_mm)) : stack.beam().objectZ_m();
         // checked before the solve: a usage error never waits for the work
-        if (objectHeight_mm != null && objectZ.isEmpty()) {
+        if (offAxis.given() && objectZ.isEmpty()) {
             throw new CommandLine.ParameterException(spec.commandLine(),
                     "--object-height-mm needs a finite object: give --object-z or object_z_mm in the stack's [beam]");
         }
@@ -206,7 +190,7 @@ final class OpticsCommand implements Callable<Integer> {
                     }
                     out.put("stop_z_mm", stopZ_mm);
                 }
-                out.put("off_axis_aberrations", OffAxisOutput.map(oa, objectHeight_mm, aperture_mrad));
+                out.put("off_axis_aberrations", OffAxisOutput.map(oa, offAxis.objectHeight_mm, offAxis.aperture_mrad));
             }
         } else {
             out.put("spherical_aberration_mm", null);

@@ -76,14 +76,8 @@ final class PlanCommand implements Callable<Integer> {
                     + " energy spread is taken as the source's FWHM.")
     Double brightness;
 
-    @Option(names = "--object-height-mm", paramLabel = "H",
-            description = "Object height in mm for the off-axis aberrations' effects at the image (a stack with [beam]"
-                    + " object_z_mm).")
-    Double objectHeight_mm;
-
-    @Option(names = "--aperture-mrad", paramLabel = "MRAD",
-            description = "Object-side aperture half-angle in mrad for the off-axis blur (with --object-height-mm).")
-    Double aperture_mrad;
+    @Mixin
+    OffAxisOptions offAxis;
 
     @Option(names = "--no-check", description = "Skip the built-in verification cases (faster; the report says so).")
     boolean noCheck;
@@ -107,18 +101,7 @@ final class PlanCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(cl, "--brightness must be a positive number of A/(m^2 sr V), got "
                     + brightness);
         }
-        if (objectHeight_mm != null && !(objectHeight_mm > 0 && Double.isFinite(objectHeight_mm))) {
-            throw new CommandLine.ParameterException(cl, "--object-height-mm must be a positive number of millimetres, got "
-                    + objectHeight_mm);
-        }
-        if (aperture_mrad != null && !(aperture_mrad > 0 && Double.isFinite(aperture_mrad))) {
-            throw new CommandLine.ParameterException(cl, "--aperture-mrad must be a positive angle in mrad, got "
-                    + aperture_mrad);
-        }
-        if (aperture_mrad != null && objectHeight_mm == null) {
-            throw new CommandLine.ParameterException(cl,
-                    "--aperture-mrad needs --object-height-mm (the off-axis blur depends on both)");
-        }
+        offAxis.check(cl);
         if (tune != null && stack.indexOf(tune) < 0) {
             throw new CommandLine.ParameterException(cl, "--tune " + tune + ": no electrode of that name; the stack has "
                     + String.join(", ", stack.names()));
@@ -129,12 +112,11 @@ final class PlanCommand implements Callable<Integer> {
         LensPlan plan = PlanAnalysis.solveAndRun(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV,
                 current_A, emittance_mm_mrad * 1e-6, tune, !noCheck, Units.mmToM(depth_mm),
                 brightness == null ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(brightness),
-                objectHeight_mm == null ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(Units.mmToM(objectHeight_mm)),
-                aperture_mrad == null ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(aperture_mrad * 1e-3)),
+                offAxis.height_m(), offAxis.aperture_rad()),
                 SolveReporter.to(err, quiet), progressLines(err, quiet));
         summary(w, stack, input.shownAs());
         PlanSummary.print(w, plan);
-        if (objectHeight_mm != null && plan.offAxis().isEmpty()) {
+        if (offAxis.given() && plan.offAxis().isEmpty()) {
             w.println("Off-axis aberrations: " + plan.offAxisNote());
         }
         Path html;
