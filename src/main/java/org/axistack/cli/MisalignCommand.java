@@ -54,9 +54,9 @@ final class MisalignCommand implements Callable<Integer> {
     @Mixin
     StackInput input;
 
-    @Option(names = "--allowed-shift", paramLabel = "MM", defaultValue = "0.05",
+    @Option(names = "--allowed-shift", paramLabel = "MM",
             description = "Allowed spot displacement at the screen, mm (default 0.05).")
-    double allowed_mm;
+    double allowed_mm = Units.mToMm(MisalignmentStudy.DEFAULT_ALLOWED_SHIFT_M);
 
     @Option(names = "--focus", paramLabel = "NAME",
             description = "Electrode whose bias focuses, for the spot walk (default: the most strongly biased one).")
@@ -190,6 +190,22 @@ final class MisalignCommand implements Callable<Integer> {
             mon.add(x);
         }
         m.put("monitors", mon);
+        Map<String, Object> aligned = new LinkedHashMap<>();
+        aligned.put("start_z_mm", Units.mToMm(bench.startZ_m()));
+        aligned.put("note", ALIGNED_NOTE);
+        List<Map<String, Object>> planes = new ArrayList<>();
+        for (int p = 0; p < bench.aligned().length; p++) {
+            Map<String, Object> x = new LinkedHashMap<>();
+            x.put("plane", p == 0 ? "screen" : bench.monitorNames().get(p - 1));
+            x.put("z_mm", Units.mToMm(p == 0 ? b.screenZ_m() : bench.monitorZ_m()[p - 1]));
+            x.put("x_mm", Units.mToMm(bench.aligned()[p][0]));
+            x.put("y_mm", Units.mToMm(bench.aligned()[p][1]));
+            x.put("slope_x_mrad", bench.aligned()[p][2] * 1e3);
+            x.put("slope_y_mrad", bench.aligned()[p][3] * 1e3);
+            planes.add(x);
+        }
+        aligned.put("planes", planes);
+        m.put("aligned_central_ray", aligned);
         List<Map<String, Object>> cancel = new ArrayList<>();
         for (int s = 0; s < bench.steerers().size(); s++) {
             Map<String, Object> x = new LinkedHashMap<>();
@@ -244,6 +260,11 @@ final class MisalignCommand implements Callable<Integer> {
         }
         return g;
     }
+
+    /** What the aligned central ray is, for JSON and text. */
+    static final String ALIGNED_NOTE = "the central ray with every electrode aligned: the [beam] start offset and"
+            + " slopes carried through the round lens and the stored steering (sector) biases, first order; each"
+            + " misalignment's shift adds to it";
 
     /** The coma convention in words, for JSON and text. */
     static final String COMA_CONVENTION = "a ray of image-side aperture slope alpha (complex, x + i y) lands at"
@@ -304,6 +325,16 @@ final class MisalignCommand implements Callable<Integer> {
                 w.println(sb);
             }
         }
+        w.println();
+        StringBuilder al = new StringBuilder("Aligned central ray from z = " + num(Units.mToMm(bench.startZ_m()))
+                + " mm (x, y in mm):");
+        for (int p = 0; p < bench.aligned().length; p++) {
+            al.append("  ").append(p == 0 ? "screen" : bench.monitorNames().get(p - 1)).append(' ')
+                    .append(num(Units.mToMm(bench.aligned()[p][0]))).append(", ")
+                    .append(num(Units.mToMm(bench.aligned()[p][1])));
+        }
+        w.println(al);
+        w.println("  (" + ALIGNED_NOTE + ")");
         for (int s = 0; s < bench.steerers().size(); s++) {
             if (s == 0) {
                 w.println();

@@ -48,6 +48,7 @@ final class PlanSummary {
                     + " V, " + p.sweep().stream().filter(x -> x.ok()).count() + " usable (sweep.png, sweep.csv)");
         }
         p.probe().ifPresent(study -> probe(w, study));
+        p.misalignment().ifPresent(study -> misalignment(w, study));
         surfaceFields(w, p);
         gaps(w, p);
         if (!p.checks().isEmpty()) {
@@ -170,6 +171,24 @@ final class PlanSummary {
     private static String g(double x) {
         return Double.isFinite(x) ? org.axistack.model.Numbers.trimZeros(org.axistack.model.Numbers.general(x,
                 org.axistack.model.Numbers.MESSAGE_DIGITS)) : "-";
+    }
+
+    /** The decentre and tilt budget in two lines: the tightest electrode and every tolerance. */
+    private static void misalignment(PrintWriter w, org.axistack.optics.MisalignmentStudy study) {
+        org.axistack.optics.MisalignmentBudget m = study.budget();
+        org.axistack.optics.MisalignmentBudget.Row d = m.rows().get(m.tightestDecentre());
+        org.axistack.optics.MisalignmentBudget.Row t = m.rows().get(m.tightestTilt());
+        w.println("Decentre and tilt budget (spot within " + g(m.allowed_m() * 1e3) + " mm at the screen"
+                + (m.hasGrowth() ? ", growth within " + g(m.allowedGrowth_m() * 1e3) + " mm" : "")
+                + "; errors in quadrature): tightest decentre " + d.name() + " " + g(d.decentreTolerance_m() * 1e3)
+                + " mm, tightest tilt " + t.name() + " " + g(t.tiltTolerance_rad() * 1e3) + " mrad (misalignment.csv)");
+        StringBuilder sb = new StringBuilder("  tolerances (mm / mrad):");
+        for (org.axistack.optics.MisalignmentBudget.Row r : m.rows()) {
+            sb.append(' ').append(r.name()).append(' ').append(g(r.decentreTolerance_m() * 1e3)).append(" / ")
+                    .append(g(r.tiltTolerance_rad() * 1e3)).append(';');
+        }
+        sb.setLength(sb.length() - 1);
+        w.println(sb);
     }
 
     /** One line per probe curve: the probe at the smallest and the largest current, and what dominates. */

@@ -125,6 +125,7 @@ final class SizeCommand implements Callable<Integer> {
         }
         w.println();
         SizeText.tolerances(w, res.tolerances());
+        SizeText.misalignment(w, misalignment(req, win));
         w.println();
         w.println("Best design per objective (fine mesh):");
         for (Map.Entry<Objective, Design> e : res.best().entrySet()) {
@@ -169,6 +170,25 @@ final class SizeCommand implements Callable<Integer> {
         return r.objectZ_m().isPresent()
                 ? String.format(Locale.ROOT, "object at z = %.4g mm, %s", r.objectZ_m().getAsDouble() * 1e3, img)
                 : "parallel beam, " + img;
+    }
+
+    /**
+     * The chosen design's decentre and tilt budget, as {@code misalign} computes it with its defaults (screen at the
+     * image; focus electrode the biased one): one more solve on the final mesh; null when it cannot be computed.
+     */
+    private static org.axistack.optics.MisalignmentStudy misalignment(Requirements req, Design win) {
+        DesignEvaluator ev = new DesignEvaluator(req, (a, b, c, d, e) -> new double[0]);
+        Stack st = ev.stack(win.electrodes(), MeshSettings.defaults().withTargetElements(req.search().finalElements()));
+        try {
+            org.axistack.field.FieldSolution sol = org.axistack.field.BemSolver.solve(st.electrodes(), st.mesh(),
+                    org.axistack.field.SolveProgress.NONE);
+            return org.axistack.optics.MisalignmentStudy.run(st, sol, req.family().biasedElectrodes().get(0),
+                    st.screenZ_m().orElseThrow(), org.axistack.optics.MisalignmentStudy.DEFAULT_ALLOWED_SHIFT_M,
+                    Double.NaN, org.axistack.optics.MisalignmentStudy.DEFAULT_ALLOWED_GROWTH_M,
+                    org.axistack.field.SolveProgress.NONE);
+        } catch (RuntimeException e) {
+            return null;
+        }
     }
 
     private List<String> write(Requirements req, SizingResult res, Path dir) throws IOException {

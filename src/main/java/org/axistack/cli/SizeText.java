@@ -126,6 +126,25 @@ final class SizeText {
         }
     }
 
+    /** The chosen design's decentre and tilt budget (misalign's defaults), or that it could not be computed. */
+    static void misalignment(PrintWriter w, org.axistack.optics.MisalignmentStudy study) {
+        if (study == null) {
+            w.println("Decentre and tilt budget: not computed for this design (run 'misalign chosen.toml').");
+            return;
+        }
+        org.axistack.optics.MisalignmentBudget m = study.budget();
+        w.printf(Locale.ROOT, "Decentre and tilt budget of the chosen design (as 'misalign': spot within %.3g mm at the"
+                + " image%s; errors in quadrature):%n", m.allowed_m() * 1e3,
+                m.hasGrowth() ? String.format(Locale.ROOT, ", coma growth within %.3g mm", m.allowedGrowth_m() * 1e3) : "");
+        for (org.axistack.optics.MisalignmentBudget.Row r : m.rows()) {
+            w.printf(Locale.ROOT, "  %-22s decentre %.3g mm%s, tilt %.3g mrad%s%n", r.name(), r.decentreTolerance_m() * 1e3,
+                    r.decentreLimitedByGrowth() ? " (growth)" : "", r.tiltTolerance_rad() * 1e3,
+                    r.tiltLimitedByGrowth() ? " (growth)" : "");
+        }
+        w.println("  tightest: decentre of " + m.rows().get(m.tightestDecentre()).name() + ", tilt of "
+                + m.rows().get(m.tightestTilt()).name());
+    }
+
     static void meshCheck(PrintWriter w, MeshCheck m) {
         w.printf(Locale.ROOT, "Search mesh accuracy (winner re-solved with %d instead of %d unknowns): bias %s, Cs %s,"
                 + " Cc %s, surface field %s (relative changes).%n", m.fineUnknowns(), m.coarseUnknowns(),

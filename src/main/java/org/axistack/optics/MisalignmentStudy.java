@@ -32,6 +32,9 @@ public record MisalignmentStudy(MisalignmentBudget budget, ParaxialOptics optics
     /** Focus-bias step of the central difference for the spot walk, V (the walk is quoted per volt). */
     public static final double FOCUS_STEP_V = 1.0;
 
+    /** Default allowed spot displacement at the screen, m: our default, no source. */
+    public static final double DEFAULT_ALLOWED_SHIFT_M = 5e-5;
+
     /** Default allowed spot growth (length of the coma figure), m: our default, no source. */
     public static final double DEFAULT_ALLOWED_GROWTH_M = 1e-5;
 

@@ -16,7 +16,11 @@ import org.axistack.model.Stack;
  * tilt of each electrode ({@link CentralRayShift}), and, for every split electrode, the x differential bias that
  * brings the central ray back to the axis at the screen per unit misalignment (minus the screen shift over the
  * screen offset per volt of that bias, {@link SplitDeflection}; by the rotational symmetry the y bias cancels the
- * y motions alike). First order in both. Immutable.
+ * y motions alike). First order in both. With it, the absolute central ray of the aligned stack: the beam's start
+ * offset and slopes ({@code [beam]}) carried from the start plane through the round lens and the stored sector
+ * biases' deflection ({@link SplitDeflection#ray(int, Map, org.axistack.model.StartRay)}), at the screen and every
+ * monitor; the misalignment shifts add to it (their cross terms with the start offset are of second order).
+ * Immutable.
  *
  * @param monitorNames labels of the stack's monitors
  * @param monitorZ_m   their planes, m
@@ -26,9 +30,12 @@ import org.axistack.model.Stack;
  * @param cancelBias_V cancelBias_V[s][k][motion]: x bias of steerer s that cancels the screen displacement per metre
  *                     of decentre or per radian of tilt of electrode k (V/m, V/rad); NaN when the x bias does not
  *                     move the ray along x at the screen
+ * @param startZ_m     where the beam's central ray starts (the [beam] start, else the optics' start plane), m
+ * @param aligned      aligned[p] = {x, y, x', y'} of the central ray of the aligned stack (start offset and slopes,
+ *                     stored sector biases) at the screen (p = 0) and at monitor p - 1, m and rad
  */
 public record MonitorAlignment(List<String> monitorNames, double[] monitorZ_m, double[][][] shift,
-        List<String> steerers, double[][][] cancelBias_V) {
+        List<String> steerers, double[][][] cancelBias_V, double startZ_m, double[][] aligned) {
 
     /**
      * @param stack    the stack as biased in the study
@@ -54,6 +61,19 @@ public record MonitorAlignment(List<String> monitorNames, double[] monitorZ_m, d
         }
         List<String> names = new ArrayList<>();
         double[][][] cancel = new double[0][][];
+        ParaxialOptics optics = study.optics();
+        double screen = study.budget().screenZ_m();
+        double start = stack.beam().startZ_m().orElse(optics.zStart_m());
+        double[] planes = new double[nm + 1];
+        planes[0] = screen;
+        System.arraycopy(z, 0, planes, 1, nm);
+        org.axistack.model.StartRay sr = stack.beam().startRay();
+        double[][] aligned = new double[nm + 1][];
+        for (int p = 0; p <= nm; p++) {
+            TransferMatrix t = optics.transfer(start, planes[p]);
+            aligned[p] = new double[] {t.height(sr.x_m(), sr.slopeX_rad()), t.height(sr.y_m(), sr.slopeY_rad()),
+                t.slope(sr.x_m(), sr.slopeX_rad()), t.slope(sr.y_m(), sr.slopeY_rad())};
+        }
         if (stack.hasSectors()) {
             Map<Integer, Sectors> byIndex = new LinkedHashMap<>();
             for (String n : stack.names()) {
@@ -63,9 +83,13 @@ public record MonitorAlignment(List<String> monitorNames, double[] monitorZ_m, d
                 }
             }
             SectorField field = SectorField.dipole(solution, byIndex, study.dipole());
-            ParaxialOptics optics = study.optics();
-            double screen = study.budget().screenZ_m();
             SplitDeflection d = SplitDeflection.of(field, optics, optics.zStart_m(), new double[] {screen});
+            Map<Integer, List<Double>> stored = new LinkedHashMap<>();
+            byIndex.forEach((e, sec) -> stored.put(e, sec.biases_V()));
+            SplitDeflection from = SplitDeflection.of(field, optics, start, planes);
+            for (int p = 0; p <= nm; p++) {
+                aligned[p] = from.ray(p, stored, sr);
+            }
             cancel = new double[names.size()][ne][2];
             for (int s = 0; s < names.size(); s++) {
                 double per = d.perVolt(0, stack.indexOf(names.get(s))).xPerVx_m();
@@ -77,6 +101,6 @@ public record MonitorAlignment(List<String> monitorNames, double[] monitorZ_m, d
                 }
             }
         }
-        return new MonitorAlignment(labels, z, shift, names, cancel);
+        return new MonitorAlignment(labels, z, shift, names, cancel, start, aligned);
     }
 }

@@ -87,6 +87,11 @@ public final class HtmlReport {
             AtomicFiles.writeString(AtomicFiles.inside(dir, "probe.csv"), org.axistack.io.ProbeTableCsv.text(probe));
             files.add("probe.csv");
         }
+        if (plan.misalignment().isPresent()) {
+            AtomicFiles.writeString(AtomicFiles.inside(dir, "misalignment.csv"),
+                    org.axistack.io.AlignmentTableCsv.text(plan.misalignment().get().budget()));
+            files.add("misalignment.csv");
+        }
         // tables
         for (var t : extraTables.entrySet()) {
             AtomicFiles.writeString(AtomicFiles.inside(dir, t.getKey()), t.getValue());
@@ -156,6 +161,7 @@ public final class HtmlReport {
         PlanSections.tuning(b, plan);
         BudgetSection.html(b, plan);
         SteeringSection.html(b, plan);
+        MisalignmentSection.html(b, plan);
         if (!plan.sweep().isEmpty() && plan.sweepElectrode().isPresent()) {
             long ok = plan.sweep().stream().filter(p -> p.ok()).count();
             b.append("<h2>Focus-bias sweep</h2>\n<img src=\"sweep.png\" alt=\"optics against the bias\">\n")

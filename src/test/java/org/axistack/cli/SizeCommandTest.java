@@ -45,7 +45,8 @@ class SizeCommandTest {
         Path outDir = dir.resolve("designs");
         Run r = run("size", req.toString(), "--out", outDir.toString(), "--threads", "2");
         assertThat(r.code()).as(r.err()).isZero();
-        assertThat(r.out()).contains("Chosen design", "Why it wins", "<- matters most", "HIGH VOLTAGE", "Trade-off front");
+        assertThat(r.out()).contains("Chosen design", "Why it wins", "<- matters most", "HIGH VOLTAGE", "Trade-off front",
+                "Decentre and tilt budget of the chosen design", "tightest: decentre of");
         assertThat(r.err()).contains("sizing [");
         assertThat(outDir.resolve("front.png")).isNotEmptyFile();
         Run optics = run("optics", outDir.resolve("chosen.toml").toString(), "--json");

@@ -127,6 +127,38 @@ class PlanAnalysisTest {
      * at every focusing bias of its own tune, and the report shows the section, the curve and the table; without it
      * the report says how to get one.
      */
+    /**
+     * The misalignment section is the misalign command's study (optics.MisalignmentStudy with its defaults, the
+     * same computation: common practice, one computation) on the plan's solution and biases; the report shows the
+     * table and the tightest electrode and writes misalignment.csv; without it the report says how to get one.
+     */
+    @Test
+    void misalignmentSectionIsTheMisalignStudy(@TempDir Path dir) throws IOException {
+        assertThat(plan.misalignment()).isEmpty();
+        assertThat(Files.readString(HtmlReport.write(plan, dir.resolve("plain"), java.util.Map.of())))
+                .contains("Decentre and tilt budget").contains("plan --misalign");
+        LensPlan with = PlanAnalysis.run(stack, "test", PlanAnalysis.Settings.defaults().withChecks(false)
+                .withMisalignment(true), solution, PlanAnalysis.Progress.NONE);
+        assertThat(with.misalignment()).isPresent();
+        org.axistack.optics.MisalignmentBudget m = with.misalignment().get().budget();
+        org.axistack.optics.MisalignmentBudget ref = org.axistack.optics.MisalignmentStudy.run(stack, solution, "focus",
+                stack.screenZ_m().getAsDouble(), org.axistack.optics.MisalignmentStudy.DEFAULT_ALLOWED_SHIFT_M, Double.NaN,
+                org.axistack.optics.MisalignmentStudy.DEFAULT_ALLOWED_GROWTH_M, SolveProgress.NONE).budget();
+        assertThat(m.rows()).hasSameSizeAs(ref.rows());
+        for (int k = 0; k < ref.rows().size(); k++) {
+            assertThat(m.rows().get(k).decentreTolerance_m()).isEqualTo(ref.rows().get(k).decentreTolerance_m());
+            assertThat(m.rows().get(k).tiltTolerance_rad()).isEqualTo(ref.rows().get(k).tiltTolerance_rad());
+        }
+        assertThat(m.hasGrowth()).isTrue();
+        Path html = HtmlReport.write(with, dir.resolve("mis"), java.util.Map.of());
+        // the table's tilt shift is in um per mrad, as misalign prints it
+        String tiltShift = org.axistack.model.Numbers.general(ref.rows().get(0).tiltShift() * 1e3,
+                org.axistack.model.Numbers.REPORT_DIGITS);
+        assertThat(Files.readString(html)).contains("Decentre and tilt budget").contains("Tightest: decentre of <strong>"
+                + ref.rows().get(ref.tightestDecentre()).name()).contains("<td>" + tiltShift + "</td>");
+        assertThat(dir.resolve("mis").resolve("misalignment.csv")).exists();
+    }
+
     @Test
     void probeSectionIsTheProbeStudyAtTheGivenAndFocusingBiases(@TempDir Path dir) throws IOException {
         assertThat(plan.probe()).isEmpty();
