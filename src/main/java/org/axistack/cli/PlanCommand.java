@@ -79,6 +79,10 @@ final class PlanCommand implements Callable<Integer> {
     @Mixin
     OffAxisOptions offAxis;
 
+    @Option(names = "--misalign", description = "Add the decentre and tilt budget of every electrode (as 'misalign'"
+            + " computes it with its defaults: 0.05 mm at the screen, 0.01 mm spot growth) to the plan.")
+    boolean misalign;
+
     @Option(names = "--no-check", description = "Skip the built-in verification cases (faster; the report says so).")
     boolean noCheck;
 
@@ -112,7 +116,7 @@ final class PlanCommand implements Callable<Integer> {
         LensPlan plan = PlanAnalysis.solveAndRun(stack, input.shownAs(), new PlanAnalysis.Settings(energySpread_eV,
                 current_A, emittance_mm_mrad * 1e-6, tune, !noCheck, Units.mmToM(depth_mm),
                 brightness == null ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(brightness),
-                offAxis.height_m(), offAxis.aperture_rad()),
+                offAxis.height_m(), offAxis.aperture_rad(), misalign),
                 SolveReporter.to(err, quiet), progressLines(err, quiet));
         summary(w, stack, input.shownAs());
         PlanSummary.print(w, plan);

@@ -51,6 +51,8 @@ import org.axistack.verify.CheckResult;
  * @param offAxis      the off-axis aberrations of the stack's finite object, with the object height and aperture angle
  *                     of their effects when given (empty: object at infinity, imaged to infinity, or reflected)
  * @param offAxisNote  why they are missing (empty text when present)
+ * @param misalignment the decentre and tilt budget of every electrode (empty: not asked for, or the beam is
+ *                     reflected)
  */
 public record LensPlan(Stack stack, String source, FieldSolution solution, BiasedField field,
         Optional<String> reflection, Optional<CardinalElements> cardinal, String optics, Optional<Imaging> imaging,
@@ -59,7 +61,8 @@ public record LensPlan(Stack stack, String source, FieldSolution solution, Biase
         Optional<TuneResult> tune, String tuneNote, List<FocusSensitivity> budgets, String budgetNote,
         Optional<String> sweepElectrode, List<SweepPoint> sweep,
         List<CheckResult> checks, List<String> warnings, double seconds, Optional<org.axistack.probe.ProbeStudy> probe,
-        Optional<org.axistack.optics.OffAxisEffects> offAxis, String offAxisNote) {
+        Optional<org.axistack.optics.OffAxisEffects> offAxis, String offAxisNote,
+        Optional<org.axistack.optics.MisalignmentStudy> misalignment) {
 
     public LensPlan {
         spotRows = List.copyOf(spotRows);
@@ -68,6 +71,21 @@ public record LensPlan(Stack stack, String source, FieldSolution solution, Biase
         sweep = List.copyOf(sweep);
         checks = List.copyOf(checks);
         warnings = List.copyOf(warnings);
+    }
+
+    /** A plan without the misalignment section. */
+    public LensPlan(Stack stack, String source, FieldSolution solution, BiasedField field,
+            Optional<String> reflection, Optional<CardinalElements> cardinal, String optics, Optional<Imaging> imaging,
+            Optional<Aberrations> aberrations, Optional<SpotSizeBudget.Inputs> spotInputs,
+            List<SpotSizeBudget.Row> spotRows, List<Trajectory> rays, String rayNote,
+            Optional<EnvelopeStudyResult> envelope, String envelopeNote, Optional<TuneResult> tune, String tuneNote,
+            List<FocusSensitivity> budgets, String budgetNote, Optional<String> sweepElectrode, List<SweepPoint> sweep,
+            List<CheckResult> checks, List<String> warnings, double seconds,
+            Optional<org.axistack.probe.ProbeStudy> probe, Optional<org.axistack.optics.OffAxisEffects> offAxis,
+            String offAxisNote) {
+        this(stack, source, solution, field, reflection, cardinal, optics, imaging, aberrations, spotInputs, spotRows,
+                rays, rayNote, envelope, envelopeNote, tune, tuneNote, budgets, budgetNote, sweepElectrode, sweep, checks,
+                warnings, seconds, probe, offAxis, offAxisNote, Optional.empty());
     }
 
     /** True when the plan has an outcome the user must act on (reflection or no real focus). */

@@ -78,10 +78,12 @@ public final class PlanAnalysis {
      * @param objectHeight_m   object height for the off-axis aberrations' effects (a stack with a finite object;
      *                         empty: the coefficients only)
      * @param aperture_rad     object-side aperture half-angle for their blur (needs the height; empty: none)
+     * @param misalignment     whether to add the misalignment section (decentre and tilt budget of every electrode,
+     *                         as {@code misalign} computes it with its defaults)
      */
     public record Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
             boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V, OptionalDouble objectHeight_m,
-            OptionalDouble aperture_rad) {
+            OptionalDouble aperture_rad, boolean misalignment) {
         public Settings {
             objectHeight_m = objectHeight_m == null ? OptionalDouble.empty() : objectHeight_m;
             aperture_rad = aperture_rad == null ? OptionalDouble.empty() : aperture_rad;
@@ -113,13 +115,27 @@ public final class PlanAnalysis {
         public Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
                 boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V) {
             this(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
-                    probeBrightness_A_per_m2_sr_V, OptionalDouble.empty(), OptionalDouble.empty());
+                    probeBrightness_A_per_m2_sr_V, OptionalDouble.empty(), OptionalDouble.empty(), false);
+        }
+
+        /** Settings without the misalignment section. */
+        public Settings(double energySpread_eV, double current_A, double emittance_m_rad, String tuneElectrode,
+                boolean runChecks, double depth_m, OptionalDouble probeBrightness_A_per_m2_sr_V,
+                OptionalDouble objectHeight_m, OptionalDouble aperture_rad) {
+            this(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
+                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad, false);
+        }
+
+        /** The same settings with or without the misalignment section. */
+        public Settings withMisalignment(boolean on) {
+            return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
+                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad, on);
         }
 
         /** The same settings with an object height and aperture angle for the off-axis effects (either may be empty). */
         public Settings withOffAxis(OptionalDouble height_m, OptionalDouble alpha_rad) {
             return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
-                    probeBrightness_A_per_m2_sr_V, height_m, alpha_rad);
+                    probeBrightness_A_per_m2_sr_V, height_m, alpha_rad, misalignment);
         }
 
         /** Settings without a probe plan. */
@@ -131,19 +147,19 @@ public final class PlanAnalysis {
         /** The same settings with another envelope beam. */
         public Settings withEnvelope(double newCurrent_A, double newEmittance_m_rad) {
             return new Settings(energySpread_eV, newCurrent_A, newEmittance_m_rad, tuneElectrode, runChecks, depth_m,
-                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad);
+                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad, misalignment);
         }
 
         /** The same settings with or without the verification cases. */
         public Settings withChecks(boolean run) {
             return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, run, depth_m,
-                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad);
+                    probeBrightness_A_per_m2_sr_V, objectHeight_m, aperture_rad, misalignment);
         }
 
         /** The same settings with a probe plan for a source of this reduced brightness, A/(m^2 sr V). */
         public Settings withProbeBrightness(double brightness_A_per_m2_sr_V) {
             return new Settings(energySpread_eV, current_A, emittance_m_rad, tuneElectrode, runChecks, depth_m,
-                    OptionalDouble.of(brightness_A_per_m2_sr_V), objectHeight_m, aperture_rad);
+                    OptionalDouble.of(brightness_A_per_m2_sr_V), objectHeight_m, aperture_rad, misalignment);
         }
     }
 
@@ -274,6 +290,19 @@ public final class PlanAnalysis {
                     tuning.tune()));
         }
 
+        Optional<org.axistack.optics.MisalignmentStudy> misalignment = Optional.empty();
+        if (s.misalignment() && o.reflection.isEmpty()) {
+            announce(progress, "decentre and tilt budget", share.checks);
+            double screen = stack.screenZ_m().orElse(o.cardinal.map(CardinalElements::zEnd_m).orElse(Double.NaN));
+            try {
+                misalignment = Optional.of(org.axistack.optics.MisalignmentStudy.run(stack, solution, name, screen,
+                        org.axistack.optics.MisalignmentStudy.DEFAULT_ALLOWED_SHIFT_M, Double.NaN,
+                        org.axistack.optics.MisalignmentStudy.DEFAULT_ALLOWED_GROWTH_M, SolveProgress.NONE));
+            } catch (RuntimeException e) {
+                warnings.add("misalignment budget not computed: " + e.getMessage());
+            }
+        }
+
         List<CheckResult> checks = List.of();
         if (s.runChecks()) {
             boolean[] stopped = {false};
@@ -299,7 +328,7 @@ public final class PlanAnalysis {
         return new LensPlan(stack, source, solution, field, o.reflection, o.cardinal, o.note, o.imaging,
                 o.aberrations, spotInputs, spotRows, rays, rayNote, envelope, envNote, tuning.tune(), tuning.note(),
                 tuning.budgets(), tuning.budgetNote(), Optional.ofNullable(name), sweep, checks, warnings,
-                (System.nanoTime() - t0) * 1e-9, probe, offAxis, o.offAxisNote);
+                (System.nanoTime() - t0) * 1e-9, probe, offAxis, o.offAxisNote, misalignment);
     }
 
     /** The default envelope beam's edge radius: a quarter of the narrowest open bore, m (plan and envelope commands). */
