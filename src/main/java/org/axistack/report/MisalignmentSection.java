@@ -5,6 +5,7 @@ import java.util.List;
 
 import org.axistack.optics.MisalignmentBudget;
 import org.axistack.optics.MisalignmentStudy;
+import org.axistack.plan.LensPlan;
 
 /**
  * The report's misalignment section: per electrode, the central ray's shift and slope at the screen per 0.01 mm
