@@ -41,7 +41,7 @@ public final class OpticsAccuracy {
      * 5e-9, above the estimate but far below the default accuracy asked).
      */
     public static final String SCOPE = "integration and the field's ends; the mesh's own error is not in it:"
-            + " refine [mesh] target_elements to see it";
+            + " set [mesh] accuracy (or --mesh-accuracy) for its estimate";
 
     /** The words before the far field's share of the results, in every statement of the estimate. */
     public static final String FAR_FIELD_WORDS = "; the far field beyond the traced range contributes ";
