@@ -108,14 +108,14 @@ public final class FieldSolution {
         }
         MeshAccuracy a = meshAccuracy;
         String est = Double.isNaN(a.estimate()) ? "not estimated (only one mesh fits under the element cap)"
-                : org.axistack.model.Numbers.scientific(a.estimate(), 1) + " of the largest bias difference";
+                : org.axistack.model.Numbers.estimate(a.estimate()) + " of the largest bias difference";
         String how = a.rungs().size() + " meshes refined by 1/sqrt(2), three times the change of the axial potential from the"
                 + " next coarser one";
         if (a.met()) {
-            return "mesh error estimate " + est + " (requested " + org.axistack.model.Numbers.scientific(a.requested(), 0)
+            return "mesh error estimate " + est + " (requested " + org.axistack.model.Numbers.tolerance(a.requested())
                     + "; " + how + ")";
         }
-        return "mesh error estimate " + est + ", ABOVE the requested " + org.axistack.model.Numbers.scientific(a.requested(), 0)
+        return "mesh error estimate " + est + ", ABOVE the requested " + org.axistack.model.Numbers.tolerance(a.requested())
                 + (a.capped() ? ": refinement stopped at the element cap ([mesh] target_elements " + unknowns()
                         + " unknowns solved); raise the cap or relax the accuracy" : "") + " (" + how + ")";
     }

@@ -311,6 +311,7 @@ public final class LensWindow extends JFrame {
 
     void status(String text) {
         status.setText(text);
+        status.setToolTipText(text); // a long line is cut at the window's edge: the whole of it on hover
     }
 
     /** Installs a freshly solved session: new chart, new bias controls, first view. */
