@@ -83,6 +83,26 @@ public enum PhysicsMessage implements MessageTemplate.Entry {
             + " aberration coefficients need a converging lens", "set biases that focus, or leave out the traced"
             + " aberrations"),
 
+    // probe
+    PROBE_BRIGHTNESS(Kind.REQUEST, "the reduced brightness must be a positive number of A/(m^2 sr V), got {value}",
+            "give the source's reduced brightness from its data sheet or a measurement"),
+    PROBE_ENERGY_SPREAD(Kind.REQUEST, "the energy spread must be finite and >= 0 eV, got {value} eV",
+            "give the source's energy spread (FWHM) in eV, or 0"),
+    PROBE_SOURCE_SIZE(Kind.REQUEST, "the virtual source size must be a positive number of nm, got {value} nm",
+            "give the source's virtual size (FW50), or leave it out to let the aperture angle set the magnification"),
+    PROBE_NOT_CONVERGING(Kind.OUTCOME, "the lens is {kind} at these biases: it forms no real probe",
+            "set biases that focus (tune finds them)"),
+    PROBE_OBJECT_IN_FIELD(Kind.REQUEST, "the object at z = {z} mm lies inside the field (after the object-side reference"
+            + " plane at {plane} mm)", "put the source in field-free space before the lens"),
+    PROBE_NO_REAL_IMAGE(Kind.OUTCOME, "the object at z = {z} mm has no real image (magnification {m}): no probe",
+            "move the object farther from the lens than its focal point, or strengthen the lens"),
+    PROBE_ANGLE_RANGE(Kind.REQUEST, "the aperture angle range must satisfy 0 < min < max, got {min} to {max} mrad",
+            "give two positive angles, the smaller first"),
+    PROBE_CURRENT_RANGE(Kind.REQUEST, "the current range must satisfy 0 < min < max, got {min} to {max} A",
+            "give two positive currents, the smaller first"),
+    PROBE_CURVE_POINTS(Kind.REQUEST, "the probe curve needs 2 to 10000 points, got {points}",
+            "give a point count in that range"),
+
     // tuning
     BIAS_RANGE(Kind.REQUEST, "a bias range needs finite ends with from < to, got {from} V to {to} V",
             "give the lower bias first and make the two different"),

@@ -1,5 +1,6 @@
 package org.axistack.probe;
 
+import org.axistack.model.PhysicsMessage;
 import java.util.OptionalDouble;
 
 /**
@@ -18,15 +19,14 @@ public record ProbeSource(double reducedBrightness_A_per_m2_sr_V, double energyS
 
     public ProbeSource {
         if (!(reducedBrightness_A_per_m2_sr_V > 0) || !Double.isFinite(reducedBrightness_A_per_m2_sr_V)) {
-            throw new IllegalArgumentException("the reduced brightness must be a positive number of A/(m^2 sr V): "
-                    + reducedBrightness_A_per_m2_sr_V);
+            throw PhysicsMessage.PROBE_BRIGHTNESS.exception("value", reducedBrightness_A_per_m2_sr_V);
         }
         if (!(energySpread_eV >= 0) || !Double.isFinite(energySpread_eV)) {
-            throw new IllegalArgumentException("the energy spread must be finite and >= 0 eV: " + energySpread_eV);
+            throw PhysicsMessage.PROBE_ENERGY_SPREAD.exception("value", energySpread_eV);
         }
         if (virtualSourceSize_m.isPresent() && !(virtualSourceSize_m.getAsDouble() > 0
                 && Double.isFinite(virtualSourceSize_m.getAsDouble()))) {
-            throw new IllegalArgumentException("the virtual source size must be > 0: " + virtualSourceSize_m.getAsDouble());
+            throw PhysicsMessage.PROBE_SOURCE_SIZE.exception("value", virtualSourceSize_m.getAsDouble() * 1e9);
         }
     }
 }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.axistack.model.PhysicsMessage;
 import org.axistack.model.PhysicsException;
 import org.axistack.field.FieldSolution;
 import org.axistack.model.Stack;
@@ -60,13 +61,13 @@ public record ProbeStudy(Settings settings, List<Curve> curves, List<String> not
             double currentMax_A, int points) {
         public Settings {
             if (!(alphaMin_rad > 0) || !(alphaMax_rad > alphaMin_rad) || !Double.isFinite(alphaMax_rad)) {
-                throw new IllegalArgumentException("the aperture angle range must satisfy 0 < min < max");
+                throw PhysicsMessage.PROBE_ANGLE_RANGE.exception("min", alphaMin_rad * 1e3, "max", alphaMax_rad * 1e3);
             }
             if (!(currentMin_A > 0) || !(currentMax_A > currentMin_A) || !Double.isFinite(currentMax_A)) {
-                throw new IllegalArgumentException("the current range must satisfy 0 < min < max");
+                throw PhysicsMessage.PROBE_CURRENT_RANGE.exception("min", currentMin_A, "max", currentMax_A);
             }
             if (points < 2 || points > 10_000) {
-                throw new IllegalArgumentException("the curve needs 2..10000 points: " + points);
+                throw PhysicsMessage.PROBE_CURVE_POINTS.exception("points", points);
             }
         }
 

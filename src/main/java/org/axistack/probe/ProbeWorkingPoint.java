@@ -3,6 +3,7 @@ package org.axistack.probe;
 import java.util.List;
 import java.util.OptionalDouble;
 
+import org.axistack.model.PhysicsMessage;
 import org.axistack.model.Particle;
 import org.axistack.optics.AberrationPolynomials;
 import org.axistack.optics.CardinalElements;
@@ -27,14 +28,13 @@ public record ProbeWorkingPoint(String label, List<Double> biases_V, double prob
      * {@link AberrationPolynomials} at the object's magnification (the object must lie at or before the object-side
      * reference plane), U on the image side (at infinity on an open side), the magnification.
      *
-     * @throws IllegalArgumentException when the lens is not converging, or the object lies inside the field
+     * @throws org.axistack.model.PhysicsException when the lens is not converging, or the object lies inside the field
      */
     public static ProbeWorkingPoint of(String label, double[] biases_V, ParaxialOptics optics, OptionalDouble objectZ_m,
             Particle particle) {
         CardinalElements c = optics.cardinal();
         if (c.kind() != CardinalElements.Kind.CONVERGING) {
-            throw new IllegalArgumentException("the lens is " + c.kind().name().toLowerCase(java.util.Locale.ROOT)
-                    + ": no real probe");
+            throw PhysicsMessage.PROBE_NOT_CONVERGING.exception("kind", c.kind().name().toLowerCase(java.util.Locale.ROOT));
         }
         AberrationPolynomials poly = AberrationPolynomials.of(optics);
         double m = 0;
@@ -42,16 +42,12 @@ public record ProbeWorkingPoint(String label, List<Double> biases_V, double prob
         if (objectZ_m.isPresent()) {
             double zo = objectZ_m.getAsDouble();
             if (zo > optics.zStart_m()) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                        "the object at z = %.3f mm lies inside the field (after the object-side reference plane at %.3f mm):"
-                                + " the probe model needs the source in field-free space before the lens", zo * 1e3,
-                        optics.zStart_m() * 1e3));
+                throw PhysicsMessage.PROBE_OBJECT_IN_FIELD.exception("z", zo * 1e3, "plane", optics.zStart_m() * 1e3);
             }
             m = c.magnification(zo);
             probeZ = c.imageZ_m(zo);
             if (!(m < 0) || !Double.isFinite(probeZ)) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                        "the object at z = %.3f mm has no real image (magnification %.4g): no probe", zo * 1e3, m));
+                throw PhysicsMessage.PROBE_NO_REAL_IMAGE.exception("z", zo * 1e3, "m", m);
             }
         }
         double uImage = c.uImage_V(); // at infinity on an open image side

@@ -20,6 +20,7 @@ import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 
+import org.axistack.model.PhysicsException;
 import org.axistack.model.Stack;
 import org.axistack.probe.ProbeSource;
 import org.axistack.report.ProbeChart;
@@ -123,7 +124,7 @@ final class ProbePanel extends JPanel {
             String d = sourceSizeField.getText().trim();
             typed = new ProbeSource(b, de, d.isEmpty() ? OptionalDouble.empty()
                     : OptionalDouble.of(Double.parseDouble(d) * 1e-9));
-        } catch (IllegalArgumentException ex) {
+        } catch (IllegalArgumentException | PhysicsException ex) {
             status.accept("probe: type a reduced brightness > 0 in A/(m^2 sr V), an energy spread >= 0 in eV and a"
                     + " virtual source size > 0 in nm (or leave it blank)");
             showSource(); // back to the values in use

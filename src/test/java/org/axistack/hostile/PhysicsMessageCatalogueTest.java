@@ -25,6 +25,10 @@ import org.axistack.model.Particle;
 import org.axistack.model.PhysicsException;
 import org.axistack.model.PhysicsMessage;
 import org.axistack.model.Stack;
+import org.axistack.optics.ParaxialOptics;
+import org.axistack.probe.ProbeSource;
+import org.axistack.probe.ProbeStudy;
+import org.axistack.probe.ProbeWorkingPoint;
 import org.axistack.trace.ElectrodeGeometry;
 import org.axistack.trace.FieldMap;
 import org.axistack.trace.RaySet;
@@ -117,6 +121,18 @@ class PhysicsMessageCatalogueTest {
                 OptionalDouble.empty()));
         c.put(PhysicsMessage.ABERRATION_NOT_CONVERGING, () -> TracedAberrations.measure(freeDrift, EL, 100, 0, 0.06,
                 1e-3, OptionalDouble.empty()));
+        ProbeSource source = new ProbeSource(1e7, 1, OptionalDouble.empty());
+        c.put(PhysicsMessage.PROBE_BRIGHTNESS, () -> new ProbeSource(-1, 1, OptionalDouble.empty()));
+        c.put(PhysicsMessage.PROBE_ENERGY_SPREAD, () -> new ProbeSource(1e7, Double.NaN, OptionalDouble.empty()));
+        c.put(PhysicsMessage.PROBE_SOURCE_SIZE, () -> new ProbeSource(1e7, 1, OptionalDouble.of(0)));
+        c.put(PhysicsMessage.PROBE_ANGLE_RANGE, () -> new ProbeStudy.Settings(source, 2e-3, 1e-3, 1e-12, 1e-6, 10));
+        c.put(PhysicsMessage.PROBE_CURRENT_RANGE, () -> new ProbeStudy.Settings(source, 1e-3, 2e-3, 1e-6, 1e-12, 10));
+        c.put(PhysicsMessage.PROBE_CURVE_POINTS, () -> new ProbeStudy.Settings(source, 1e-3, 2e-3, 1e-12, 1e-6, 1));
+        // the demo's focus electrode: at 0 V no lens (afocal), at -30 V a weak lens whose focal point lies far before
+        // the field, so an object between it and the lens has a virtual image; at its stored bias a real one
+        c.put(PhysicsMessage.PROBE_NOT_CONVERGING, () -> workingPoint(0, OptionalDouble.empty()));
+        c.put(PhysicsMessage.PROBE_OBJECT_IN_FIELD, () -> workingPoint(demo.biases_V()[1], OptionalDouble.of(0)));
+        c.put(PhysicsMessage.PROBE_NO_REAL_IMAGE, () -> workingPoint(-30, OptionalDouble.of(-0.06)));
         c.put(PhysicsMessage.BIAS_RANGE, () -> new BiasRange(100, -100));
         c.put(PhysicsMessage.UNKNOWN_ELECTRODE, () -> BiasSweep.run(solution, demo, "no-such", 0, 100, 2,
                 OptionalDouble.empty(), null));
@@ -131,6 +147,13 @@ class PhysicsMessageCatalogueTest {
         c.put(PhysicsMessage.IMAGE_PLANE, () -> FocusTarget.parallelBeam(Double.NaN));
         c.put(PhysicsMessage.OBJECT_AFTER_IMAGE, () -> FocusTarget.object(0.3, 0.2));
         return c;
+    }
+
+    private static ProbeWorkingPoint workingPoint(double focus_V, OptionalDouble objectZ_m) {
+        double[] b = demo.biases_V().clone();
+        b[1] = focus_V;
+        ParaxialOptics optics = ParaxialOptics.of(solution.withBiases(b), demo);
+        return ProbeWorkingPoint.of("test", b, optics, objectZ_m, demo.beam().particle());
     }
 
     @Test
