@@ -282,24 +282,14 @@ public record MisalignmentAberrations(double imageZ_m, boolean parallel, double 
         public double[] computeDerivatives(double z, double[] y) {
             double[] d = new double[5];
             p.derivatives(z, 4, d);
-            double u = d[0];
-            if (!(u > 0)) {
-                throw new ReflectionException(new Reflection(z, Double.NaN));
-            }
-            double g = 1 + u * inverseRest;
-            double gp = d[1] * inverseRest;
-            double uStar = u * (1 + 0.5 * u * inverseRest);
-            double aa = -g * d[2] / 4;
-            double aap = -(g * d[3] + gp * d[2]) / 4;
-            double bb = g * d[4] / 64 + d[2] * d[2] * inverseRest / 32;
-            double uStarP = g * d[1];
+            ThirdOrderTerms f = ThirdOrderTerms.of(d, inverseRest, z);
+            double g = f.g();
+            double gp = f.gp();
+            double uStar = f.uStar();
+            double aa = f.aa();
+            double uStarP = f.uStarP();
             double pp = uStarP / (2 * uStar);
             double qq = -aa / uStar;
-            // F3 = c1 |w|^2 w + c2 |w|^2 w' + c3 |w'|^2 w + c4 |w'|^2 w' (as OffAxisAberrations)
-            double c1 = (4 * bb - 2 * aa * aa / uStar) / (2 * uStar);
-            double c2 = (-aap + aa * uStarP / uStar) / (2 * uStar);
-            double c3 = aa / uStar;
-            double c4 = -uStarP / (2 * uStar);
             double s = y[0];
             double sp = y[1];
             double[] dy = new double[dim];
@@ -321,10 +311,7 @@ public record MisalignmentAberrations(double imageZ_m, boolean parallel, double 
                 dy[i] = cp;
                 dy[i + 1] = -pp * cp - qq * c + d1 * half;
                 Arrays.fill(mono, 0);
-                OffAxisAberrations.expand(c, s, c, s, c1, mono);
-                OffAxisAberrations.expand(c, s, cp, sp, c2, mono);
-                OffAxisAberrations.expand(cp, sp, c, s, c3, mono);
-                OffAxisAberrations.expand(cp, sp, cp, sp, c4, mono);
+                f.addMonomials(c, cp, s, sp, mono);
                 double x2 = d3 * s * s - d1p * s * sp / 2 - d1 * lin;
                 double x0 = 2 * d3 * s * s - d1p * s * sp / 2 - d1 * aa * s * s / uStar + d1 * sp * sp - d1 * lin;
                 dy[i + 2] = y[i + 3];
@@ -333,10 +320,7 @@ public record MisalignmentAberrations(double imageZ_m, boolean parallel, double 
                 dy[i + 5] = -pp * y[i + 5] - qq * y[i + 4] + mono[3] + x2 * half;
             }
             Arrays.fill(mono, 0);
-            OffAxisAberrations.expand(0, s, 0, s, c1, mono);
-            OffAxisAberrations.expand(0, s, 0, sp, c2, mono);
-            OffAxisAberrations.expand(0, sp, 0, s, c3, mono);
-            OffAxisAberrations.expand(0, sp, 0, sp, c4, mono);
+            f.addMonomials(0, 0, s, sp, mono);
             dy[dim - 2] = y[dim - 1];
             dy[dim - 1] = -pp * y[dim - 1] - qq * y[dim - 2] + mono[5];
             return dy;

@@ -140,28 +140,12 @@ public record OffAxisAberrations(double objectZ_m, double imageZ_m, double magni
                     double s = m.b();
                     double sp = m.d();
                     p.derivatives(z, 4, d);
-                    double u = d[0];
-                    if (!(u > 0)) {
-                        throw new ReflectionException(new Reflection(z, Double.NaN));
-                    }
-                    double g = 1 + u * inverseRest;
-                    double gp = d[1] * inverseRest;
-                    double uStar = u * (1 + 0.5 * u * inverseRest);
-                    double aa = -g * d[2] / 4;
-                    double aap = -(g * d[3] + gp * d[2]) / 4;
-                    double bb = g * d[4] / 64 + d[2] * d[2] * inverseRest / 32;
-                    double uStarP = g * d[1];
-                    // F3 = c1 |w|^2 w + c2 |w|^2 w' + c3 |w'|^2 w + c4 |w'|^2 w'
-                    double c1 = (4 * bb - 2 * aa * aa / uStar) / (2 * uStar);
-                    double c2 = (-aap + aa * uStarP / uStar) / (2 * uStar);
-                    double c3 = aa / uStar;
-                    double c4 = -uStarP / (2 * uStar);
+                    ThirdOrderTerms f = ThirdOrderTerms.of(d, inverseRest, z);
+                    double g = f.g();
+                    double uStar = f.uStar();
                     double weight = w * s * Math.sqrt(uStar);
                     java.util.Arrays.fill(mono, 0);
-                    expand(t, s, t, s, c1, mono);
-                    expand(t, s, tp, sp, c2, mono);
-                    expand(tp, sp, t, s, c3, mono);
-                    expand(tp, sp, tp, sp, c4, mono);
+                    f.addMonomials(t, tp, s, sp, mono);
                     for (int k = 0; k < 6; k++) {
                         acc[k] += weight * mono[k] * powers[k];
                     }
