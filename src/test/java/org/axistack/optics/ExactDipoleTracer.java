@@ -1,12 +1,7 @@
 package org.axistack.optics;
 
 import org.axistack.field.AxialField;
-import org.axistack.model.Codata2018;
 import org.axistack.model.Particle;
-import org.hipparchus.ode.ODEState;
-import org.hipparchus.ode.ODEStateAndDerivative;
-import org.hipparchus.ode.OrdinaryDifferentialEquation;
-import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 
 /**
  * Slow, independent reference for the misalignment-aberration tests: exact relativistic skew rays (Lorentz force,
@@ -19,7 +14,6 @@ import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
  */
 final class ExactDipoleTracer {
 
-    private static final double C = Codata2018.SPEED_OF_LIGHT_M_PER_S;
     /** 1 / (4^k k! (k + 1)!), k = 0..3, with the sign (-1)^k. */
     private static final double[] COEFF = {1, -1.0 / 8, 1.0 / 192, -1.0 / 9216};
 
@@ -70,37 +64,6 @@ final class ExactDipoleTracer {
 
     /** {x, y, dx/dz, dy/dz} at z1 of the ray given at z0, kinetic energy t0_eV where the potential is 0 V. */
     double[] trace(double z0, double x0, double y0, double sx0, double sy0, double t0_eV, double z1, double eps) {
-        double[] e = new double[3];
-        double q = particle.charge_C();
-        double mc2 = particle.mass_kg() * C * C;
-        double phi0 = field(x0, y0, z0, eps, e);
-        double kinetic = t0_eV * Codata2018.ELEMENTARY_CHARGE_C - q * phi0;
-        double gamma = 1 + kinetic / mc2;
-        double pNorm = Math.sqrt(gamma * gamma - 1);
-        double pz = pNorm / Math.sqrt(1 + sx0 * sx0 + sy0 * sy0);
-        double qOverMc2 = q / mc2;
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            private final double[] ef = new double[3];
-
-            @Override
-            public int getDimension() {
-                return 5;
-            }
-
-            @Override
-            public double[] computeDerivatives(double z, double[] y) {
-                field(y[0], y[1], z, eps, ef);
-                double g = Math.sqrt(1 + y[2] * y[2] + y[3] * y[3] + y[4] * y[4]);
-                double k = qOverMc2 * g / y[4];
-                return new double[] {y[2] / y[4], y[3] / y[4], k * ef[0], k * ef[1], k * ef[2]};
-            }
-        };
-        double len = Math.abs(z1 - z0);
-        DormandPrince853Integrator integ = new DormandPrince853Integrator(len * 1e-14, len / 100,
-                new double[] {1e-18, 1e-18, 1e-18, 1e-18, 1e-18}, new double[] {1e-13, 1e-13, 1e-13, 1e-13, 1e-13});
-        ODEStateAndDerivative end = integ.integrate(ode,
-                new ODEState(z0, new double[] {x0, y0, pz * sx0, pz * sy0, pz}), z1);
-        double[] y = end.getPrimaryState();
-        return new double[] {y[0], y[1], y[2] / y[4], y[3] / y[4]};
+        return ExactSkewTracer.trace(particle, (x, y, z, e) -> field(x, y, z, eps, e), z0, x0, y0, sx0, sy0, t0_eV, z1);
     }
 }
