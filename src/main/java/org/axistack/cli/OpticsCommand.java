@@ -145,6 +145,7 @@ final class OpticsCommand implements Callable<Integer> {
         out.put("plane_sensitivity", c.planeSensitivity());
         out.put("far_field_share", c.farFieldShare());
         out.put("error_estimate", c.errorEstimate());
+        out.put("mesh_error", field.solution().meshErrorStatement());
         out.put("accuracy_requested", accuracy);
         out.put("object_z_mm", objectZ.isPresent() ? mm(objectZ.getAsDouble()) : null);
         out.put("focal_length_object_mm", mm(c.focalLengthObject_m()));
@@ -281,6 +282,7 @@ final class OpticsCommand implements Callable<Integer> {
                 + ((Double) out.get("far_field_share") > 0
                         ? org.axistack.optics.OpticsAccuracy.FAR_FIELD_WORDS + Numbers.estimate((Double) out.get("far_field_share"))
                         : org.axistack.optics.OpticsAccuracy.PLANE_WORDS + Numbers.estimate((Double) out.get("plane_sensitivity"))));
+        w.println("  " + out.get("mesh_error"));
         w.println("                      object side       image side");
         row(w, "focal length f1, f2", out.get("focal_length_object_mm"), out.get("focal_length_image_mm"));
         row(w, "focal point F1, F2", out.get("focal_point_object_z_mm"), out.get("focal_point_image_z_mm"));

@@ -40,8 +40,8 @@ public final class OpticsAccuracy {
      * boundary-element discretisation (on the demo and the open three-plate lens a doubled mesh moves f by about
      * 5e-9, above the estimate but far below the default accuracy asked).
      */
-    public static final String SCOPE = "integration and the field's ends; the mesh's own error is not in it:"
-            + " set [mesh] accuracy (or --mesh-accuracy) for its estimate";
+    public static final String SCOPE = "integration and the field's ends; the mesh's own error is not in it and is"
+            + " stated on its own";
 
     /** The words before the far field's share of the results, in every statement of the estimate. */
     public static final String FAR_FIELD_WORDS = "; the far field beyond the traced range contributes ";
